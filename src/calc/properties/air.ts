@@ -1,0 +1,131 @@
+/**
+ * Dry-air properties at any site pressure, −50…150 °C.
+ *
+ * Density: ideal gas with R = 287.05 J/(kg·K). Viscosity and thermal conductivity: Lemmon &
+ * Jacobsen (2004), dilute-gas plus residual terms with the reduced density of the ideal gas
+ * (the critical enhancement is negligible this far from the critical point and is left out).
+ * cp: linear interpolation in a handbook table (see CP_TABLE). β = 1/T (ideal gas).
+ */
+import { M_AIR, R_AIR, R_UNIVERSAL } from "../constants";
+
+export interface AirProperties {
+  /** Temperature, K. */
+  T_K: number;
+  /** Pressure, Pa. */
+  p_Pa: number;
+  rho_kg_m3: number;
+  cp_J_kgK: number;
+  mu_Pa_s: number;
+  k_W_mK: number;
+  Pr: number;
+  nu_m2_s: number;
+  alpha_m2_s: number;
+  beta_1_K: number;
+}
+
+/** Validity range of the property model, K (the contract's −50…150 °C). */
+export const AIR_T_MIN_K = 223.15;
+export const AIR_T_MAX_K = 423.15;
+
+// Lemmon & Jacobsen (2004), Table 1 and 3, air: reducing parameters and collision integral.
+const TC = 132.6312; // K
+const RHOC = 10.4477; // mol/dm³
+const SIGMA_NM = 0.36; // Lennard-Jones size, nm
+const EPS_K = 103.3; // ε/k, K
+const OMEGA_B = [0.431, -0.4623, 0.08406, 0.005341, -0.00331];
+// Residual viscosity terms: N, t, d, l (γ = 1 when l ≠ 0).
+const VISC_RES: ReadonlyArray<readonly [number, number, number, number]> = [
+  [10.72, 0.2, 1, 0],
+  [1.122, 0.05, 4, 0],
+  [0.002019, 2.4, 9, 0],
+  [-8.876, 0.6, 1, 1],
+  [-0.02916, 3.6, 8, 1],
+];
+// Dilute-gas conductivity terms N1..N3 (t2, t3) and residual terms N4..N9 (t, d, l).
+const COND_N1 = 1.308;
+const COND_N2 = 1.405;
+const COND_T2 = -1.1;
+const COND_N3 = -1.036;
+const COND_T3 = -0.3;
+const COND_RES: ReadonlyArray<readonly [number, number, number, number]> = [
+  [8.743, 0.1, 1, 0],
+  [14.76, 0.0, 2, 0],
+  [-16.62, 0.5, 3, 2],
+  [3.793, 2.7, 7, 2],
+  [-6.142, 0.3, 7, 2],
+  [-0.3778, 1.3, 11, 2],
+];
+
+/**
+ * cp of dry air at atmospheric pressure, J/(kg·K), tabulated every 50 K.
+ * Source (from memory): Incropera, DeWitt, Bergman & Lavine, Fundamentals of Heat and Mass Transfer,
+ * Table A.4 (air at atmospheric pressure).
+ */
+const CP_TABLE_T = [100, 150, 200, 250, 300, 350, 400, 450, 500, 550, 600];
+const CP_TABLE_V = [1032, 1012, 1007, 1006, 1007, 1009, 1014, 1021, 1030, 1040, 1051];
+
+/** cp by linear interpolation in CP_TABLE (held constant beyond the table's ends). */
+export function cpAirTable(T_K: number): number {
+  if (T_K <= CP_TABLE_T[0]) return CP_TABLE_V[0];
+  const n = CP_TABLE_T.length;
+  if (T_K >= CP_TABLE_T[n - 1]) return CP_TABLE_V[n - 1];
+  const i = Math.min(n - 2, Math.floor((T_K - CP_TABLE_T[0]) / 50));
+  const f = (T_K - CP_TABLE_T[i]) / 50;
+  return CP_TABLE_V[i] + f * (CP_TABLE_V[i + 1] - CP_TABLE_V[i]);
+}
+
+/** Dilute-gas viscosity of air, Pa·s: η0 = 0.0266958 √(M T) / (σ² Ω(T*)) μPa·s. */
+export function muAirDiluteLemmonJacobsen(T_K: number): number {
+  const lnTs = Math.log(T_K / EPS_K);
+  const lnOmega =
+    OMEGA_B[0] + lnTs * (OMEGA_B[1] + lnTs * (OMEGA_B[2] + lnTs * (OMEGA_B[3] + lnTs * OMEGA_B[4])));
+  return (0.0266958 * Math.sqrt(M_AIR * T_K)) / (SIGMA_NM * SIGMA_NM * Math.exp(lnOmega)) * 1e-6;
+}
+
+function residual(
+  terms: ReadonlyArray<readonly [number, number, number, number]>,
+  tau: number,
+  delta: number,
+): number {
+  let s = 0;
+  for (const [N, t, d, l] of terms) {
+    const e = l === 0 ? 1 : Math.exp(-Math.pow(delta, l));
+    s += N * Math.pow(tau, t) * Math.pow(delta, d) * e;
+  }
+  return s;
+}
+
+/**
+ * Dry-air properties at temperature T_K and pressure p_Pa.
+ * @param T_K temperature, K
+ * @param p_Pa absolute pressure, Pa
+ * @returns density, cp, μ, k, Pr, ν, α, β
+ * Validity: 223.15…423.15 K (−50…150 °C); callers warn outside it.
+ * @example airProperties(300, 1e5).nu_m2_s ≈ 1.589e-5 (Incropera Table A.4, 300 K, from memory)
+ * @see E. W. Lemmon, R. T. Jacobsen, "Viscosity and thermal conductivity equations for nitrogen,
+ *   oxygen, argon, and air", Int. J. Thermophys. 25 (2004) 21–69.
+ */
+export function airProperties(T_K: number, p_Pa: number): AirProperties {
+  const rho = p_Pa / (R_AIR * T_K);
+  // Reduced density on the molar basis of Lemmon & Jacobsen (mol/dm³), from the same ideal gas.
+  const delta = p_Pa / (R_UNIVERSAL * T_K) / 1000 / RHOC;
+  const tau = TC / T_K;
+  const eta0 = muAirDiluteLemmonJacobsen(T_K);
+  const mu = eta0 + residual(VISC_RES, tau, delta) * 1e-6;
+  const lambda0 =
+    COND_N1 * (eta0 * 1e6) + COND_N2 * Math.pow(tau, COND_T2) + COND_N3 * Math.pow(tau, COND_T3);
+  const k = (lambda0 + residual(COND_RES, tau, delta)) * 1e-3;
+  const cp = cpAirTable(T_K);
+  return {
+    T_K,
+    p_Pa,
+    rho_kg_m3: rho,
+    cp_J_kgK: cp,
+    mu_Pa_s: mu,
+    k_W_mK: k,
+    Pr: (cp * mu) / k,
+    nu_m2_s: mu / rho,
+    alpha_m2_s: k / (rho * cp),
+    beta_1_K: 1 / T_K,
+  };
+}

@@ -1,0 +1,40 @@
+/** Long-wave radiation: linearised coefficient, sky temperature and sky view factor. */
+import { SIGMA } from "../constants";
+
+/**
+ * Linearised radiative coefficient between a grey surface and large surroundings:
+ * h_r = εσ(T_s² + T_r²)(T_s + T_r).
+ * @param Ts surface temperature, K
+ * @param Tr radiant temperature of the surroundings, K
+ * @param emissivity surface emissivity, 0…1
+ * @example ε 1, T_s = T_r = 283.15 K → 5.15 W/m²K (ISO 6946 h_r0 at 10 °C: 5.1)
+ * @see ISO 6946:2017, annex C (h_r = ε h_r0, h_r0 = 4σT_m³); Incropera et al., eq. 1.9.
+ */
+export function hRadiation(Ts: number, Tr: number, emissivity: number): number {
+  return emissivity * SIGMA * (Ts * Ts + Tr * Tr) * (Ts + Tr);
+}
+
+/**
+ * Clear-sky temperature, Swinbank: T_sky = 0.0552 T_air^1.5 (kelvin).
+ * @param Tair screen-level air temperature, K
+ * @example 268.15 K → 242.4 K (−30.8 °C)
+ * @see W. C. Swinbank, "Long-wave radiation from clear skies", Q. J. R. Meteorol. Soc. 89 (1963)
+ *   339–348.
+ */
+export function skyTemperatureSwinbank(Tair: number): number {
+  return 0.0552 * Math.pow(Tair, 1.5);
+}
+
+/**
+ * View factor from a tilted plane to the sky dome: F_sky = (1 + cos tilt)/2.
+ * @param tiltDeg tilt from the horizontal, degrees (0 faces up)
+ * @see J. A. Duffie, W. A. Beckman, Solar Engineering of Thermal Processes (4th ed.), §3.16.
+ */
+export function skyViewFactor(tiltDeg: number): number {
+  return (1 + Math.cos((tiltDeg * Math.PI) / 180)) / 2;
+}
+
+/** Mean radiant temperature of sky and ground: T_r⁴ = F_sky T_sky⁴ + (1 − F_sky) T_ground⁴, K. */
+export function radiantTemperature(Fsky: number, Tsky: number, Tground: number): number {
+  return Math.pow(Fsky * Tsky ** 4 + (1 - Fsky) * Tground ** 4, 0.25);
+}

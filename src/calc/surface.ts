@@ -1,0 +1,158 @@
+/**
+ * One external surface for one design case: wind at the surface, exterior convection by the
+ * chosen method, long-wave radiation to sky and ground, and the outside-face energy balance
+ * (T_inside − T_s)/(R_si + R) + α·G = h_c (T_s − T_out) + h_r (T_s − T_r), solved for T_s.
+ */
+import { T0 } from "./constants";
+import { hcIso6946, hcMcAdams } from "./convection/empirical";
+import { airProperties } from "./properties/air";
+import { hRadiation, radiantTemperature, skyTemperatureSwinbank, skyViewFactor } from "./radiation/radiation";
+import { air, type Warnings } from "./kinds/common";
+import { plateCombinedCore } from "./kinds/external";
+import { windAtHeight } from "./kinds/wind";
+import type { Terrain } from "./wind/wind-profile";
+import { isWindward } from "./wind/wind-profile";
+import { solveFixedPoint } from "./solve";
+import { addWarning } from "./validity";
+
+export type ExteriorMethod = "boundary_layer" | "iso6946" | "mcadams";
+export const EXTERIOR_METHODS: readonly ExteriorMethod[] = ["boundary_layer", "iso6946", "mcadams"];
+
+export interface SurfaceInput {
+  area_m2: number;
+  tilt_deg: number;
+  azimuth_deg: number;
+  height_m: number;
+  length_m: number;
+  panel_height_m: number;
+  R_construction_m2K_W: number;
+  R_si_m2K_W: number;
+  T_inside_C: number;
+  T_outside_C: number;
+  V_met_m_s: number;
+  wind_from_deg: number;
+  terrain: Terrain;
+  law: "power" | "log";
+  met_height_m: number;
+  emissivity: number;
+  absorptance: number;
+  solar_W_m2: number;
+  method: ExteriorMethod;
+  leeward_factor: number;
+  pressure_Pa: number;
+}
+
+export interface SurfaceResult {
+  V_local_m_s: number;
+  V_surface_m_s: number;
+  windward: boolean;
+  h_c_W_m2K: number;
+  h_r_W_m2K: number;
+  h_o_W_m2K: number;
+  T_surface_C: number;
+  T_sky_C: number;
+  T_radiant_C: number;
+  F_sky: number;
+  T_solair_C: number;
+  U_W_m2K: number;
+  q_W_m2: number;
+  Q_W: number;
+  regime: string;
+  correlation: string;
+  /** Boundary-layer method only: the parts of the combined coefficient. */
+  Re?: number;
+  Ri?: number | null;
+  Nu_forced?: number;
+  Nu_natural?: number;
+  iterations: number;
+}
+
+const TOL_K = 1e-4;
+
+/** Solves the outside-face balance and returns every output of the `surface` kind. */
+export function surfaceCore(s: SurfaceInput, warnings: Warnings): SurfaceResult {
+  const wind = windAtHeight(s.V_met_m_s, s.height_m, s.terrain, s.law, s.met_height_m, warnings);
+  const windward = isWindward(s.wind_from_deg, s.azimuth_deg, s.tilt_deg);
+  const Vs = windward ? wind.V_m_s : s.leeward_factor * wind.V_m_s;
+  const Tin = s.T_inside_C + T0;
+  const To = s.T_outside_C + T0;
+  const Rin = s.R_si_m2K_W + s.R_construction_m2K_W;
+  const solar = s.absorptance * s.solar_W_m2;
+  const Tsky = skyTemperatureSwinbank(To);
+  const Fsky = skyViewFactor(s.tilt_deg);
+  const Tr = radiantTemperature(Fsky, Tsky, To);
+  const p = s.pressure_Pa;
+
+  const hcFixed = s.method === "iso6946" ? hcIso6946(Vs) : s.method === "mcadams" ? hcMcAdams(Vs) : -1;
+  const hcAt = (Ts: number): number =>
+    hcFixed >= 0
+      ? hcFixed
+      : plateCombinedCore(airProperties((Ts + To) / 2, p), Ts, To, Vs, s.length_m, s.tilt_deg, s.panel_height_m, null)
+          .h_W_m2K;
+  // Fixed-point map: T_s from the linearised balance with h_c and h_r taken at the previous T_s.
+  const next = (Ts: number): number => {
+    const hc = hcAt(Ts);
+    const hr = hRadiation(Ts, Tr, s.emissivity);
+    return (Tin / Rin + solar + hc * To + hr * Tr) / (1 / Rin + hc + hr);
+  };
+  // The balance residual falls monotonically with T_s, so the root lies in [lo, hi].
+  const lo = Math.min(Tin, To, Tr);
+  const hi = Math.max(Tin, To, Tr) + solar * Rin;
+  const solved = solveFixedPoint(next, lo, hi, To, TOL_K);
+  if (!solved.converged) addWarning(warnings, "not_converged", "the surface balance did not converge to 0.001 K");
+  const iterations = solved.iterations;
+  const x = solved.x;
+
+  const Ts = x;
+  air((Ts + To) / 2, p, warnings, "T_film_C");
+  let hc: number;
+  let regime = "empirical";
+  let correlation = s.method === "iso6946" ? "iso6946-simplified" : "mcadams-wind";
+  const extra: Partial<SurfaceResult> = {};
+  if (hcFixed >= 0) {
+    hc = hcFixed;
+  } else {
+    const c = plateCombinedCore(airProperties((Ts + To) / 2, p), Ts, To, Vs, s.length_m, s.tilt_deg, s.panel_height_m, warnings);
+    hc = c.h_W_m2K;
+    regime = c.regime;
+    correlation = c.correlation;
+    extra.Re = c.forced.Re;
+    extra.Ri = c.Ri;
+    extra.Nu_forced = c.Nu_forced;
+    extra.Nu_natural = c.Nu_natural;
+  }
+  const hr = hRadiation(Ts, Tr, s.emissivity);
+  const ho = hc + hr;
+  const q = (Tin - Ts) / Rin;
+  let Tsolair: number;
+  let U: number;
+  if (ho > 0) {
+    Tsolair = (hc * To + hr * Tr + solar) / ho;
+    U = 1 / (Rin + 1 / ho);
+  } else {
+    // No exterior exchange at all (ε = 0 and no convection): the face is adiabatic.
+    addWarning(warnings, "no_exterior_exchange", "h_o is 0: the outside face exchanges no heat; U is 0");
+    Tsolair = Ts;
+    U = 0;
+  }
+  return {
+    V_local_m_s: wind.V_m_s,
+    V_surface_m_s: Vs,
+    windward,
+    h_c_W_m2K: hc,
+    h_r_W_m2K: hr,
+    h_o_W_m2K: ho,
+    T_surface_C: Ts - T0,
+    T_sky_C: Tsky - T0,
+    T_radiant_C: Tr - T0,
+    F_sky: Fsky,
+    T_solair_C: Tsolair - T0,
+    U_W_m2K: U,
+    q_W_m2: q,
+    Q_W: q * s.area_m2,
+    regime,
+    correlation,
+    ...extra,
+    iterations,
+  };
+}
