@@ -1,0 +1,41 @@
+import type { Metadata, Viewport } from "next";
+import localFont from "next/font/local";
+import type { ReactNode } from "react";
+import { AppShell } from "@/components/shell/app-shell";
+import { themeScript } from "@/components/shell/theme";
+import "./globals.css";
+
+// Inter (variable weight), shipped in the repository: builds never reach the internet.
+const inter = localFont({
+  src: "./fonts/inter-latin-wght-normal.woff2",
+  weight: "100 900",
+  style: "normal",
+  variable: "--font-inter",
+  display: "swap",
+});
+
+export const metadata: Metadata = {
+  title: { default: "Filmsheet", template: "%s · Filmsheet" },
+  description: "Outside film coefficients, surface temperatures, U-values and heat flows for building-services schedules.",
+};
+
+export const viewport: Viewport = {
+  themeColor: [
+    { media: "(prefers-color-scheme: light)", color: "#fdfcfa" },
+    { media: "(prefers-color-scheme: dark)", color: "#181c22" },
+  ],
+};
+
+export default function RootLayout({ children }: { children: ReactNode }) {
+  return (
+    // The theme script sets data-theme before hydration, hence suppressHydrationWarning.
+    <html lang="en" className={inter.variable} suppressHydrationWarning>
+      <head>
+        <script dangerouslySetInnerHTML={{ __html: themeScript }} />
+      </head>
+      <body>
+        <AppShell>{children}</AppShell>
+      </body>
+    </html>
+  );
+}

@@ -1,0 +1,62 @@
+// The local services both commands run beside the app: the mail inbox and the Stripe stand-in,
+// plus the settings that tie them together.
+import { randomBytes } from "node:crypto";
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
+import { join } from "node:path";
+import { ROOT, baseEnv } from "./bootstrap.mjs";
+import { startService, waitForHttp } from "./proc.mjs";
+
+export const DEFAULT_DEMO_PASSWORD = "filmsheet-demo";
+export const DEMO_ACCOUNTS = [
+  ["admin@demo.filmsheet.test", "firm admin"],
+  ["consultant@demo.filmsheet.test", "consultant"],
+  ["checker@demo.filmsheet.test", "checker"],
+  ["viewer@demo.filmsheet.test", "viewer"],
+  ["admin@other.filmsheet.test", "firm admin of a second firm"],
+];
+
+export function portFromEnv(name, fallback) {
+  const raw = process.env[name];
+  if (raw === undefined || raw === "") return fallback;
+  const port = Number(raw);
+  if (!Number.isInteger(port) || port < 1 || port > 65535) throw new Error(`${name} must be a port number, got "${raw}"`);
+  return port;
+}
+
+/** AUTH_SECRET from the environment, or one generated once and kept in .data (git-ignored). */
+export function authSecret() {
+  if (process.env.AUTH_SECRET) return process.env.AUTH_SECRET;
+  const file = join(ROOT, ".data", "auth-secret");
+  if (!existsSync(file)) {
+    mkdirSync(join(ROOT, ".data"), { recursive: true });
+    writeFileSync(file, randomBytes(32).toString("base64url"), { mode: 0o600 });
+  }
+  return readFileSync(file, "utf8").trim();
+}
+
+export function startStripeStandIn(port) {
+  const service = startService("stripe stand-in", process.execPath, ["--import", "tsx", join(ROOT, "scripts/stripe-stand-in.ts")], {
+    cwd: ROOT,
+    env: baseEnv({ STRIPE_STAND_IN_PORT: String(port) }),
+  });
+  return { service, ready: () => waitForHttp(`http://127.0.0.1:${port}/health`, { service, accept: (s) => s === 200 }) };
+}
+
+export function startMaildev(smtpPort, webPort) {
+  const service = startService(
+    "maildev",
+    join(ROOT, "node_modules/.bin/maildev"),
+    ["--ip", "127.0.0.1", "--web-ip", "127.0.0.1", "--smtp", String(smtpPort), "--web", String(webPort), "--silent"],
+    { cwd: ROOT, env: { ...baseEnv(), NODE_NO_WARNINGS: "1" } },
+  );
+  return { service, ready: () => waitForHttp(`http://127.0.0.1:${webPort}/api/healthz`, { service, accept: (s) => s === 200 }) };
+}
+
+/** `next start` on 127.0.0.1 with the given environment; ready when /api/health says ok. */
+export function startApp(port, env) {
+  const service = startService("next", join(ROOT, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(port)], {
+    cwd: ROOT,
+    env: baseEnv({ NODE_ENV: "production", PORT: String(port), ...env }),
+  });
+  return { service, ready: () => waitForHttp(`http://127.0.0.1:${port}/api/health`, { service, accept: (s) => s === 200, timeoutMs: 90000 }) };
+}

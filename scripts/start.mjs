@@ -1,0 +1,100 @@
+// `npm start`: installs what is missing, starts PostgreSQL, the mail inbox and the Stripe
+// stand-in, migrates and seeds, builds and serves the app. Ctrl-C stops all of it.
+import { DB_USER, clusterDir, databaseUrl, ensureBuild, ensureDatabase, ensureNodeModules, ensurePostgres, knex, startCluster, stopCluster } from "./lib/bootstrap.mjs";
+import { assertPortFree, step, stopService } from "./lib/proc.mjs";
+import { DEFAULT_DEMO_PASSWORD, DEMO_ACCOUNTS, authSecret, portFromEnv, startApp, startMaildev, startStripeStandIn } from "./lib/services.mjs";
+
+process.env.NEXT_TELEMETRY_DISABLED = "1";
+const ports = {
+  app: portFromEnv("PORT", 3000),
+  pg: portFromEnv("PG_PORT", 54329),
+  smtp: portFromEnv("SMTP_PORT", 1025),
+  mailWeb: portFromEnv("MAIL_WEB_PORT", 1080),
+  stripe: portFromEnv("STRIPE_STAND_IN_PORT", 12111),
+};
+
+const services = [];
+let cluster; // the data folder, when this run started the cluster
+let stopping = false;
+
+async function shutdown(code) {
+  if (stopping) return;
+  stopping = true;
+  console.log("\nStopping Filmsheet …");
+  for (const s of [...services].reverse()) await stopService(s);
+  if (cluster) stopCluster(cluster);
+  console.log("Stopped.");
+  process.exit(code);
+}
+process.on("SIGINT", () => shutdown(0));
+process.on("SIGTERM", () => shutdown(0));
+
+async function main() {
+  ensureNodeModules();
+
+  // An explicit DATABASE_URL (e.g. the PostgreSQL of docker-compose.dev.yml) skips the private cluster.
+  let url = process.env.DATABASE_URL;
+  if (!url) {
+    ensurePostgres();
+    const dir = clusterDir("pg");
+    if (startCluster({ dir, port: ports.pg })) cluster = dir;
+    url = databaseUrl(ports.pg, "filmsheet");
+  }
+  await ensureDatabase(url);
+  const dbEnv = { DATABASE_URL: url, DEMO_PASSWORD: process.env.DEMO_PASSWORD ?? DEFAULT_DEMO_PASSWORD };
+  step("Migrating the database (knex migrate:latest)");
+  knex(["migrate:latest"], dbEnv);
+  step("Seeding the demo firm (knex seed:run)");
+  knex(["seed:run"], dbEnv);
+
+  ensureBuild();
+
+  step("Starting the mail inbox, the Stripe stand-in and the app");
+  for (const [port, what] of [[ports.app, "app"], [ports.smtp, "SMTP"], [ports.mailWeb, "mail web"], [ports.stripe, "Stripe stand-in"]]) {
+    await assertPortFree(port, what);
+  }
+  const mail = startMaildev(ports.smtp, ports.mailWeb);
+  const stripe = startStripeStandIn(ports.stripe);
+  services.push(mail.service, stripe.service);
+  await Promise.all([mail.ready(), stripe.ready()]);
+  const app = startApp(ports.app, {
+    ...dbEnv,
+    APP_URL: process.env.APP_URL ?? `http://localhost:${ports.app}`,
+    AUTH_SECRET: authSecret(),
+    SMTP_URL: `smtp://127.0.0.1:${ports.smtp}?ignoreTLS=true`,
+    STRIPE_API_URL: `http://127.0.0.1:${ports.stripe}`,
+  });
+  services.push(app.service);
+  await app.ready();
+
+  const password = dbEnv.DEMO_PASSWORD;
+  const width = Math.max(...DEMO_ACCOUNTS.map(([email]) => email.length));
+  console.log(`
+Filmsheet is running.
+
+  App              http://127.0.0.1:${ports.app}   (or http://localhost:${ports.app})
+  Health           http://127.0.0.1:${ports.app}/api/health
+  Mail inbox       http://127.0.0.1:${ports.mailWeb}   (SMTP 127.0.0.1:${ports.smtp})
+  Stripe stand-in  http://127.0.0.1:${ports.stripe}
+  PostgreSQL       ${url.replace(/:[^:@/]+@/, ":***@")}${process.env.DATABASE_URL ? "" : `  (private cluster, user ${DB_USER})`}
+
+Demo sign-in (password: ${password})
+${DEMO_ACCOUNTS.map(([email, role]) => `  ${email.padEnd(width)}  ${role}`).join("\n")}
+
+Press Ctrl-C to stop everything.`);
+
+  // If any service dies on its own, take the rest down rather than run half a system.
+  const watch = setInterval(() => {
+    const dead = services.find((s) => s.exited);
+    if (dead && !stopping) {
+      clearInterval(watch);
+      console.error(`\n${dead.name} exited unexpectedly (${dead.exitCode}).`);
+      shutdown(1);
+    }
+  }, 500);
+}
+
+main().catch((err) => {
+  console.error(`\nnpm start failed: ${err.message}`);
+  shutdown(1);
+});
