@@ -129,7 +129,9 @@ function initCluster(dir) {
   giveToPostgres(pwDir, 0o700);
   giveToPostgres(pwFile, 0o600);
   try {
-    pgRun("initdb", ["-D", dir, "-U", DB_USER, "--auth=scram-sha-256", `--pwfile=${pwFile}`, "-E", "UTF8", "--locale=C.UTF-8"]);
+    const { file, argv, options } = pg("initdb", ["-D", dir, "-U", DB_USER, "--auth=scram-sha-256", `--pwfile=${pwFile}`, "-E", "UTF8", "--locale=C.UTF-8"]);
+    const result = capture(file, argv, options);
+    if (result.status !== 0) throw new Error(`initdb failed:\n${result.stdout}${result.stderr}${result.error?.message ?? ""}`);
   } finally {
     rmSync(pwDir, { recursive: true, force: true });
   }

@@ -1,0 +1,133 @@
+// `npm test`: the same bootstrap as `npm start` against a separate, throw-away test cluster, then
+// every suite — unit and integration (Vitest), end-to-end (Playwright in Debian's Chromium).
+// The last line is always `N passed, N failed`, totalled from the runners' JSON reports.
+import { mkdirSync, rmSync } from "node:fs";
+import { join } from "node:path";
+import {
+  CHROMIUM,
+  ROOT,
+  baseEnv,
+  clusterDir,
+  databaseUrl,
+  ensureBuild,
+  ensureChromium,
+  ensureDatabase,
+  ensureNodeModules,
+  ensurePostgres,
+  knex,
+  startCluster,
+  stopCluster,
+} from "./lib/bootstrap.mjs";
+import { runAsync, step, stopService } from "./lib/proc.mjs";
+import { closingLine, countPlaywright, countVitest, readSuite, total } from "./lib/reports.mjs";
+import { DEFAULT_DEMO_PASSWORD, authSecret, portFromEnv, startApp, startStripeStandIn } from "./lib/services.mjs";
+
+process.env.NEXT_TELEMETRY_DISABLED = "1";
+const ports = {
+  pg: portFromEnv("TEST_PG_PORT", 54339),
+  app: portFromEnv("TEST_APP_PORT", 3100),
+  stripe: portFromEnv("TEST_STRIPE_STAND_IN_PORT", 12112),
+};
+const REPORTS = join(ROOT, ".data", "reports");
+const services = [];
+let cluster;
+let finished = false;
+
+async function cleanUp() {
+  for (const s of [...services].reverse()) await stopService(s);
+  services.length = 0;
+  if (cluster) stopCluster(cluster);
+  cluster = undefined;
+}
+
+async function finish(counts, notes = []) {
+  if (finished) return;
+  finished = true;
+  await cleanUp();
+  for (const note of notes) console.log(`note: ${note}`);
+  console.log(`\n${closingLine(counts)}`);
+  process.exit(counts.failed > 0 ? 1 : 0);
+}
+
+process.on("SIGINT", () => finish({ passed: 0, failed: 1 }, ["interrupted"]));
+process.on("SIGTERM", () => finish({ passed: 0, failed: 1 }, ["terminated"]));
+
+async function bootstrap() {
+  ensureNodeModules();
+  ensureChromium();
+  let url = process.env.TEST_DATABASE_URL;
+  if (!url) {
+    ensurePostgres();
+    const dir = clusterDir("pg-test");
+    if (startCluster({ dir, port: ports.pg, forTests: true })) cluster = dir;
+    url = databaseUrl(ports.pg, "filmsheet_test");
+  }
+  step("Creating a fresh test database, migrating and seeding");
+  await ensureDatabase(url, { fresh: true });
+  const dbEnv = { DATABASE_URL: url, DEMO_PASSWORD: process.env.DEMO_PASSWORD ?? DEFAULT_DEMO_PASSWORD, NODE_ENV: "test" };
+  knex(["migrate:latest"], dbEnv);
+  knex(["seed:run"], dbEnv);
+  ensureBuild();
+  return { url, dbEnv };
+}
+
+async function runVitest(url) {
+  step("Unit and integration tests (Vitest)");
+  const report = join(REPORTS, "vitest.json");
+  const code = await runAsync(
+    join(ROOT, "node_modules/.bin/vitest"),
+    ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${report}`],
+    { cwd: ROOT, env: baseEnv({ TEST_DATABASE_URL: url, DATABASE_URL: "" }) },
+  );
+  return readSuite(report, countVitest, code);
+}
+
+async function runPlaywright(dbEnv) {
+  step("End-to-end tests (Playwright, Debian Chromium)");
+  const report = join(REPORTS, "e2e.json");
+  const stripe = startStripeStandIn(ports.stripe);
+  services.push(stripe.service);
+  await stripe.ready();
+  const app = startApp(ports.app, {
+    ...dbEnv,
+    NODE_ENV: "production",
+    APP_URL: `http://localhost:${ports.app}`,
+    AUTH_SECRET: authSecret(),
+    STRIPE_API_URL: `http://127.0.0.1:${ports.stripe}`,
+  });
+  services.push(app.service);
+  await app.ready();
+  const code = await runAsync(join(ROOT, "node_modules/.bin/playwright"), ["test", "--config", join(ROOT, "playwright.config.ts")], {
+    cwd: ROOT,
+    env: baseEnv({ E2E_BASE_URL: `http://localhost:${ports.app}`, E2E_JSON_REPORT: report, CHROMIUM_PATH: CHROMIUM }),
+  });
+  return readSuite(report, countPlaywright, code);
+}
+
+async function main() {
+  const t0 = Date.now();
+  rmSync(REPORTS, { recursive: true, force: true });
+  mkdirSync(REPORTS, { recursive: true });
+  let boot;
+  try {
+    boot = await bootstrap();
+  } catch (err) {
+    console.error(`\nTest bootstrap failed: ${err.message}`);
+    return finish({ passed: 0, failed: 1 }, ["bootstrap failed: no suite ran"]);
+  }
+  const suites = [];
+  suites.push({ name: "vitest", ...(await runVitest(boot.url)) });
+  try {
+    suites.push({ name: "e2e", ...(await runPlaywright(boot.dbEnv)) });
+  } catch (err) {
+    suites.push({ name: "e2e", passed: 0, failed: 1, note: `could not start the app for e2e: ${err.message}` });
+  }
+  const notes = suites.map((s) => `${s.name}: ${s.passed} passed, ${s.failed} failed${s.note ? ` (${s.note})` : ""}`);
+  notes.push(`npm test took ${((Date.now() - t0) / 1000).toFixed(1)} s`);
+  return finish(total(suites), notes);
+}
+
+main().catch((err) => {
+  console.error(err);
+  finish({ passed: 0, failed: 1 }, [`unexpected error: ${err.message}`]);
+});

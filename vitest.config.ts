@@ -1,0 +1,44 @@
+import { fileURLToPath } from "node:url";
+import { defineConfig } from "vitest/config";
+
+const here = (path: string) => fileURLToPath(new URL(path, import.meta.url));
+
+// Two projects: "unit" needs nothing but Node (test/calc, test/unit); "integration" runs against
+// the real PostgreSQL test cluster that `npm test` starts and names in TEST_DATABASE_URL.
+export default defineConfig({
+  resolve: {
+    alias: [
+      { find: /^@\//, replacement: `${here("./src")}/` },
+      // "server-only" throws outside React Server Components; tests import server code directly.
+      { find: /^server-only$/, replacement: here("./test/support/server-only.ts") },
+    ],
+  },
+  test: {
+    pool: "forks",
+    maxWorkers: 2, // the machines have 2 cores
+    projects: [
+      {
+        extends: true,
+        test: {
+          name: "unit",
+          environment: "node",
+          include: ["test/calc/**/*.{test,spec}.ts", "test/unit/**/*.{test,spec}.{ts,tsx}"],
+        },
+      },
+      {
+        extends: true,
+        test: {
+          name: "integration",
+          environment: "node",
+          include: ["test/server/**/*.{test,spec}.ts"],
+          env: { DATABASE_URL: process.env.TEST_DATABASE_URL ?? "", NEXT_TELEMETRY_DISABLED: "1" },
+          globalSetup: [here("./test/support/require-test-database.ts")],
+          // Each file boots its own Next server or database: run them one at a time.
+          fileParallelism: false,
+          testTimeout: 60_000,
+          hookTimeout: 120_000,
+        },
+      },
+    ],
+  },
+});
