@@ -21,19 +21,21 @@ function handle(req: IncomingMessage, res: ServerResponse): void {
   });
 }
 
-/** Starts the stand-in on 127.0.0.1; port 0 picks a free port (tests). */
-export function startStripeStandIn(port: number): Promise<Server> {
+/** Starts the stand-in (loopback unless told otherwise); port 0 picks a free port (tests). */
+export function startStripeStandIn(port: number, host = "127.0.0.1"): Promise<Server> {
   const server = createServer(handle);
   return new Promise((resolve, reject) => {
     server.once("error", reject);
-    server.listen(port, "127.0.0.1", () => resolve(server));
+    server.listen(port, host, () => resolve(server));
   });
 }
 
 if (import.meta.url === pathToFileURL(process.argv[1] ?? "").href) {
   const port = Number(process.env.STRIPE_STAND_IN_PORT ?? 12111);
-  const server = await startStripeStandIn(port);
-  console.log(`Stripe stand-in listening on http://127.0.0.1:${port}`);
+  // Inside a container (docker-compose.dev.yml) it must listen on 0.0.0.0 to be reachable.
+  const host = process.env.STRIPE_STAND_IN_HOST ?? "127.0.0.1";
+  const server = await startStripeStandIn(port, host);
+  console.log(`Stripe stand-in listening on http://${host}:${port}`);
   const close = () => server.close(() => process.exit(0));
   process.on("SIGTERM", close);
   process.on("SIGINT", close);
