@@ -23,7 +23,7 @@ export function FilmSketch() {
         <path d={layer} fill="none" stroke="var(--fs-accent)" strokeWidth="2" />
         <path d={localH} fill="none" stroke="var(--fs-heat)" strokeWidth="2" strokeDasharray="5 4" />
         <rect x={X0} y={PLATE_Y} width={X1 - X0} height="10" rx="2" fill="var(--fs-ink)" opacity="0.85" />
-        <text x="210" y="104" fontSize="11" fill="var(--fs-accent)">boundary layer ∝ √x</text>
+        <text x="335" y="121" fontSize="11" textAnchor="end" fill="var(--fs-accent)">boundary layer ∝ √x</text>
         <text x="70" y="44" fontSize="11" fill="var(--fs-heat)">local h ∝ 1/√x</text>
         <text x={X1} y="176" fontSize="10" textAnchor="end" fill="var(--fs-muted)">x along the panel →</text>
       </svg>

@@ -18,7 +18,7 @@ export function AppShell({ children }: { children: ReactNode }) {
           <LogoMark />
           <span className="text-lead">Filmsheet</span>
         </Link>
-        <span className="h-5 w-px bg-line" aria-hidden="true" />
+        <span className="hidden h-5 w-px bg-line sm:block" aria-hidden="true" />
         <ContextSwitcher />
         <div className="ml-auto flex items-center gap-3">
           <ThemeSwitch />

@@ -4,7 +4,7 @@
  */
 export function ContextSwitcher() {
   return (
-    <div className="flex min-w-0 items-center gap-1 text-small" aria-label="Firm and project">
+    <div className="hidden min-w-0 items-center gap-1 text-small sm:flex" aria-label="Firm and project">
       <button type="button" disabled title="Available after sign-in" className="flex min-w-0 items-center gap-1.5 rounded-chip px-2 py-1 text-muted disabled:cursor-not-allowed">
         <span className="truncate">No firm selected</span>
         <Chevron />
