@@ -122,8 +122,13 @@ export const optionalInputs = new Set([
 /** Inputs that take a word from a list. */
 export const wordInputs = new Set(["kind", "shape", "terrain", "law", "method", "location"]);
 
-/** Out-of-physics numbers per input (the contract: negative length, emissivity > 1, RH > 100 …). */
+/**
+ * Out-of-physics numbers per input (the contract: negative length, emissivity > 1, RH > 100 …),
+ * looked up as "kind.input" first, then "input". A duct run of zero length is a real (empty)
+ * run; a plate or panel of zero length has no film coefficient.
+ */
 export const outOfPhysics: Record<string, number[]> = {
+  "duct_run.length_m": [-1],
   length_m: [-1, 0], diameter_m: [-0.1, 0], width_m: [-0.1, 0], height_m: [-1], panel_height_m: [-1, 0],
   area_m2: [-5], flow_m3_s: [-0.1], velocity_m_s: [-1], V_met_m_s: [-1], V_wind_m_s: [-1],
   emissivity: [-0.1, 1.1], jacket_emissivity: [-0.1, 1.1], absorptance: [-0.1, 1.1], RH_pct: [0, -1, 101],
