@@ -29,6 +29,9 @@ const nextConfig: NextConfig = {
   reactStrictMode: true,
   // Knex loads database drivers dynamically; bundling it breaks that, so keep it (and pg) external.
   serverExternalPackages: ["knex", "pg"],
+  // Type errors do not stop a build (so `npm start` still serves while a change is half done);
+  // `npm test` type-checks the whole project as a suite of its own (tsc --noEmit).
+  typescript: { ignoreBuildErrors: true },
   async headers() {
     return [{ source: "/:path*", headers: securityHeaders }];
   },

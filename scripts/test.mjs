@@ -1,5 +1,6 @@
 // `npm test`: the same bootstrap as `npm start` against a separate, throw-away test cluster, then
-// every suite — unit and integration (Vitest), end-to-end (Playwright in Debian's Chromium).
+// every suite — type check, unit and integration (Vitest), end-to-end (Playwright in Debian's
+// Chromium).
 // The last line is always `N passed, N failed`, totalled from the runners' JSON reports.
 import { mkdirSync, rmSync } from "node:fs";
 import { join } from "node:path";
@@ -82,6 +83,14 @@ async function runVitest(url) {
   return readSuite(report, countVitest, code);
 }
 
+/** The whole project through the TypeScript compiler, counted as one test. */
+async function runTypecheck() {
+  step("Type check (tsc --noEmit)");
+  const code = await runAsync(join(ROOT, "node_modules/.bin/tsc"), ["--noEmit", "-p", ROOT], { cwd: ROOT, env: baseEnv() });
+  if (code === 0) console.log("No type errors.");
+  return code === 0 ? { passed: 1, failed: 0 } : { passed: 0, failed: 1, note: "type errors above" };
+}
+
 async function runPlaywright(dbEnv) {
   step("End-to-end tests (Playwright, Debian Chromium)");
   const report = join(REPORTS, "e2e.json");
@@ -116,6 +125,7 @@ async function main() {
     return finish({ passed: 0, failed: 1 }, ["bootstrap failed: no suite ran"]);
   }
   const suites = [];
+  suites.push({ name: "typecheck", ...(await runTypecheck()) });
   suites.push({ name: "vitest", ...(await runVitest(boot.url)) });
   try {
     suites.push({ name: "e2e", ...(await runPlaywright(boot.dbEnv)) });
