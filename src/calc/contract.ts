@@ -20,7 +20,8 @@ export interface CalcErrorBody {
   message: string;
 }
 
-export type Outputs = Record<string, number | string | boolean | null>;
+/** Outputs of a case: numbers, words, flags and nulls by the contract's names. */
+export type Outputs = Record<string, unknown>;
 
 export type CalcResult =
   | ({ id: string | null; ok: true; correlation: string; warnings: CalcWarning[] } & Outputs)

@@ -10,9 +10,9 @@ import { insulationResistanceRect, insulationResistanceRound, leavingAirTemperat
 import { airProperties } from "./properties/air";
 import { dewPointHylandWexler } from "./psychrometrics/dew-point";
 import { hRadiation } from "./radiation/radiation";
-import { air, warnRanges, type Warnings } from "./kinds/common";
+import { air, warnRange, type Warnings } from "./kinds/common";
 import { cylinderCrossflowCore, cylinderNaturalCore, plateNaturalCore } from "./kinds/external";
-import { ductGeometry, ductInternalCore, type DuctSection, type DuctShape } from "./kinds/internal";
+import { ductGeometry, ductInternalCore, type DuctInternal, type DuctSection, type DuctShape } from "./kinds/internal";
 import { solveFixedPoint } from "./solve";
 import { addWarning } from "./validity";
 
@@ -37,7 +37,7 @@ export interface DuctRunInput extends DuctSection {
 /** Thickest insulation the minimum-thickness search tries, m, and its step (0.1 mm). */
 export const MAX_INSULATION_M = 0.2;
 const STEP_M = 1e-4;
-const TOL_K = 1e-5;
+const TOL_K = 1e-4;
 
 interface OuterSection {
   P_i: number;
@@ -88,16 +88,27 @@ function outsideAt(d: DuctRunInput, o: OuterSection, Tso: number, V: number, war
   return { h_conv: h, h_rad: hRadiation(Tso, d.T_surround_C + T0, d.jacket_emissivity) };
 }
 
-/** Outer surface temperature (K) for air at Tair (K) behind the resistance Rin (K·m/W). */
-function surfaceTemperature(d: DuctRunInput, o: OuterSection, Tair: number, Rin: number, V: number, x0: number): { Ts: number; converged: boolean } {
+/**
+ * Outer surface temperature (K) for air at Tair (K) behind the resistance Rin (K·m/W), with the
+ * outside coefficients of the last evaluation (the returned T_s solves the balance with them).
+ */
+function surfaceTemperature(
+  d: DuctRunInput,
+  o: OuterSection,
+  Tair: number,
+  Rin: number,
+  V: number,
+  x0: number,
+): { Ts: number; converged: boolean; c: Outside } {
   const Ta = d.T_ambient_C + T0;
   const Tsur = d.T_surround_C + T0;
+  let c: Outside = { h_conv: 0, h_rad: 0 };
   const next = (Ts: number): number => {
-    const c = outsideAt(d, o, Ts, V, null);
+    c = outsideAt(d, o, Ts, V, null);
     return (Tair / Rin + o.P_o * (c.h_conv * Ta + c.h_rad * Tsur)) / (1 / Rin + o.P_o * (c.h_conv + c.h_rad));
   };
   const s = solveFixedPoint(next, Math.min(Tair, Ta, Tsur), Math.max(Tair, Ta, Tsur), x0, TOL_K);
-  return { Ts: s.x, converged: s.converged };
+  return { Ts: s.x, converged: s.converged, c };
 }
 
 export interface DuctRunState {
@@ -115,87 +126,198 @@ export interface DuctRunState {
   converged: boolean;
 }
 
-/** Evaluates the run at insulation thickness t (m) and wind speed V (m/s). */
-export function evaluateDuctRun(d: DuctRunInput, t: number, V: number, warnings: Warnings): DuctRunState {
+/**
+ * Evaluates the run at insulation thickness t (m) and wind speed V (m/s). With `bothEnds` false
+ * only the end with the colder air gets its surface temperature (the other is NaN): that end has
+ * the colder surface, which is all the condensation search needs.
+ */
+export function evaluateDuctRun(d: DuctRunInput, t: number, V: number, warnings: Warnings, bothEnds = true): DuctRunState {
   const g = ductGeometry(d);
   const o = outerSection(d, t, g.perimeter_m);
   const TE = d.T_entering_C + T0;
   const Ta = d.T_ambient_C + T0;
   const Tsur = d.T_surround_C + T0;
   const mdot = airProperties(TE, d.pressure_Pa).rho_kg_m3 * d.flow_m3_s;
+  // Coefficients at the mean air temperature, which depends on the leaving temperature, and
+  // outside coefficients at the outer surface temperature: one joint fixed-point iteration on
+  // (T_mean, T_so), with secant steps on T_so kept inside the temperatures of the problem.
+  const lo = Math.min(TE, Ta, Tsur);
+  const hi = Math.max(TE, Ta, Tsur);
   let Tm = TE;
-  let Tso = (TE + Ta) / 2;
-  let converged = true;
-  let st: Omit<DuctRunState, "Ts_entering_K" | "Ts_leaving_K" | "converged"> | undefined;
-  let Rin = 0;
-  for (let i = 0; i < 100; i++) {
+  let Rin = 1 / (ductInternalCore(airProperties(TE, d.pressure_Pa), d.shape, g, d.flow_m3_s, d.roughness_m, null, false).h_W_m2K * o.P_i) + o.R_ins;
+  const h0 = 8 + 4 * V; // a typical still-air or windy outside coefficient, for the first guess only
+  let Tso = (Tm / Rin + o.P_o * h0 * Ta) / (1 / Rin + o.P_o * h0);
+  let converged = false;
+  let internal: DuctInternal | undefined;
+  let c: Outside = { h_conv: 0, h_rad: 0 };
+  let UA = 0;
+  let TL = TE;
+  let Tenv = Ta;
+  let cp = 0;
+  let prevX = NaN;
+  let prevG = NaN;
+  for (let i = 0; i < 200; i++) {
     const pin = airProperties(Tm, d.pressure_Pa);
-    const internal = ductInternalCore(pin, d.shape, g, d.flow_m3_s, d.roughness_m, null);
+    internal = ductInternalCore(pin, d.shape, g, d.flow_m3_s, d.roughness_m, null, false);
     Rin = 1 / (internal.h_W_m2K * o.P_i) + o.R_ins;
-    const s = surfaceTemperature(d, o, Tm, Rin, V, Tso);
-    converged &&= s.converged;
-    Tso = s.Ts;
-    const c = outsideAt(d, o, Tso, V, null);
+    c = outsideAt(d, o, Tso, V, null);
     const ho = c.h_conv + c.h_rad;
-    const UA = 1 / (Rin + 1 / (ho * o.P_o));
-    const Tenv = (c.h_conv * Ta + c.h_rad * Tsur) / ho;
-    const cp = pin.cp_J_kgK;
-    const TL = leavingAirTemperature(TE, Tenv, UA, d.length_m, mdot, cp);
-    st = {
-      T_leaving_K: TL,
-      Q_W: mdot * cp * (TL - TE),
-      UA_per_m: UA,
-      h_i: internal.h_W_m2K,
-      h_o_conv: c.h_conv,
-      h_o_rad: c.h_rad,
-      T_env_K: Tenv,
-      mdot_kg_s: mdot,
-      internal,
-    };
+    const TsoNew = (Tm / Rin + o.P_o * (c.h_conv * Ta + c.h_rad * Tsur)) / (1 / Rin + o.P_o * ho);
+    UA = 1 / (Rin + 1 / (ho * o.P_o));
+    Tenv = (c.h_conv * Ta + c.h_rad * Tsur) / ho;
+    cp = pin.cp_J_kgK;
+    TL = leavingAirTemperature(TE, Tenv, UA, d.length_m, mdot, cp);
     const TmNew = (TE + TL) / 2;
-    if (Math.abs(TmNew - Tm) < TOL_K) break;
+    const gap = TsoNew - Tso;
+    if (Math.abs(gap) < TOL_K && Math.abs(TmNew - Tm) < TOL_K) {
+      converged = true;
+      Tso = TsoNew;
+      break;
+    }
+    let x = TsoNew;
+    if (prevG === prevG && gap !== prevG) {
+      const sec = Tso - (gap * (Tso - prevX)) / (gap - prevG);
+      if (sec > lo && sec < hi) x = sec;
+    }
+    prevX = Tso;
+    prevG = gap;
+    Tso = x;
     Tm = TmNew;
-    if (i === 99) converged = false;
   }
-  const run = st as NonNullable<typeof st>;
   if (warnings !== null) {
     // Warnings of the state reported: inside flow at the mean temperature, outside at T_so.
     const pin = air(Tm, d.pressure_Pa, warnings, "T_mean_C");
-    ductInternalCore(pin, d.shape, g, d.flow_m3_s, d.roughness_m, warnings);
+    internal = ductInternalCore(pin, d.shape, g, d.flow_m3_s, d.roughness_m, warnings);
     outsideAt(d, o, Tso, V, warnings);
   }
-  const sE = surfaceTemperature(d, o, TE, Rin, V, Tso);
-  const sL = surfaceTemperature(d, o, run.T_leaving_K, Rin, V, Tso);
+  let TsE = NaN;
+  let TsL = NaN;
+  // First guess at an end: the mean surface temperature moved by the share of the outside film.
+  const Rout = 1 / ((c.h_conv + c.h_rad) * o.P_o);
+  const shift = Rout / (Rin + Rout);
+  if (bothEnds || TE <= TL) {
+    const sE = surfaceTemperature(d, o, TE, Rin, V, Tso + (TE - Tm) * shift);
+    TsE = sE.Ts;
+    converged &&= sE.converged;
+  }
+  if (bothEnds || TL < TE) {
+    const sL = surfaceTemperature(d, o, TL, Rin, V, Tso + (TL - Tm) * shift);
+    TsL = sL.Ts;
+    converged &&= sL.converged;
+  }
   return {
-    ...run,
-    Ts_entering_K: sE.Ts,
-    Ts_leaving_K: sL.Ts,
-    converged: converged && sE.converged && sL.converged,
+    T_leaving_K: TL,
+    Q_W: mdot * cp * (TL - TE),
+    UA_per_m: UA,
+    h_i: (internal as DuctInternal).h_W_m2K,
+    h_o_conv: c.h_conv,
+    h_o_rad: c.h_rad,
+    Ts_entering_K: TsE,
+    Ts_leaving_K: TsL,
+    T_env_K: Tenv,
+    mdot_kg_s: mdot,
+    internal: internal as DuctInternal,
+    converged,
   };
 }
 
-/** True when the colder end of the outer surface is below the dew point plus margin. */
-function condenses(st: DuctRunState, TdpK: number, margin: number): boolean {
-  return Math.min(st.Ts_entering_K, st.Ts_leaving_K) < TdpK + margin;
+/** The colder of the two end surface temperatures, K (NaN ends are skipped). */
+function coldestSurface(st: DuctRunState): number {
+  if (st.Ts_entering_K !== st.Ts_entering_K) return st.Ts_leaving_K;
+  if (st.Ts_leaving_K !== st.Ts_leaving_K) return st.Ts_entering_K;
+  return Math.min(st.Ts_entering_K, st.Ts_leaving_K);
 }
 
 /**
  * Least insulation thickness, a multiple of 0.1 mm, for which condensation is false in still air;
- * 0 when the bare duct is safe, null when 0.2 m does not avoid it. The surface temperature rises
- * with thickness, so the flag changes once and a bisection over the steps finds it.
+ * 0 when the bare duct is safe, null when 0.2 m does not avoid it. The colder surface warms as
+ * insulation is added, so the flag changes once along the steps: the search keeps a bracket of
+ * steps [condensing, safe] and narrows it by the Illinois variant of regula falsi on the margin
+ * (surface temperature − dew point − margin), which ends on neighbouring steps.
  */
 export function minInsulationThickness(d: DuctRunInput, TdpK: number): number | null {
-  const test = (n: number): boolean => condenses(evaluateDuctRun(d, n * STEP_M, 0, null), TdpK, d.margin_K);
-  if (!test(0)) return 0;
-  let hiN = Math.round(MAX_INSULATION_M / STEP_M);
-  if (test(hiN)) return null;
-  let loN = 0;
-  while (hiN - loN > 1) {
-    const mid = (loN + hiN) >> 1;
-    if (test(mid)) loN = mid;
-    else hiN = mid;
+  const limit = TdpK + d.margin_K;
+  const margins = new Map<number, number>();
+  const margin = (n: number): number => {
+    let m = margins.get(n);
+    if (m === undefined) {
+      m = coldestSurface(evaluateDuctRun(d, n * STEP_M, 0, null, false)) - limit;
+      margins.set(n, m);
+    }
+    return m;
+  };
+  if (margin(0) >= 0) return 0;
+  const nMax = Math.round(MAX_INSULATION_M / STEP_M);
+  // A first estimate from the resistances with the outside coefficients at the limiting surface
+  // temperature; the exact evaluations then settle the step, starting next to the estimate.
+  const est = estimateSteps(d, limit, nMax);
+  let nLo = 0;
+  let gLo = margin(0);
+  let nHi = nMax;
+  let gHi = NaN;
+  for (const n of [est, est - 1]) {
+    if (n <= nLo || n >= nHi) continue;
+    const g = margin(n);
+    if (g < 0) {
+      nLo = n;
+      gLo = g;
+    } else {
+      nHi = n;
+      gHi = g;
+    }
   }
-  return hiN / 10000;
+  if (gHi !== gHi) {
+    gHi = margin(nMax);
+    if (gHi < 0) return null;
+  }
+  let side = 0;
+  while (nHi - nLo > 1) {
+    const x = nLo + ((nHi - nLo) * gLo) / (gLo - gHi);
+    const n = Math.min(nHi - 1, Math.max(nLo + 1, Math.round(x)));
+    const gn = margin(n);
+    if (gn < 0) {
+      nLo = n;
+      gLo = gn;
+      if (side === -1) gHi /= 2;
+      side = -1;
+    } else {
+      nHi = n;
+      gHi = gn;
+      if (side === 1) gLo /= 2;
+      side = 1;
+    }
+  }
+  return nHi / 10000;
+}
+
+/**
+ * Estimated number of insulation steps for which the surface at the colder end (air at the entering
+ * temperature, still air) sits at `limit`: a bisection on the thickness with the inside film of
+ * the bare duct and the outside coefficients at the limit temperature held fixed.
+ */
+function estimateSteps(d: DuctRunInput, limit: number, nMax: number): number {
+  const g = ductGeometry(d);
+  const TE = d.T_entering_C + T0;
+  const Ta = d.T_ambient_C + T0;
+  const Tsur = d.T_surround_C + T0;
+  const hi = ductInternalCore(airProperties(TE, d.pressure_Pa), d.shape, g, d.flow_m3_s, d.roughness_m, null, false).h_W_m2K;
+  const Ri = 1 / (hi * g.perimeter_m);
+  let lo = 0;
+  let up = nMax;
+  const o0 = outerSection(d, 0, g.perimeter_m);
+  const c = outsideAt(d, o0, limit, 0, null);
+  const ho = c.h_conv + c.h_rad;
+  const Tenv = (c.h_conv * Ta + c.h_rad * Tsur) / ho;
+  const Tair = Math.min(TE, Tenv);
+  while (up - lo > 1) {
+    const mid = (lo + up) >> 1;
+    const o = outerSection(d, mid * STEP_M, g.perimeter_m);
+    const Rout = 1 / (ho * o.P_o);
+    const Ts = Tenv - ((Tenv - Tair) * Rout) / (Ri + o.R_ins + Rout);
+    if (Ts < limit) lo = mid;
+    else up = mid;
+  }
+  return up;
 }
 
 export interface DuctRunResult {
@@ -221,7 +343,7 @@ export interface DuctRunResult {
 export function ductRunCore(d: DuctRunInput, warnings: Warnings): DuctRunResult {
   const st = evaluateDuctRun(d, d.insulation_thickness_m, d.V_wind_m_s, warnings);
   if (!st.converged) addWarning(warnings, "not_converged", "the duct-run balance did not converge");
-  warnRanges(warnings, "dew-point-hyland-wexler", { T_C: d.T_ambient_C });
+  warnRange(warnings, "dew-point-hyland-wexler", "T_C", d.T_ambient_C);
   const Tdp = dewPointHylandWexler(d.T_ambient_C, d.RH_ambient_pct);
   const TdpK = Tdp + T0;
   return {
@@ -234,7 +356,7 @@ export function ductRunCore(d: DuctRunInput, warnings: Warnings): DuctRunResult 
     T_surface_entering_C: st.Ts_entering_K - T0,
     T_surface_leaving_C: st.Ts_leaving_K - T0,
     T_dp_C: Tdp,
-    condensation: condenses(st, TdpK, d.margin_K),
+    condensation: coldestSurface(st) < TdpK + d.margin_K,
     min_insulation_thickness_m: minInsulationThickness(d, TdpK),
     regime: st.internal.regime,
     correlation: "duct-run-exponential",

@@ -44,11 +44,11 @@ export function calculateCase(c: unknown): CalcResult {
     return fail(id, "kind", `${what}; valid kinds: ${KIND_NAMES.join(", ")}`);
   }
   try {
-    const out = KINDS[kind](new CaseReader(raw));
-    if (!allFinite(out)) {
+    const out = KINDS[kind](new CaseReader(raw), id);
+    if (!allFinite(out as Record<string, unknown>)) {
       return fail(id, "kind", "the inputs lead outside the range where this method gives a finite answer");
     }
-    return { id, ok: true, ...out } as CalcResult;
+    return out;
   } catch (e) {
     if (e instanceof InputError) return fail(id, e.field, e.message);
     throw e;

@@ -5,10 +5,10 @@
  */
 import { T0 } from "./constants";
 import { hcIso6946, hcMcAdams } from "./convection/empirical";
-import { airProperties } from "./properties/air";
 import { hRadiation, radiantTemperature, skyTemperatureSwinbank, skyViewFactor } from "./radiation/radiation";
 import { air, type Warnings } from "./kinds/common";
-import { plateCombinedCore } from "./kinds/external";
+import { plateCombinedCore, type PlateCombined } from "./kinds/external";
+import type { CalcWarning } from "./contract";
 import { windAtHeight } from "./kinds/wind";
 import type { Terrain } from "./wind/wind-profile";
 import { isWindward } from "./wind/wind-profile";
@@ -59,11 +59,8 @@ export interface SurfaceResult {
   Q_W: number;
   regime: string;
   correlation: string;
-  /** Boundary-layer method only: the parts of the combined coefficient. */
-  Re?: number;
-  Ri?: number | null;
-  Nu_forced?: number;
-  Nu_natural?: number;
+  /** Boundary-layer method only: the combined coefficient and its parts, as last evaluated. */
+  combined: PlateCombined | null;
   iterations: number;
 }
 
@@ -84,44 +81,35 @@ export function surfaceCore(s: SurfaceInput, warnings: Warnings): SurfaceResult 
   const p = s.pressure_Pa;
 
   const hcFixed = s.method === "iso6946" ? hcIso6946(Vs) : s.method === "mcadams" ? hcMcAdams(Vs) : -1;
-  const hcAt = (Ts: number): number =>
-    hcFixed >= 0
-      ? hcFixed
-      : plateCombinedCore(airProperties((Ts + To) / 2, p), Ts, To, Vs, s.length_m, s.tilt_deg, s.panel_height_m, null)
-          .h_W_m2K;
-  // Fixed-point map: T_s from the linearised balance with h_c and h_r taken at the previous T_s.
+  // Coefficients of the last evaluation: the returned T_s solves the linearised balance with
+  // exactly these, so the reported balance closes; range warnings of that evaluation are kept.
+  let hc = hcFixed;
+  let hr = 0;
+  let last: PlateCombined | null = null;
+  const scratch: CalcWarning[] | null = warnings === null ? null : [];
   const next = (Ts: number): number => {
-    const hc = hcAt(Ts);
-    const hr = hRadiation(Ts, Tr, s.emissivity);
+    if (hcFixed < 0) {
+      if (scratch !== null) scratch.length = 0;
+      const props = air((Ts + To) / 2, p, scratch, "T_film_C");
+      last = plateCombinedCore(props, Ts, To, Vs, s.length_m, s.tilt_deg, s.panel_height_m, scratch);
+      hc = last.h_W_m2K;
+    }
+    hr = hRadiation(Ts, Tr, s.emissivity);
     return (Tin / Rin + solar + hc * To + hr * Tr) / (1 / Rin + hc + hr);
   };
-  // The balance residual falls monotonically with T_s, so the root lies in [lo, hi].
+  // The balance residual falls monotonically with T_s, so the root lies in [lo, hi]. The start is
+  // the balance with a typical exterior coefficient (ISO 6946's) in place of the unknown one.
   const lo = Math.min(Tin, To, Tr);
   const hi = Math.max(Tin, To, Tr) + solar * Rin;
-  const solved = solveFixedPoint(next, lo, hi, To, TOL_K);
+  const hGuess = (hcFixed >= 0 ? hcFixed : hcIso6946(Vs)) + 5;
+  const x0 = (Tin / Rin + solar + hGuess * To) / (1 / Rin + hGuess);
+  const solved = solveFixedPoint(next, lo, hi, x0, TOL_K);
   if (!solved.converged) addWarning(warnings, "not_converged", "the surface balance did not converge to 0.001 K");
   const iterations = solved.iterations;
-  const x = solved.x;
-
-  const Ts = x;
-  air((Ts + To) / 2, p, warnings, "T_film_C");
-  let hc: number;
-  let regime = "empirical";
-  let correlation = s.method === "iso6946" ? "iso6946-simplified" : "mcadams-wind";
-  const extra: Partial<SurfaceResult> = {};
-  if (hcFixed >= 0) {
-    hc = hcFixed;
-  } else {
-    const c = plateCombinedCore(airProperties((Ts + To) / 2, p), Ts, To, Vs, s.length_m, s.tilt_deg, s.panel_height_m, warnings);
-    hc = c.h_W_m2K;
-    regime = c.regime;
-    correlation = c.correlation;
-    extra.Re = c.forced.Re;
-    extra.Ri = c.Ri;
-    extra.Nu_forced = c.Nu_forced;
-    extra.Nu_natural = c.Nu_natural;
-  }
-  const hr = hRadiation(Ts, Tr, s.emissivity);
+  const Ts = solved.x;
+  if (hcFixed >= 0) air((Ts + To) / 2, p, warnings, "T_film_C");
+  else if (warnings !== null && scratch !== null) for (const w of scratch) warnings.push(w);
+  const combined = last as PlateCombined | null;
   const ho = hc + hr;
   const q = (Tin - Ts) / Rin;
   let Tsolair: number;
@@ -150,9 +138,10 @@ export function surfaceCore(s: SurfaceInput, warnings: Warnings): SurfaceResult 
     U_W_m2K: U,
     q_W_m2: q,
     Q_W: q * s.area_m2,
-    regime,
-    correlation,
-    ...extra,
+    regime: combined === null ? "empirical" : combined.regime,
+    correlation:
+      combined !== null ? combined.correlation : s.method === "iso6946" ? "iso6946-simplified" : "mcadams-wind",
+    combined,
     iterations,
   };
 }

@@ -38,31 +38,26 @@ export function inRange(value: number, r: Range): boolean {
   return true;
 }
 
-/** Pushes one `out_of_range` warning per quantity outside its range. */
-export function checkRanges(
+/** Pushes an `out_of_range` warning when the value of `quantity` lies outside range `r`. */
+export function checkRange(
   warnings: CalcWarning[] | null,
   methodId: string,
   title: string,
-  ranges: Ranges,
-  values: Readonly<Record<string, number>>,
+  quantity: string,
+  value: number,
+  r: Range,
 ): void {
-  if (warnings === null) return;
-  for (const q in values) {
-    const r = ranges[q];
-    if (r === undefined) continue;
-    const v = values[q];
-    if (inRange(v, r)) continue;
-    const u = r.unit ? ` ${r.unit}` : "";
-    warnings.push({
-      code: "out_of_range",
-      message: `${q} = ${fmt(v)}${u} is outside the range ${rangeText(r)} of ${title}; the value is extrapolated`,
-      method: methodId,
-      quantity: q,
-      value: v,
-      ...(r.min !== undefined ? { min: r.min } : {}),
-      ...(r.max !== undefined ? { max: r.max } : {}),
-    });
-  }
+  if (warnings === null || inRange(value, r)) return;
+  const u = r.unit ? ` ${r.unit}` : "";
+  warnings.push({
+    code: "out_of_range",
+    message: `${quantity} = ${fmt(value)}${u} is outside the range ${rangeText(r)} of ${title}; the value is extrapolated`,
+    method: methodId,
+    quantity,
+    value,
+    ...(r.min !== undefined ? { min: r.min } : {}),
+    ...(r.max !== undefined ? { max: r.max } : {}),
+  });
 }
 
 /** Adds a plain warning once (same code and message). */

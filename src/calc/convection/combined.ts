@@ -12,6 +12,8 @@
  *   free convection", AIChE J. 23 (1977) 10–16.
  */
 export function nuCombinedChurchill(NuF: number, NuN: number, n: number): number {
+  if (n === 3) return Math.cbrt(NuF * NuF * NuF + NuN * NuN * NuN);
+  if (n === 4) return Math.sqrt(Math.sqrt(NuF ** 4 + NuN ** 4));
   return Math.pow(Math.pow(NuF, n) + Math.pow(NuN, n), 1 / n);
 }
 

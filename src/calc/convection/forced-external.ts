@@ -4,9 +4,17 @@
  * and validity warnings live in the callers (src/calc/kinds) and the registry.
  */
 
+let lastReCrit = NaN;
+let lastA = NaN;
+
 /** A of the mixed-boundary-layer average: 0.037 Re_c^0.8 − 0.664 Re_c^½ (871 for Re_c = 5×10^5). */
 export function mixedBoundaryLayerA(ReCrit: number): number {
-  return 0.037 * Math.pow(ReCrit, 0.8) - 0.664 * Math.sqrt(ReCrit);
+  // Re_c rarely changes between calls (5×10^5 by default), so the last value is kept.
+  if (ReCrit !== lastReCrit) {
+    lastA = 0.037 * Math.pow(ReCrit, 0.8) - 0.664 * Math.sqrt(ReCrit);
+    lastReCrit = ReCrit;
+  }
+  return lastA;
 }
 
 /**

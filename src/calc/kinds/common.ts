@@ -3,20 +3,24 @@ import type { CalcWarning } from "../contract";
 import { T0 } from "../constants";
 import { airProperties, type AirProperties } from "../properties/air";
 import { METHOD_BY_ID } from "../registry";
-import { checkRanges } from "../validity";
+import { checkRange } from "../validity";
 
 export type Warnings = CalcWarning[] | null;
 
-/** Warns for every quantity outside the ranges the registry holds for `methodId`. */
-export function warnRanges(warnings: Warnings, methodId: string, values: Record<string, number>): void {
+/** Warns when `value` of `quantity` lies outside the range the registry holds for `methodId`. */
+export function warnRange(warnings: Warnings, methodId: string, quantity: string, value: number): void {
   if (warnings === null) return;
   const m = METHOD_BY_ID[methodId];
-  checkRanges(warnings, methodId, m.title, m.ranges, values);
+  const r = m.ranges[quantity];
+  if (r !== undefined) checkRange(warnings, methodId, m.title, quantity, value, r);
 }
 
 /** Air properties at T_K, warning when T_K lies outside the property model's range. */
 export function air(T_K: number, p_Pa: number, warnings: Warnings, label = "T_C"): AirProperties {
-  if (warnings !== null) warnRanges(warnings, "air-lemmon-jacobsen", { [label]: T_K - T0 });
+  if (warnings !== null) {
+    const m = METHOD_BY_ID["air-lemmon-jacobsen"];
+    checkRange(warnings, m.id, m.title, label, T_K - T0, m.ranges.T_C);
+  }
   return airProperties(T_K, p_Pa);
 }
 

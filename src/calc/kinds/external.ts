@@ -22,7 +22,7 @@ import {
   nuVerticalPlateChurchillChu,
 } from "../convection/natural";
 import type { AirProperties } from "../properties/air";
-import { air, warnRanges, type Warnings } from "./common";
+import { air, warnRange, type Warnings } from "./common";
 
 export const RE_CRIT_DEFAULT = 5e5;
 const DEG = Math.PI / 180;
@@ -58,12 +58,13 @@ export function plateForcedCore(
     Nu = nuFlatPlateLaminarAverage(Re, Pr);
     regime = "laminar";
     correlation = "flat-plate-laminar";
-    warnRanges(warnings, correlation, { Pr });
+    warnRange(warnings, correlation, "Pr", Pr);
   } else {
     Nu = nuFlatPlateMixedAverage(Re, Pr, ReCrit);
     regime = ReCrit === 0 ? "turbulent" : "mixed";
     correlation = ReCrit === 0 ? "flat-plate-turbulent" : "flat-plate-mixed";
-    warnRanges(warnings, correlation, { Re, Pr });
+    warnRange(warnings, correlation, "Re", Re);
+    warnRange(warnings, correlation, "Pr", Pr);
   }
   const out: PlateForced = { h_W_m2K: (Nu * props.k_W_mK) / L, Nu, Re, Pr, regime, correlation };
   if (x !== undefined) {
@@ -72,11 +73,12 @@ export function plateForcedCore(
     if (Rex <= ReCrit) {
       Nux = nuFlatPlateLaminarLocal(Rex, Pr);
       out.correlation_x = "flat-plate-local-laminar";
-      warnRanges(warnings, out.correlation_x, { Pr });
+      warnRange(warnings, out.correlation_x, "Pr", Pr);
     } else {
       Nux = nuFlatPlateTurbulentLocal(Rex, Pr);
       out.correlation_x = "flat-plate-local-turbulent";
-      warnRanges(warnings, out.correlation_x, { Re_x: Rex, Pr });
+      warnRange(warnings, out.correlation_x, "Re_x", Rex);
+      warnRange(warnings, out.correlation_x, "Pr", Pr);
     }
     out.h_x_W_m2K = (Nux * props.k_W_mK) / x;
     out.Nu_x = Nux;
@@ -114,45 +116,39 @@ export function plateNaturalCore(
   const Gr = (G * props.beta_1_K * Math.abs(Ts - Ta) * L * L * L) / (nu * nu);
   const Ra = Gr * Pr;
   const thetaDeg = Math.abs(tiltDeg - 90);
-  const k = props.k_W_mK;
-  const done = (Nu: number, turbulent: boolean, correlation: string): PlateNatural => ({
-    h_W_m2K: (Nu * k) / L,
-    Nu,
-    Ra,
-    Gr,
-    Pr,
-    regime: turbulent ? "turbulent" : "laminar",
-    correlation,
-  });
+  let Nu: number;
+  let RaEff = Ra; // the Rayleigh number of the branch used (g·cos θ or g·sin θ)
+  let turbulent: boolean;
+  let id: string;
+  const stable = Ts >= Ta !== tiltDeg < 90; // hot facing down or cold facing up
   if (thetaDeg === 0) {
-    warnRanges(warnings, "churchill-chu-vertical-plate", { Ra });
-    return done(nuVerticalPlateChurchillChu(Ra, Pr), Ra > 1e9, "churchill-chu-vertical-plate");
-  }
-  const hot = Ts >= Ta;
-  const facingUp = tiltDeg < 90;
-  const stable = hot !== facingUp;
-  const cosT = Math.cos(thetaDeg * DEG);
-  const RaV = Ra * cosT;
-  if (stable) {
-    if (thetaDeg <= 60) {
-      warnRanges(warnings, "churchill-chu-inclined-plate", { Ra: RaV });
-      return done(nuVerticalPlateChurchillChu(RaV, Pr), RaV > 1e9, "churchill-chu-inclined-plate");
+    id = "churchill-chu-vertical-plate";
+    Nu = nuVerticalPlateChurchillChu(Ra, Pr);
+    turbulent = Ra > 1e9;
+  } else if (stable && thetaDeg > 60) {
+    id = "horizontal-plate-stable";
+    Nu = nuHorizontalPlateStable(Ra);
+    turbulent = false;
+  } else {
+    RaEff = Ra * Math.cos(thetaDeg * DEG);
+    id = "churchill-chu-inclined-plate";
+    Nu = nuVerticalPlateChurchillChu(RaEff, Pr);
+    turbulent = RaEff > 1e9;
+    if (!stable) {
+      // Unstable side: the larger of the inclined (g·cos θ) and horizontal (g·sin θ) forms.
+      const RaH = Ra * Math.sin(thetaDeg * DEG);
+      const turbH = RaH > 1e7;
+      const nuH = turbH ? nuHorizontalPlateUnstableTurbulent(RaH) : nuHorizontalPlateUnstableLaminar(RaH);
+      if (nuH > Nu) {
+        id = turbH ? "horizontal-plate-unstable-turbulent" : "horizontal-plate-unstable-laminar";
+        Nu = nuH;
+        RaEff = RaH;
+        turbulent = turbH;
+      }
     }
-    warnRanges(warnings, "horizontal-plate-stable", { Ra });
-    return done(nuHorizontalPlateStable(Ra), false, "horizontal-plate-stable");
   }
-  // Unstable side: the larger of the inclined (g·cos θ) and horizontal (g·sin θ) forms.
-  const RaH = Ra * Math.sin(thetaDeg * DEG);
-  const nuV = nuVerticalPlateChurchillChu(RaV, Pr);
-  const turbH = RaH > 1e7;
-  const nuH = turbH ? nuHorizontalPlateUnstableTurbulent(RaH) : nuHorizontalPlateUnstableLaminar(RaH);
-  if (nuV >= nuH) {
-    warnRanges(warnings, "churchill-chu-inclined-plate", { Ra: RaV });
-    return done(nuV, RaV > 1e9, "churchill-chu-inclined-plate");
-  }
-  const id = turbH ? "horizontal-plate-unstable-turbulent" : "horizontal-plate-unstable-laminar";
-  warnRanges(warnings, id, { Ra: RaH });
-  return done(nuH, turbH, id);
+  if (warnings !== null) warnRange(warnings, id, "Ra", RaEff);
+  return { h_W_m2K: (Nu * props.k_W_mK) / L, Nu, Ra, Gr, Pr, regime: turbulent ? "turbulent" : "laminar", correlation: id };
 }
 
 export interface PlateCombined {
@@ -187,7 +183,8 @@ export function plateCombinedCore(
   const Nu = nuCombinedChurchill(forced.Nu, NuN, 3);
   let Ri: number | null = null;
   if (V > 0) {
-    const GrL = natural.Gr * Math.pow(L / H, 3);
+    const r = L / H;
+    const GrL = natural.Gr * r * r * r;
     Ri = GrL / (forced.Re * forced.Re);
   }
   return {
@@ -207,7 +204,7 @@ export function plateCombinedCore(
 export function cylinderCrossflowCore(props: AirProperties, V: number, D: number, warnings: Warnings) {
   const Re = (V * D) / props.nu_m2_s;
   const Pr = props.Pr;
-  warnRanges(warnings, "churchill-bernstein-cylinder", { RePr: Re * Pr });
+  warnRange(warnings, "churchill-bernstein-cylinder", "RePr", Re * Pr);
   const Nu = nuCylinderCrossflowChurchillBernstein(Re, Pr);
   return { h_W_m2K: (Nu * props.k_W_mK) / D, Nu, Re, Pr, correlation: "churchill-bernstein-cylinder" };
 }
@@ -221,7 +218,7 @@ export function rayleigh(props: AirProperties, dT: number, L: number): number {
 /** Horizontal cylinder, natural convection (Churchill & Chu), film properties. */
 export function cylinderNaturalCore(props: AirProperties, dT: number, D: number, warnings: Warnings) {
   const Ra = rayleigh(props, dT, D);
-  warnRanges(warnings, "churchill-chu-horizontal-cylinder", { Ra });
+  warnRange(warnings, "churchill-chu-horizontal-cylinder", "Ra", Ra);
   const Nu = nuHorizontalCylinderChurchillChu(Ra, props.Pr);
   return { h_W_m2K: (Nu * props.k_W_mK) / D, Nu, Ra, Pr: props.Pr, correlation: "churchill-chu-horizontal-cylinder" };
 }
@@ -239,7 +236,9 @@ export function sphereForcedCore(
   const ps = air(Ts, p, warnings, "T_surface_C");
   const Re = (V * D) / pa.nu_m2_s;
   const muRatio = pa.mu_Pa_s / ps.mu_Pa_s;
-  warnRanges(warnings, "whitaker-sphere", { Re, Pr: pa.Pr, mu_ratio: muRatio });
+  warnRange(warnings, "whitaker-sphere", "Re", Re);
+  warnRange(warnings, "whitaker-sphere", "Pr", pa.Pr);
+  warnRange(warnings, "whitaker-sphere", "mu_ratio", muRatio);
   const Nu = nuSphereForcedWhitaker(Re, pa.Pr, muRatio);
   return { h_W_m2K: (Nu * pa.k_W_mK) / D, Nu, Re, Pr: pa.Pr, mu_ratio: muRatio, correlation: "whitaker-sphere" };
 }
@@ -247,7 +246,8 @@ export function sphereForcedCore(
 /** Sphere, natural convection (Churchill), film properties. */
 export function sphereNaturalCore(props: AirProperties, dT: number, D: number, warnings: Warnings) {
   const Ra = rayleigh(props, dT, D);
-  warnRanges(warnings, "churchill-sphere-natural", { Ra, Pr: props.Pr });
+  warnRange(warnings, "churchill-sphere-natural", "Ra", Ra);
+  warnRange(warnings, "churchill-sphere-natural", "Pr", props.Pr);
   const Nu = nuSphereNaturalChurchill(Ra, props.Pr);
   return { h_W_m2K: (Nu * props.k_W_mK) / D, Nu, Ra, Pr: props.Pr, correlation: "churchill-sphere-natural" };
 }

@@ -2,13 +2,13 @@
  * The contract's case kinds: each reads its inputs (naming the field of any bad one), calls the
  * engine and returns the outputs with `correlation` and `warnings`.
  */
-import { CaseReader, InputError, readPressure, type CalcWarning, type Outputs } from "../contract";
+import { CaseReader, InputError, readPressure, type CalcResult, type CalcWarning } from "../contract";
 import { ductRunCore } from "../duct-run";
 import { hRadiation } from "../radiation/radiation";
 import { dewPointHylandWexler } from "../psychrometrics/dew-point";
 import { EXTERIOR_METHODS, surfaceCore } from "../surface";
 import { TERRAINS } from "../wind/wind-profile";
-import { air, toK, warnRanges } from "./common";
+import { air, toK, warnRange } from "./common";
 import {
   RE_CRIT_DEFAULT,
   cylinderCrossflowCore,
@@ -22,8 +22,7 @@ import {
 import { ROUGHNESS_DEFAULT_M, ductGeometry, ductInternalCore, type DuctSection } from "./internal";
 import { WIND_LAWS, windAtHeight } from "./wind";
 
-export type KindResult = Outputs & { correlation: string; warnings: CalcWarning[] };
-type KindFn = (r: CaseReader) => KindResult;
+type KindFn = (r: CaseReader, id: string | null) => CalcResult;
 
 const POS = { gt: 0 };
 const NONNEG = { min: 0 };
@@ -46,16 +45,16 @@ function ductSection(r: CaseReader): DuctSection {
 }
 
 export const KINDS: Readonly<Record<string, KindFn>> = {
-  air_properties(r) {
+  air_properties(r, id) {
     const warnings: CalcWarning[] = [];
     const T = toK(r.tempC("T_C"));
     const p = readPressure(r);
     const a = air(T, p, warnings);
     const { T_K: _t, p_Pa: _p, ...props } = a;
-    return { ...props, correlation: "air-lemmon-jacobsen", warnings };
+    return { id, ok: true, ...props, correlation: "air-lemmon-jacobsen", warnings };
   },
 
-  plate_forced(r) {
+  plate_forced(r, id) {
     const w: CalcWarning[] = [];
     const c = filmCase(r, w);
     const V = r.num("velocity_m_s", NONNEG);
@@ -63,18 +62,18 @@ export const KINDS: Readonly<Record<string, KindFn>> = {
     const x = r.has("x_m") ? r.num("x_m", { gt: 0, max: L, why: "x is measured from the leading edge, within the plate" }) : undefined;
     const ReCrit = r.optNum("Re_crit", RE_CRIT_DEFAULT, NONNEG);
     const { correlation_x: _cx, ...o } = plateForcedCore(c.props(), V, L, ReCrit, x, w);
-    return { ...o, warnings: w };
+    return { id, ok: true, ...o, warnings: w };
   },
 
-  plate_natural(r) {
+  plate_natural(r, id) {
     const w: CalcWarning[] = [];
     const c = filmCase(r, w);
     const tilt = r.num("tilt_deg", TILT);
     const L = r.num("length_m", POS);
-    return { ...plateNaturalCore(c.props(), c.Ts, c.Ta, tilt, L, w), warnings: w };
+    return { id, ok: true, ...plateNaturalCore(c.props(), c.Ts, c.Ta, tilt, L, w), warnings: w };
   },
 
-  plate_combined(r) {
+  plate_combined(r, id) {
     const w: CalcWarning[] = [];
     const c = filmCase(r, w);
     const V = r.num("velocity_m_s", NONNEG);
@@ -82,42 +81,42 @@ export const KINDS: Readonly<Record<string, KindFn>> = {
     const tilt = r.num("tilt_deg", TILT);
     const H = r.num("height_m", POS);
     const { forced: _f, natural: _n, ...o } = plateCombinedCore(c.props(), c.Ts, c.Ta, V, L, tilt, H, w);
-    return { ...o, warnings: w };
+    return { id, ok: true, ...o, warnings: w };
   },
 
-  cylinder_crossflow(r) {
+  cylinder_crossflow(r, id) {
     const w: CalcWarning[] = [];
     const c = filmCase(r, w);
     const V = r.num("velocity_m_s", NONNEG);
     const D = r.num("diameter_m", POS);
-    return { ...cylinderCrossflowCore(c.props(), V, D, w), warnings: w };
+    return { id, ok: true, ...cylinderCrossflowCore(c.props(), V, D, w), warnings: w };
   },
 
-  cylinder_natural(r) {
+  cylinder_natural(r, id) {
     const w: CalcWarning[] = [];
     const c = filmCase(r, w);
     const D = r.num("diameter_m", POS);
-    return { ...cylinderNaturalCore(c.props(), c.Ts - c.Ta, D, w), warnings: w };
+    return { id, ok: true, ...cylinderNaturalCore(c.props(), c.Ts - c.Ta, D, w), warnings: w };
   },
 
-  sphere_forced(r) {
+  sphere_forced(r, id) {
     const w: CalcWarning[] = [];
     const Ts = toK(r.tempC("T_surface_C"));
     const Ta = toK(r.tempC("T_air_C"));
     const p = readPressure(r);
     const V = r.num("velocity_m_s", NONNEG);
     const D = r.num("diameter_m", POS);
-    return { ...sphereForcedCore(Ts, Ta, V, D, p, w), warnings: w };
+    return { id, ok: true, ...sphereForcedCore(Ts, Ta, V, D, p, w), warnings: w };
   },
 
-  sphere_natural(r) {
+  sphere_natural(r, id) {
     const w: CalcWarning[] = [];
     const c = filmCase(r, w);
     const D = r.num("diameter_m", POS);
-    return { ...sphereNaturalCore(c.props(), c.Ts - c.Ta, D, w), warnings: w };
+    return { id, ok: true, ...sphereNaturalCore(c.props(), c.Ts - c.Ta, D, w), warnings: w };
   },
 
-  duct_internal(r) {
+  duct_internal(r, id) {
     const w: CalcWarning[] = [];
     const section = ductSection(r);
     const flow = r.num("flow_m3_s", { gt: 0, why: "a duct without flow has no inside film" });
@@ -126,10 +125,10 @@ export const KINDS: Readonly<Record<string, KindFn>> = {
     const rough = r.optNum("roughness_m", ROUGHNESS_DEFAULT_M, NONNEG);
     const p = readPressure(r);
     const props = air(T, p, w, "T_air_C");
-    return { ...ductInternalCore(props, section.shape, ductGeometry(section), flow, rough, w), warnings: w };
+    return { id, ok: true, ...ductInternalCore(props, section.shape, ductGeometry(section), flow, rough, w), warnings: w };
   },
 
-  wind_at_height(r) {
+  wind_at_height(r, id) {
     const w: CalcWarning[] = [];
     const V = r.num("V_met_m_s", NONNEG);
     const H = r.num("height_m", NONNEG);
@@ -137,27 +136,27 @@ export const KINDS: Readonly<Record<string, KindFn>> = {
     const law = r.oneOf("law", WIND_LAWS, "power");
     const Hmet = r.optNum("met_height_m", 10, POS);
     readPressure(r);
-    return { ...windAtHeight(V, H, terrain, law, Hmet, w), warnings: w };
+    return { id, ok: true, ...windAtHeight(V, H, terrain, law, Hmet, w), warnings: w };
   },
 
-  radiation(r) {
+  radiation(r, id) {
     const Ts = toK(r.tempC("T_surface_C"));
     const Tr = toK(r.tempC("T_surround_C"));
     const e = r.num("emissivity", FRACTION);
     readPressure(r);
-    return { h_r_W_m2K: hRadiation(Ts, Tr, e), correlation: "radiation-linearised", warnings: [] };
+    return { id, ok: true, h_r_W_m2K: hRadiation(Ts, Tr, e), correlation: "radiation-linearised", warnings: [] };
   },
 
-  dew_point(r) {
+  dew_point(r, id) {
     const w: CalcWarning[] = [];
     const T = r.tempC("T_C");
     const RH = r.num("RH_pct", { gt: 0, max: 100, why: "no dew point exists in perfectly dry air" });
     readPressure(r);
-    warnRanges(w, "dew-point-hyland-wexler", { T_C: T });
-    return { T_dp_C: dewPointHylandWexler(T, RH), correlation: "dew-point-hyland-wexler", warnings: w };
+    warnRange(w, "dew-point-hyland-wexler", "T_C", T);
+    return { id, ok: true, T_dp_C: dewPointHylandWexler(T, RH), correlation: "dew-point-hyland-wexler", warnings: w };
   },
 
-  surface(r) {
+  surface(r, id) {
     const w: CalcWarning[] = [];
     const R_construction = r.num("R_construction_m2K_W", NONNEG);
     const R_si = r.optNum("R_si_m2K_W", 0.13, NONNEG);
@@ -190,11 +189,35 @@ export const KINDS: Readonly<Record<string, KindFn>> = {
       },
       w,
     );
-    const { iterations: _i, ...o } = s;
-    return { ...o, warnings: w } as KindResult;
+    // Written out field by field: the contract's output names, and a fast path for large schedules.
+    return {
+      id,
+      ok: true,
+      V_local_m_s: s.V_local_m_s,
+      V_surface_m_s: s.V_surface_m_s,
+      windward: s.windward,
+      h_c_W_m2K: s.h_c_W_m2K,
+      h_r_W_m2K: s.h_r_W_m2K,
+      h_o_W_m2K: s.h_o_W_m2K,
+      T_surface_C: s.T_surface_C,
+      T_sky_C: s.T_sky_C,
+      T_radiant_C: s.T_radiant_C,
+      F_sky: s.F_sky,
+      T_solair_C: s.T_solair_C,
+      U_W_m2K: s.U_W_m2K,
+      q_W_m2: s.q_W_m2,
+      Q_W: s.Q_W,
+      regime: s.regime,
+      Re: s.combined === null ? null : s.combined.forced.Re,
+      Ri: s.combined === null ? null : s.combined.Ri,
+      Nu_forced: s.combined === null ? null : s.combined.Nu_forced,
+      Nu_natural: s.combined === null ? null : s.combined.Nu_natural,
+      correlation: s.correlation,
+      warnings: w,
+    };
   },
 
-  duct_run(r) {
+  duct_run(r, id) {
     const w: CalcWarning[] = [];
     const section = ductSection(r);
     const T_ambient_C = r.tempC("T_ambient_C");
@@ -218,7 +241,28 @@ export const KINDS: Readonly<Record<string, KindFn>> = {
       },
       w,
     );
-    return { ...o, warnings: w } as KindResult;
+    return {
+      id,
+      ok: true,
+      T_leaving_C: o.T_leaving_C,
+      Q_W: o.Q_W,
+      UA_per_m_W_mK: o.UA_per_m_W_mK,
+      h_i_W_m2K: o.h_i_W_m2K,
+      h_o_conv_W_m2K: o.h_o_conv_W_m2K,
+      h_o_rad_W_m2K: o.h_o_rad_W_m2K,
+      T_surface_entering_C: o.T_surface_entering_C,
+      T_surface_leaving_C: o.T_surface_leaving_C,
+      T_dp_C: o.T_dp_C,
+      condensation: o.condensation,
+      min_insulation_thickness_m: o.min_insulation_thickness_m,
+      regime: o.regime,
+      Re: o.Re,
+      velocity_m_s: o.velocity_m_s,
+      T_env_C: o.T_env_C,
+      mass_flow_kg_s: o.mass_flow_kg_s,
+      correlation: o.correlation,
+      warnings: w,
+    };
   },
 };
 

@@ -8,7 +8,7 @@ import {
   nuRoundDuctLaminar,
 } from "../convection/internal";
 import type { AirProperties } from "../properties/air";
-import { warnRanges, type Warnings } from "./common";
+import { warnRange, type Warnings } from "./common";
 
 export const RE_LAMINAR_MAX = 2300;
 export const RE_TURBULENT_MIN = 3000;
@@ -68,6 +68,8 @@ export function ductInternalCore(
   flow_m3_s: number,
   roughness_m: number,
   warnings: Warnings,
+  /** False where only the heat transfer is wanted (the duct-run iterations): f_darcy is then NaN. */
+  withFriction = true,
 ): DuctInternal {
   const V = flow_m3_s / g.area_m2;
   const Re = (V * g.Dh_m) / props.nu_m2_s;
@@ -88,15 +90,18 @@ export function ductInternalCore(
   } else if (Re < RE_TURBULENT_MIN) {
     const eD = roughness_m / g.Dh_m;
     Nu = blendLinear(Re, RE_LAMINAR_MAX, RE_TURBULENT_MIN, nuLam, nuDuctTurbulentGnielinski(RE_TURBULENT_MIN, Pr));
-    f = blendLinear(Re, RE_LAMINAR_MAX, RE_TURBULENT_MIN, fReLam / RE_LAMINAR_MAX, fDarcyColebrook(RE_TURBULENT_MIN, eD));
+    f = withFriction
+      ? blendLinear(Re, RE_LAMINAR_MAX, RE_TURBULENT_MIN, fReLam / RE_LAMINAR_MAX, fDarcyColebrook(RE_TURBULENT_MIN, eD))
+      : NaN;
     regime = "transitional";
     correlation = "duct-transitional-blend";
   } else {
     Nu = nuDuctTurbulentGnielinski(Re, Pr);
-    f = fDarcyColebrook(Re, roughness_m / g.Dh_m);
+    f = withFriction ? fDarcyColebrook(Re, roughness_m / g.Dh_m) : NaN;
     regime = "turbulent";
     correlation = "gnielinski-petukhov";
-    warnRanges(warnings, correlation, { Re, Pr });
+    warnRange(warnings, correlation, "Re", Re);
+    warnRange(warnings, correlation, "Pr", Pr);
   }
   return { velocity_m_s: V, Dh_m: g.Dh_m, Re, Pr, f_darcy: f, Nu, h_W_m2K: (Nu * props.k_W_mK) / g.Dh_m, regime, correlation };
 }

@@ -1,8 +1,8 @@
 /** Wind speed at a height by terrain and law, with the laws' validity warnings. */
 import type { Warnings } from "./common";
-import { warnRanges } from "./common";
+import { warnRange } from "./common";
 import { POWER_LAW, LOG_LAW, windSpeedLogLaw, windSpeedPowerLaw, type Terrain } from "../wind/wind-profile";
-import { checkRanges } from "../validity";
+import { checkRange } from "../validity";
 import { METHOD_BY_ID } from "../registry";
 
 export type WindLaw = "power" | "log";
@@ -19,15 +19,13 @@ export function windAtHeight(
   if (law === "power") {
     const id = "wind-power-law";
     // The gradient height depends on the terrain, so the range is built here from the law's data.
-    checkRanges(warnings, id, `${METHOD_BY_ID[id].title} (${terrain}: V is held constant above δ)`, {
-      height_m: { max: POWER_LAW[terrain].delta_m, unit: "m" },
-    }, { height_m: H });
+    const title = `${METHOD_BY_ID[id].title} (${terrain}: V is held constant above δ)`;
+    checkRange(warnings, id, title, "height_m", H, { max: POWER_LAW[terrain].delta_m, unit: "m" });
     return { V_m_s: windSpeedPowerLaw(Vmet, H, terrain, Hmet), correlation: id };
   }
   const id = "wind-log-law-en1991";
-  checkRanges(warnings, id, `${METHOD_BY_ID[id].title} (${terrain}: c_r is held constant below z_min)`, {
-    height_m: { min: LOG_LAW[terrain].zmin_m, unit: "m" },
-  }, { height_m: H });
-  warnRanges(warnings, id, { height_m: H });
+  const title = `${METHOD_BY_ID[id].title} (${terrain}: c_r is held constant below z_min)`;
+  checkRange(warnings, id, title, "height_m", H, { min: LOG_LAW[terrain].zmin_m, unit: "m" });
+  warnRange(warnings, id, "height_m", H);
   return { V_m_s: windSpeedLogLaw(Vmet, H, terrain, Hmet), correlation: id };
 }
