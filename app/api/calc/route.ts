@@ -1,0 +1,9 @@
+// POST /api/calc: calculation contract v1 (shared/design/calc-contract.md); same answer as `npm run calc`.
+import { CALC_LIMITS, ZCalcBody } from "@/schemas/calc";
+import { route } from "@/server/http/route";
+import { runCalc } from "@/server/services/run-calc";
+
+export const POST = route(
+  { body: ZCalcBody, invalidStatus: 400, maxBodyBytes: CALC_LIMITS.maxBytes },
+  ({ body }) => runCalc(body),
+);
