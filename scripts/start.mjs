@@ -31,13 +31,19 @@ process.on("SIGTERM", () => shutdown(0));
 
 async function main() {
   ensureNodeModules();
+  // Ports first: a second `npm start` must fail here, before it touches the running cluster.
+  for (const [port, what] of [[ports.app, "app"], [ports.smtp, "SMTP"], [ports.mailWeb, "mail web"], [ports.stripe, "Stripe stand-in"]]) {
+    await assertPortFree(port, what);
+  }
 
   // An explicit DATABASE_URL (e.g. the PostgreSQL of docker-compose.dev.yml) skips the private cluster.
   let url = process.env.DATABASE_URL;
   if (!url) {
     ensurePostgres();
     const dir = clusterDir("pg");
-    if (startCluster({ dir, port: ports.pg })) cluster = dir;
+    // The cluster is this checkout's own: stop it on exit even if a crashed run left it running.
+    await startCluster({ dir, port: ports.pg });
+    cluster = dir;
     url = databaseUrl(ports.pg, "filmsheet");
   }
   await ensureDatabase(url);
@@ -50,9 +56,6 @@ async function main() {
   ensureBuild();
 
   step("Starting the mail inbox, the Stripe stand-in and the app");
-  for (const [port, what] of [[ports.app, "app"], [ports.smtp, "SMTP"], [ports.mailWeb, "mail web"], [ports.stripe, "Stripe stand-in"]]) {
-    await assertPortFree(port, what);
-  }
   const mail = startMaildev(ports.smtp, ports.mailWeb);
   const stripe = startStripeStandIn(ports.stripe);
   services.push(mail.service, stripe.service);

@@ -19,7 +19,7 @@ import {
   startCluster,
   stopCluster,
 } from "./lib/bootstrap.mjs";
-import { runAsync, step, stopService } from "./lib/proc.mjs";
+import { assertPortFree, runAsync, step, stopService } from "./lib/proc.mjs";
 import { closingLine, countPlaywright, countVitest, readSuite, total } from "./lib/reports.mjs";
 import { DEFAULT_DEMO_PASSWORD, authSecret, portFromEnv, startApp, startStripeStandIn } from "./lib/services.mjs";
 
@@ -56,11 +56,14 @@ process.on("SIGTERM", () => finish({ passed: 0, failed: 1 }, ["terminated"]));
 async function bootstrap() {
   ensureNodeModules();
   ensureChromium();
+  await assertPortFree(ports.app, "test app");
+  await assertPortFree(ports.stripe, "test Stripe stand-in");
   let url = process.env.TEST_DATABASE_URL;
   if (!url) {
     ensurePostgres();
     const dir = clusterDir("pg-test");
-    if (startCluster({ dir, port: ports.pg, forTests: true })) cluster = dir;
+    await startCluster({ dir, port: ports.pg, forTests: true });
+    cluster = dir;
     url = databaseUrl(ports.pg, "filmsheet_test");
   }
   step("Creating a fresh test database, migrating and seeding");

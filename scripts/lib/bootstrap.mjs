@@ -5,7 +5,7 @@ import { chmodSync, chownSync, existsSync, mkdirSync, mkdtempSync, readdirSync, 
 import { tmpdir } from "node:os";
 import { dirname, join, relative } from "node:path";
 import { fileURLToPath } from "node:url";
-import { capture, run, runStatus, step } from "./proc.mjs";
+import { assertPortFree, capture, run, runStatus, step } from "./proc.mjs";
 
 export const ROOT = join(dirname(fileURLToPath(import.meta.url)), "..", "..");
 export const PG_BIN = process.env.PG_BIN ?? "/usr/lib/postgresql/15/bin";
@@ -151,11 +151,8 @@ export function clusterRunning(dir) {
   return existsSync(join(dir, "PG_VERSION")) && pgCapture("pg_ctl", ["status", "-D", dir]).status === 0;
 }
 
-/**
- * Creates the cluster when it does not exist, writes our settings and starts it.
- * Returns true when this call started it (so the caller knows to stop it).
- */
-export function startCluster({ dir, port, forTests = false }) {
+/** Creates the cluster when it does not exist, writes our settings and starts it (or reuses it). */
+export async function startCluster({ dir, port, forTests = false }) {
   if (!existsSync(join(dir, "PG_VERSION"))) initCluster(dir);
   const settings = [
     "# Written by scripts/lib/bootstrap.mjs at every start; edits here are overwritten.",
@@ -173,13 +170,13 @@ export function startCluster({ dir, port, forTests = false }) {
   if (clusterRunning(dir)) {
     if (runningPort(dir) === port) {
       console.log(`PostgreSQL already running on 127.0.0.1:${port} (${dir})`);
-      return false;
+      return;
     }
     stopCluster(dir);
   }
+  await assertPortFree(port, "PostgreSQL; set PG_PORT or TEST_PG_PORT to move it");
   step(`Starting PostgreSQL on 127.0.0.1:${port}`);
   pgRun("pg_ctl", ["start", "-D", dir, "-l", join(dir, "server.log"), "-w", "-t", "60", "-s"]);
-  return true;
 }
 
 export function stopCluster(dir) {
