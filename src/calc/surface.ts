@@ -3,16 +3,15 @@
  * chosen method, long-wave radiation to sky and ground, and the outside-face energy balance
  * (T_inside − T_s)/(R_si + R) + α·G = h_c (T_s − T_out) + h_r (T_s − T_r), solved for T_s.
  */
-import { T0 } from "./constants";
+import { SIGMA, T0 } from "./constants";
+import { airProperties } from "./properties/air";
 import { hcIso6946, hcMcAdams } from "./convection/empirical";
 import { hRadiation, radiantTemperature, skyTemperatureSwinbank, skyViewFactor } from "./radiation/radiation";
 import { air, type Warnings } from "./kinds/common";
-import { plateCombinedCore, type PlateCombined } from "./kinds/external";
-import type { CalcWarning } from "./contract";
+import { plateCombinedCore, warnPlateCombined, type PlateCombined } from "./kinds/external";
 import { windAtHeight } from "./kinds/wind";
 import type { Terrain } from "./wind/wind-profile";
 import { isWindward } from "./wind/wind-profile";
-import { solveFixedPoint } from "./solve";
 import { addWarning } from "./validity";
 
 export type ExteriorMethod = "boundary_layer" | "iso6946" | "mcadams";
@@ -64,7 +63,8 @@ export interface SurfaceResult {
   iterations: number;
 }
 
-const TOL_K = 1e-4;
+// A Newton step smaller than this means T_s is within it of the root (the contract asks 0.001 K).
+const TOL_K = 1e-3;
 
 /** Solves the outside-face balance and returns every output of the `surface` kind. */
 export function surfaceCore(s: SurfaceInput, warnings: Warnings): SurfaceResult {
@@ -81,34 +81,51 @@ export function surfaceCore(s: SurfaceInput, warnings: Warnings): SurfaceResult 
   const p = s.pressure_Pa;
 
   const hcFixed = s.method === "iso6946" ? hcIso6946(Vs) : s.method === "mcadams" ? hcMcAdams(Vs) : -1;
-  // Coefficients of the last evaluation: the returned T_s solves the linearised balance with
-  // exactly these, so the reported balance closes; range warnings of that evaluation are kept.
+  // The balance F(T_s) = (T_in − T_s)/R_in + α·G − h_c (T_s − T_out) − h_r (T_s − T_r) falls
+  // monotonically with T_s; Newton steps on it, kept inside a shrinking bracket. The slope counts
+  // the buoyant part's growth with ΔT (h_N ∝ ΔT^k, k = ¼ laminar, ⅓ turbulent, so
+  // d(h_c ΔT)/dT_s = h_c + k h_N³/h_c² for the cube-law combination) and radiation's 4εσT_s³.
   let hc = hcFixed;
   let hr = 0;
   let last: PlateCombined | null = null;
-  const scratch: CalcWarning[] | null = warnings === null ? null : [];
-  const next = (Ts: number): number => {
-    if (hcFixed < 0) {
-      if (scratch !== null) scratch.length = 0;
-      const props = air((Ts + To) / 2, p, scratch, "T_film_C");
-      last = plateCombinedCore(props, Ts, To, Vs, s.length_m, s.tilt_deg, s.panel_height_m, scratch);
-      hc = last.h_W_m2K;
-    }
-    hr = hRadiation(Ts, Tr, s.emissivity);
-    return (Tin / Rin + solar + hc * To + hr * Tr) / (1 / Rin + hc + hr);
-  };
-  // The balance residual falls monotonically with T_s, so the root lies in [lo, hi]. The start is
-  // the balance with a typical exterior coefficient (ISO 6946's) in place of the unknown one.
-  const lo = Math.min(Tin, To, Tr);
-  const hi = Math.max(Tin, To, Tr) + solar * Rin;
+  let lo = Math.min(Tin, To, Tr);
+  let hi = Math.max(Tin, To, Tr) + solar * Rin;
   const hGuess = (hcFixed >= 0 ? hcFixed : hcIso6946(Vs)) + 5;
-  const x0 = (Tin / Rin + solar + hGuess * To) / (1 / Rin + hGuess);
-  const solved = solveFixedPoint(next, lo, hi, x0, TOL_K);
-  if (!solved.converged) addWarning(warnings, "not_converged", "the surface balance did not converge to 0.001 K");
-  const iterations = solved.iterations;
-  const Ts = solved.x;
+  let x = (Tin / Rin + solar + hGuess * To) / (1 / Rin + hGuess);
+  let converged = false;
+  let iterations = 0;
+  const eps = s.emissivity;
+  while (iterations < 100) {
+    iterations++;
+    let slopeN = 0;
+    if (hcFixed < 0) {
+      last = plateCombinedCore(airProperties((x + To) / 2, p), x, To, Vs, s.length_m, s.tilt_deg, s.panel_height_m, null);
+      hc = last.h_W_m2K;
+      const hN = last.natural.h_W_m2K;
+      if (hc > 0) slopeN = ((last.natural.regime === "turbulent" ? 1 / 3 : 1 / 4) * hN * hN * hN) / (hc * hc);
+    }
+    hr = hRadiation(x, Tr, eps);
+    const F = (Tin - x) / Rin + solar - hc * (x - To) - hr * (x - Tr);
+    if (F > 0) lo = Math.max(lo, x);
+    else hi = Math.min(hi, x);
+    const step = F / (1 / Rin + hc + slopeN + 4 * eps * SIGMA * x * x * x);
+    if (Math.abs(step) < TOL_K) {
+      converged = true;
+      break;
+    }
+    const xn = x + step;
+    x = xn > lo && xn < hi ? xn : (lo + hi) / 2;
+  }
+  if (!converged) addWarning(warnings, "not_converged", "the surface balance did not converge to 0.001 K");
+  // T_s from the linearised balance with the coefficients just evaluated: the reported h_c and h_r
+  // then close the balance exactly (they are taken within 0.0001 K of T_s).
+  const Ts = (Tin / Rin + solar + hc * To + hr * Tr) / (1 / Rin + hc + hr);
   if (hcFixed >= 0) air((Ts + To) / 2, p, warnings, "T_film_C");
-  else if (warnings !== null && scratch !== null) for (const w of scratch) warnings.push(w);
+  else if (warnings !== null) {
+    // Range warnings of the state reported, worded once.
+    air((x + To) / 2, p, warnings, "T_film_C");
+    if (last !== null) warnPlateCombined(last, warnings);
+  }
   const combined = last as PlateCombined | null;
   const ho = hc + hr;
   const q = (Tin - Ts) / Rin;

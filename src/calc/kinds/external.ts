@@ -58,15 +58,13 @@ export function plateForcedCore(
     Nu = nuFlatPlateLaminarAverage(Re, Pr);
     regime = "laminar";
     correlation = "flat-plate-laminar";
-    warnRange(warnings, correlation, "Pr", Pr);
   } else {
     Nu = nuFlatPlateMixedAverage(Re, Pr, ReCrit);
     regime = ReCrit === 0 ? "turbulent" : "mixed";
     correlation = ReCrit === 0 ? "flat-plate-turbulent" : "flat-plate-mixed";
-    warnRange(warnings, correlation, "Re", Re);
-    warnRange(warnings, correlation, "Pr", Pr);
   }
   const out: PlateForced = { h_W_m2K: (Nu * props.k_W_mK) / L, Nu, Re, Pr, regime, correlation };
+  warnPlateForced(out, warnings);
   if (x !== undefined) {
     const Rex = (V * x) / props.nu_m2_s;
     let Nux: number;
@@ -95,6 +93,26 @@ export interface PlateNatural {
   Pr: number;
   regime: "laminar" | "turbulent";
   correlation: string;
+  /** Ra of the branch used: with g·cos θ or g·sin θ where the plate is inclined. */
+  Ra_effective: number;
+}
+
+/** Range warnings of the average flat-plate correlation used. */
+export function warnPlateForced(f: PlateForced, warnings: Warnings): void {
+  if (warnings === null) return;
+  if (f.regime !== "laminar") warnRange(warnings, f.correlation, "Re", f.Re);
+  warnRange(warnings, f.correlation, "Pr", f.Pr);
+}
+
+/** Range warnings of the natural-convection branch used (on its effective Rayleigh number). */
+export function warnPlateNatural(n: PlateNatural, warnings: Warnings): void {
+  if (warnings !== null) warnRange(warnings, n.correlation, "Ra", n.Ra_effective);
+}
+
+/** Range warnings of both parts of a combined coefficient. */
+export function warnPlateCombined(c: PlateCombined, warnings: Warnings): void {
+  warnPlateForced(c.forced, warnings);
+  warnPlateNatural(c.natural, warnings);
 }
 
 /**
@@ -147,8 +165,18 @@ export function plateNaturalCore(
       }
     }
   }
-  if (warnings !== null) warnRange(warnings, id, "Ra", RaEff);
-  return { h_W_m2K: (Nu * props.k_W_mK) / L, Nu, Ra, Gr, Pr, regime: turbulent ? "turbulent" : "laminar", correlation: id };
+  const out: PlateNatural = {
+    h_W_m2K: (Nu * props.k_W_mK) / L,
+    Nu,
+    Ra,
+    Gr,
+    Pr,
+    regime: turbulent ? "turbulent" : "laminar",
+    correlation: id,
+    Ra_effective: RaEff,
+  };
+  warnPlateNatural(out, warnings);
+  return out;
 }
 
 export interface PlateCombined {
@@ -182,10 +210,12 @@ export function plateCombinedCore(
   const NuN = (natural.Nu * L) / H;
   const Nu = nuCombinedChurchill(forced.Nu, NuN, 3);
   let Ri: number | null = null;
-  if (V > 0) {
+  const Re2 = forced.Re * forced.Re;
+  if (Re2 > 0) {
     const r = L / H;
-    const GrL = natural.Gr * r * r * r;
-    Ri = GrL / (forced.Re * forced.Re);
+    Ri = (natural.Gr * r * r * r) / Re2;
+    // A speed so small that Ri overflows is still air for this purpose.
+    if (!Number.isFinite(Ri)) Ri = null;
   }
   return {
     h_W_m2K: (Nu * props.k_W_mK) / L,

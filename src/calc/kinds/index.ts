@@ -70,7 +70,8 @@ export const KINDS: Readonly<Record<string, KindFn>> = {
     const c = filmCase(r, w);
     const tilt = r.num("tilt_deg", TILT);
     const L = r.num("length_m", POS);
-    return { id, ok: true, ...plateNaturalCore(c.props(), c.Ts, c.Ta, tilt, L, w), warnings: w };
+    const { Ra_effective: _r, ...o } = plateNaturalCore(c.props(), c.Ts, c.Ta, tilt, L, w);
+    return { id, ok: true, ...o, warnings: w };
   },
 
   plate_combined(r, id) {

@@ -75,8 +75,9 @@ export function ductInternalCore(
   const Re = (V * g.Dh_m) / props.nu_m2_s;
   const Pr = props.Pr;
   const round = shape === "round";
-  const nuLam = round ? nuRoundDuctLaminar() : nuRectangularLaminarShahLondon(g.aspect);
-  const fReLam = round ? 64 : fReRectangularShahLondon(g.aspect);
+  // Laminar values only below Re 3000, where they are used.
+  const nuLam = Re >= RE_TURBULENT_MIN ? NaN : round ? nuRoundDuctLaminar() : nuRectangularLaminarShahLondon(g.aspect);
+  const fReLam = Re >= RE_TURBULENT_MIN ? NaN : round ? 64 : fReRectangularShahLondon(g.aspect);
   const lamId = round ? "laminar-round-duct" : "shah-london-rectangular";
   let Nu: number;
   let f: number;
