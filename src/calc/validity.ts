@@ -20,8 +20,10 @@ function fmt(v: number): string {
   if (v === 0) return "0";
   const a = Math.abs(v);
   if (a >= 1e5 || a < 1e-3) return v.toExponential(3).replace("e+", "e");
-  return String(Number(v.toPrecision(4)));
+  return String(Math.round(v * 1000) / 1000);
 }
+
+const rangeTexts = new WeakMap<Range, string>();
 
 export function rangeText(r: Range): string {
   const u = r.unit ? ` ${r.unit}` : "";
@@ -49,9 +51,14 @@ export function checkRange(
 ): void {
   if (warnings === null || inRange(value, r)) return;
   const u = r.unit ? ` ${r.unit}` : "";
+  let text = rangeTexts.get(r);
+  if (text === undefined) {
+    text = rangeText(r);
+    rangeTexts.set(r, text);
+  }
   warnings.push({
     code: "out_of_range",
-    message: `${quantity} = ${fmt(value)}${u} is outside the range ${rangeText(r)} of ${title}; the value is extrapolated`,
+    message: `${quantity} = ${fmt(value)}${u} is outside the range ${text} of ${title}; the value is extrapolated`,
     method: methodId,
     quantity,
     value,

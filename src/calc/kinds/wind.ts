@@ -18,14 +18,18 @@ export function windAtHeight(
 ): { V_m_s: number; correlation: string } {
   if (law === "power") {
     const id = "wind-power-law";
-    // The gradient height depends on the terrain, so the range is built here from the law's data.
-    const title = `${METHOD_BY_ID[id].title} (${terrain}: V is held constant above δ)`;
-    checkRange(warnings, id, title, "height_m", H, { max: POWER_LAW[terrain].delta_m, unit: "m" });
+    // The gradient height depends on the terrain, so the range comes from the law's data.
+    if (warnings !== null && H > POWER_LAW[terrain].delta_m) {
+      const title = `${METHOD_BY_ID[id].title} (${terrain}: V is held constant above δ)`;
+      checkRange(warnings, id, title, "height_m", H, { max: POWER_LAW[terrain].delta_m, unit: "m" });
+    }
     return { V_m_s: windSpeedPowerLaw(Vmet, H, terrain, Hmet), correlation: id };
   }
   const id = "wind-log-law-en1991";
-  const title = `${METHOD_BY_ID[id].title} (${terrain}: c_r is held constant below z_min)`;
-  checkRange(warnings, id, title, "height_m", H, { min: LOG_LAW[terrain].zmin_m, unit: "m" });
+  if (warnings !== null && H < LOG_LAW[terrain].zmin_m) {
+    const title = `${METHOD_BY_ID[id].title} (${terrain}: c_r is held constant below z_min)`;
+    checkRange(warnings, id, title, "height_m", H, { min: LOG_LAW[terrain].zmin_m, unit: "m" });
+  }
   warnRange(warnings, id, "height_m", H);
   return { V_m_s: windSpeedLogLaw(Vmet, H, terrain, Hmet), correlation: id };
 }
