@@ -11,6 +11,15 @@ const kinds = Object.keys(sampleCases);
 const notANumber: unknown[] = ["abc", "", NaN, Infinity, -Infinity, {}, [], true, [1]];
 const notAWord: unknown[] = ["hexagon", "", 5, NaN, {}, [], true];
 
+/** A label for any generated value; String() itself throws on e.g. { toString: [] }. */
+function show(v: unknown): string {
+  try {
+    return typeof v === "number" ? String(v) : (JSON.stringify(v) ?? typeof v);
+  } catch {
+    return Object.prototype.toString.call(v);
+  }
+}
+
 /** "" when r is the expected field error, else a line saying what came back. */
 function fieldError(r: AnyResult, field: string, what: string): string {
   if (!r.ok && r.error.code === "invalid_input" && r.error.field === field) return "";
@@ -31,8 +40,7 @@ describe("nonsense in one input → invalid_input naming that input", () => {
       const required = !optionalInputs.has(field);
       const bad = [...(wordInputs.has(field) ? notAWord : notANumber), ...(required ? [null] : [])];
       for (const v of bad) {
-        const label = `${field} = ${typeof v === "number" ? String(v) : JSON.stringify(v)}`;
-        problems.push(fieldError(evaluate({ ...sample, [field]: v }), field, label));
+        problems.push(fieldError(evaluate({ ...sample, [field]: v }), field, `${field} = ${show(v)}`));
       }
       for (const v of outOfPhysics[`${kind}.${field}`] ?? outOfPhysics[field] ?? []) {
         problems.push(fieldError(evaluate({ ...sample, [field]: v }), field, `${field} = ${v} (out of physics)`));
@@ -84,7 +92,7 @@ describe("random nonsense never throws (fast-check)", () => {
         if (!r.ok) expect(r.error.code).toBe("invalid_input");
         const absentOptional = optionalInputs.has(field) && (v === undefined || v === null);
         if (!wordInputs.has(field) && typeof v !== "number" && !absentOptional) {
-          expect(fieldError(r, field, `${field} = ${String(v)}`)).toBe("");
+          expect(fieldError(r, field, `${field} = ${show(v)}`)).toBe("");
         }
       }),
       { numRuns: 300 },
