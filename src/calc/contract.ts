@@ -57,6 +57,23 @@ export interface NumberRule {
   why?: string;
 }
 
+/**
+ * A NumberRule with every bound present (±Infinity where there is none): one object shape for
+ * every rule, so the checks on the hot path read them without megamorphic lookups.
+ */
+export interface Rule {
+  readonly min: number;
+  readonly gt: number;
+  readonly max: number;
+  readonly why: string;
+}
+
+export function rule(r: NumberRule = {}): Rule {
+  return { min: r.min ?? -Infinity, gt: r.gt ?? -Infinity, max: r.max ?? Infinity, why: r.why ?? "" };
+}
+
+const ANY = rule();
+
 function describe(v: unknown): string {
   if (typeof v === "string") return JSON.stringify(v.length > 40 ? v.slice(0, 40) + "…" : v);
   if (v === null) return "null";
@@ -65,7 +82,13 @@ function describe(v: unknown): string {
   return String(v);
 }
 
-/** Reads and checks the fields of one case. Optional numbers are tested with `=== undefined`. */
+const TEMP_RULE = rule({ gt: -273.15, why: "absolute zero is −273.15 °C" });
+
+/**
+ * Reads and checks the fields of one case. Optional numbers are tested with `=== undefined`.
+ * The `…At` forms take the value the caller read by name (`raw.area_m2`): named reads are the
+ * fast path for the kinds that large schedules use; the short forms look the field up by key.
+ */
 export class CaseReader {
   constructor(readonly raw: Record<string, unknown>) {}
 
@@ -74,28 +97,39 @@ export class CaseReader {
   }
 
   /** A required finite number within the rule's bounds. */
-  num(field: string, rule: NumberRule = {}): number {
-    const v = this.raw[field];
+  num(field: string, rule: Rule = ANY): number {
+    return this.numAt(field, this.raw[field], rule);
+  }
+
+  numAt(field: string, v: unknown, rule: Rule = ANY): number {
     if (v === undefined) throw new InputError(field, `${field} is required`);
-    return this.check(field, v, rule);
+    return check(field, v, rule);
   }
 
   /** An optional finite number; `fallback` when absent. */
-  optNum(field: string, fallback: number, rule: NumberRule = {}): number {
-    const v = this.raw[field];
-    if (v === undefined) return fallback;
-    return this.check(field, v, rule);
+  optNum(field: string, fallback: number, rule: Rule = ANY): number {
+    return this.optNumAt(field, this.raw[field], fallback, rule);
+  }
+
+  optNumAt(field: string, v: unknown, fallback: number, rule: Rule = ANY): number {
+    return v === undefined ? fallback : check(field, v, rule);
   }
 
   /** A temperature in °C: finite and above absolute zero. */
   tempC(field: string, fallback?: number): number {
-    const rule = { gt: -273.15, why: "absolute zero is −273.15 °C" };
-    return fallback === undefined ? this.num(field, rule) : this.optNum(field, fallback, rule);
+    return this.tempCAt(field, this.raw[field], fallback);
+  }
+
+  tempCAt(field: string, v: unknown, fallback?: number): number {
+    return fallback === undefined ? this.numAt(field, v, TEMP_RULE) : this.optNumAt(field, v, fallback, TEMP_RULE);
   }
 
   /** One of a fixed set of words. */
   oneOf<T extends string>(field: string, options: readonly T[], fallback?: T): T {
-    const v = this.raw[field];
+    return this.oneOfAt(field, this.raw[field], options, fallback);
+  }
+
+  oneOfAt<T extends string>(field: string, v: unknown, options: readonly T[], fallback?: T): T {
     if (v === undefined) {
       if (fallback !== undefined) return fallback;
       throw new InputError(field, `${field} is required: one of ${options.join(", ")}`);
@@ -105,20 +139,25 @@ export class CaseReader {
     }
     return v as T;
   }
-
-  private check(field: string, v: unknown, rule: NumberRule): number {
-    if (typeof v !== "number" || !Number.isFinite(v)) {
-      throw new InputError(field, `${field} must be a finite number (got ${describe(v)})`);
-    }
-    const why = rule.why ? ` (${rule.why})` : "";
-    if (rule.gt !== undefined && !(v > rule.gt)) throw new InputError(field, `${field} must be > ${rule.gt}${why}`);
-    if (rule.min !== undefined && v < rule.min) throw new InputError(field, `${field} must be ≥ ${rule.min}${why}`);
-    if (rule.max !== undefined && v > rule.max) throw new InputError(field, `${field} must be ≤ ${rule.max}${why}`);
-    return v;
-  }
 }
+
+function check(field: string, v: unknown, r: Rule): number {
+  if (typeof v !== "number" || !Number.isFinite(v)) {
+    throw new InputError(field, `${field} must be a finite number (got ${describe(v)})`);
+  }
+  if (!(v > r.gt)) throw new InputError(field, `${field} must be > ${r.gt}${because(r)}`);
+  if (v < r.min) throw new InputError(field, `${field} must be ≥ ${r.min}${because(r)}`);
+  if (v > r.max) throw new InputError(field, `${field} must be ≤ ${r.max}${because(r)}`);
+  return v;
+}
+
+function because(r: Rule): string {
+  return r.why ? ` (${r.why})` : "";
+}
+
+export const PRESSURE = rule({ min: 1000, max: 200000, why: "site pressures lie between 1 kPa and 200 kPa" });
 
 /** Site pressure, the optional field of every kind. */
 export function readPressure(r: CaseReader): number {
-  return r.optNum("pressure_Pa", 101325, { min: 1000, max: 200000, why: "site pressures lie between 1 kPa and 200 kPa" });
+  return r.optNum("pressure_Pa", 101325, PRESSURE);
 }

@@ -7,14 +7,18 @@
 import { T0 } from "./constants";
 import { nuCombinedChurchill } from "./convection/combined";
 import { insulationResistanceRect, insulationResistanceRound, leavingAirTemperature } from "./convection/duct-heat";
-import { airProperties } from "./properties/air";
+import { airProperties, airPropertiesInto, newAirProperties, type AirProperties } from "./properties/air";
 import { dewPointHylandWexler } from "./psychrometrics/dew-point";
 import { hRadiation } from "./radiation/radiation";
 import { air, warnRange, type Warnings } from "./kinds/common";
-import { cylinderCrossflowCore, cylinderNaturalCore, plateNaturalCore } from "./kinds/external";
-import { ductGeometry, ductInternalCore, type DuctInternal, type DuctSection, type DuctShape } from "./kinds/internal";
+import { warnNaturalBranch } from "./kinds/external";
+import { grashof, newNaturalBranch, nuPlateNatural, type NaturalBranch } from "./select";
+import { nuCylinderCrossflowChurchillBernstein } from "./convection/forced-external";
+import { nuHorizontalCylinderChurchillChu } from "./convection/natural";
+import { ductGeometry, ductInternalCore, nuDuct, type DuctInternal, type DuctSection, type DuctShape } from "./kinds/internal";
 import { solveFixedPoint } from "./solve";
 import { addWarning } from "./validity";
+import type { CalcWarning } from "./contract";
 
 export interface DuctRunInput extends DuctSection {
   shape: DuctShape;
@@ -63,34 +67,62 @@ function outerSection(d: DuctRunInput, t: number, P_i: number): OuterSection {
   return { P_i, P_o, R_ins, D_o: 0, W_o: Wo, H_o: Ho };
 }
 
+/** Outside coefficients of the last evaluation, with the scratch objects reused by every call. */
 interface Outside {
   h_conv: number;
   h_rad: number;
+  props: AirProperties;
+  branch: NaturalBranch;
 }
 
-/** Outside convection and radiation at outer surface temperature Tso (K). */
-function outsideAt(d: DuctRunInput, o: OuterSection, Tso: number, V: number, warnings: Warnings): Outside {
+function newOutside(): Outside {
+  return { h_conv: 0, h_rad: 0, props: newAirProperties(), branch: newNaturalBranch() };
+}
+
+/** h of a natural-convection plate of length L at tilt, from film properties (warns via the branch). */
+function hPlate(c: Outside, Tso: number, Ta: number, tilt: number, L: number, warnings: Warnings): number {
+  const Ra = grashof(c.props, Tso - Ta, L) * c.props.Pr;
+  const Nu = nuPlateNatural(Ra, c.props.Pr, tilt, Tso >= Ta, c.branch);
+  warnNaturalBranch(c.branch, warnings);
+  return (Nu * c.props.k_W_mK) / L;
+}
+
+/** h across a cylinder of diameter D in wind V (Churchill & Bernstein), film properties. */
+function hCrossflow(c: Outside, V: number, D: number, warnings: Warnings): number {
+  const Re = (V * D) / c.props.nu_m2_s;
+  warnRange(warnings, "churchill-bernstein-cylinder", "RePr", Re * c.props.Pr);
+  return (nuCylinderCrossflowChurchillBernstein(Re, c.props.Pr) * c.props.k_W_mK) / D;
+}
+
+/** Outside convection and radiation at outer surface temperature Tso (K), written into `c`. */
+function outsideAt(d: DuctRunInput, o: OuterSection, Tso: number, V: number, warnings: Warnings, c: Outside): Outside {
   const Ta = d.T_ambient_C + T0;
-  const props = warnings === null ? airProperties((Tso + Ta) / 2, d.pressure_Pa) : air((Tso + Ta) / 2, d.pressure_Pa, warnings, "T_film_C");
+  const Tf = (Tso + Ta) / 2;
+  if (warnings !== null) air(Tf, d.pressure_Pa, warnings, "T_film_C");
+  const props = airPropertiesInto(Tf, d.pressure_Pa, c.props);
   let h: number;
   if (d.shape === "round") {
-    const hn = cylinderNaturalCore(props, Tso - Ta, o.D_o, warnings).h_W_m2K;
-    h = V > 0 ? nuCombinedChurchill(cylinderCrossflowCore(props, V, o.D_o, warnings).h_W_m2K, hn, 4) : hn;
+    const Ra = grashof(props, Tso - Ta, o.D_o) * props.Pr;
+    warnRange(warnings, "churchill-chu-horizontal-cylinder", "Ra", Ra);
+    const hn = (nuHorizontalCylinderChurchillChu(Ra, props.Pr) * props.k_W_mK) / o.D_o;
+    h = V > 0 ? nuCombinedChurchill(hCrossflow(c, V, o.D_o, warnings), hn, 4) : hn;
   } else {
     // Vertical sides on the outer height; top and bottom as horizontal plates on half the width.
-    const side = plateNaturalCore(props, Tso, Ta, 90, o.H_o, warnings).h_W_m2K;
-    const top = plateNaturalCore(props, Tso, Ta, 0, o.W_o / 2, warnings).h_W_m2K;
-    const bottom = plateNaturalCore(props, Tso, Ta, 180, o.W_o / 2, warnings).h_W_m2K;
+    const side = hPlate(c, Tso, Ta, 90, o.H_o, warnings);
+    const top = hPlate(c, Tso, Ta, 0, o.W_o / 2, warnings);
+    const bottom = hPlate(c, Tso, Ta, 180, o.W_o / 2, warnings);
     const hn = (2 * o.H_o * side + o.W_o * (top + bottom)) / (2 * (o.H_o + o.W_o));
     // Wind across the duct on the equivalent diameter P_o/π; same length and k, so h combines as Nu.
-    h = V > 0 ? nuCombinedChurchill(cylinderCrossflowCore(props, V, o.P_o / Math.PI, warnings).h_W_m2K, hn, 3) : hn;
+    h = V > 0 ? nuCombinedChurchill(hCrossflow(c, V, o.P_o / Math.PI, warnings), hn, 3) : hn;
   }
-  return { h_conv: h, h_rad: hRadiation(Tso, d.T_surround_C + T0, d.jacket_emissivity) };
+  c.h_conv = h;
+  c.h_rad = hRadiation(Tso, d.T_surround_C + T0, d.jacket_emissivity);
+  return c;
 }
 
 /**
- * Outer surface temperature (K) for air at Tair (K) behind the resistance Rin (K·m/W), with the
- * outside coefficients of the last evaluation (the returned T_s solves the balance with them).
+ * Outer surface temperature (K) for air at Tair (K) behind the resistance Rin (K·m/W); `c` holds
+ * the outside coefficients of the last evaluation (the returned T_s solves the balance with them).
  */
 function surfaceTemperature(
   d: DuctRunInput,
@@ -99,16 +131,16 @@ function surfaceTemperature(
   Rin: number,
   V: number,
   x0: number,
-): { Ts: number; converged: boolean; c: Outside } {
+  c: Outside,
+): { Ts: number; converged: boolean } {
   const Ta = d.T_ambient_C + T0;
   const Tsur = d.T_surround_C + T0;
-  let c: Outside = { h_conv: 0, h_rad: 0 };
   const next = (Ts: number): number => {
-    c = outsideAt(d, o, Ts, V, null);
+    outsideAt(d, o, Ts, V, null, c);
     return (Tair / Rin + o.P_o * (c.h_conv * Ta + c.h_rad * Tsur)) / (1 / Rin + o.P_o * (c.h_conv + c.h_rad));
   };
   const s = solveFixedPoint(next, Math.min(Tair, Ta, Tsur), Math.max(Tair, Ta, Tsur), x0, TOL_K);
-  return { Ts: s.x, converged: s.converged, c };
+  return { Ts: s.x, converged: s.converged };
 }
 
 export interface DuctRunState {
@@ -122,7 +154,8 @@ export interface DuctRunState {
   Ts_leaving_K: number;
   T_env_K: number;
   mdot_kg_s: number;
-  internal: ReturnType<typeof ductInternalCore>;
+  /** The inside flow in full; only when warnings were asked for (the reported state). */
+  internal: DuctInternal | null;
   converged: boolean;
 }
 
@@ -131,25 +164,44 @@ export interface DuctRunState {
  * only the end with the colder air gets its surface temperature (the other is NaN): that end has
  * the colder surface, which is all the condensation search needs.
  */
-export function evaluateDuctRun(d: DuctRunInput, t: number, V: number, warnings: Warnings, bothEnds = true): DuctRunState {
+export function evaluateDuctRun(
+  d: DuctRunInput,
+  t: number,
+  V: number,
+  warnings: Warnings,
+  bothEnds = true,
+  c: Outside = newOutside(),
+): DuctRunState {
   const g = ductGeometry(d);
+  const round = d.shape === "round";
   const o = outerSection(d, t, g.perimeter_m);
   const TE = d.T_entering_C + T0;
   const Ta = d.T_ambient_C + T0;
   const Tsur = d.T_surround_C + T0;
-  const mdot = airProperties(TE, d.pressure_Pa).rho_kg_m3 * d.flow_m3_s;
+  const p = d.pressure_Pa;
+  const pin = airPropertiesInto(TE, p, newAirProperties());
+  const mdot = pin.rho_kg_m3 * d.flow_m3_s;
+  const velocity = d.flow_m3_s / g.area_m2;
+  // Inside film (bulk properties at the mean air temperature) as a resistance per metre.
+  const insideR = (Tm: number): number => {
+    airPropertiesInto(Tm, p, pin);
+    const Re = (velocity * g.Dh_m) / pin.nu_m2_s;
+    hi = (nuDuct(Re, pin.Pr, g, round) * pin.k_W_mK) / g.Dh_m;
+    return 1 / (hi * o.P_i) + o.R_ins;
+  };
+  let hi = 0;
   // Coefficients at the mean air temperature, which depends on the leaving temperature, and
   // outside coefficients at the outer surface temperature: one joint fixed-point iteration on
   // (T_mean, T_so), with secant steps on T_so kept inside the temperatures of the problem.
   const lo = Math.min(TE, Ta, Tsur);
-  const hi = Math.max(TE, Ta, Tsur);
+  const up = Math.max(TE, Ta, Tsur);
   let Tm = TE;
-  let Rin = 1 / (ductInternalCore(airProperties(TE, d.pressure_Pa), d.shape, g, d.flow_m3_s, d.roughness_m, null, false).h_W_m2K * o.P_i) + o.R_ins;
+  let Rin = insideR(TE);
   const h0 = 8 + 4 * V; // a typical still-air or windy outside coefficient, for the first guess only
   let Tso = (Tm / Rin + o.P_o * h0 * Ta) / (1 / Rin + o.P_o * h0);
   let converged = false;
-  let internal: DuctInternal | undefined;
-  let c: Outside = { h_conv: 0, h_rad: 0 };
+  let hConv = 0;
+  let hRad = 0;
   let UA = 0;
   let TL = TE;
   let Tenv = Ta;
@@ -157,15 +209,15 @@ export function evaluateDuctRun(d: DuctRunInput, t: number, V: number, warnings:
   let prevX = NaN;
   let prevG = NaN;
   for (let i = 0; i < 200; i++) {
-    const pin = airProperties(Tm, d.pressure_Pa);
-    internal = ductInternalCore(pin, d.shape, g, d.flow_m3_s, d.roughness_m, null, false);
-    Rin = 1 / (internal.h_W_m2K * o.P_i) + o.R_ins;
-    c = outsideAt(d, o, Tso, V, null);
-    const ho = c.h_conv + c.h_rad;
-    const TsoNew = (Tm / Rin + o.P_o * (c.h_conv * Ta + c.h_rad * Tsur)) / (1 / Rin + o.P_o * ho);
-    UA = 1 / (Rin + 1 / (ho * o.P_o));
-    Tenv = (c.h_conv * Ta + c.h_rad * Tsur) / ho;
+    Rin = insideR(Tm);
     cp = pin.cp_J_kgK;
+    outsideAt(d, o, Tso, V, null, c);
+    hConv = c.h_conv;
+    hRad = c.h_rad;
+    const ho = hConv + hRad;
+    const TsoNew = (Tm / Rin + o.P_o * (hConv * Ta + hRad * Tsur)) / (1 / Rin + o.P_o * ho);
+    UA = 1 / (Rin + 1 / (ho * o.P_o));
+    Tenv = (hConv * Ta + hRad * Tsur) / ho;
     TL = leavingAirTemperature(TE, Tenv, UA, d.length_m, mdot, cp);
     const TmNew = (TE + TL) / 2;
     const gap = TsoNew - Tso;
@@ -177,31 +229,31 @@ export function evaluateDuctRun(d: DuctRunInput, t: number, V: number, warnings:
     let x = TsoNew;
     if (prevG === prevG && gap !== prevG) {
       const sec = Tso - (gap * (Tso - prevX)) / (gap - prevG);
-      if (sec > lo && sec < hi) x = sec;
+      if (sec > lo && sec < up) x = sec;
     }
     prevX = Tso;
     prevG = gap;
     Tso = x;
     Tm = TmNew;
   }
+  let internal: DuctInternal | null = null;
   if (warnings !== null) {
-    // Warnings of the state reported: inside flow at the mean temperature, outside at T_so.
-    const pin = air(Tm, d.pressure_Pa, warnings, "T_mean_C");
-    internal = ductInternalCore(pin, d.shape, g, d.flow_m3_s, d.roughness_m, warnings);
-    outsideAt(d, o, Tso, V, warnings);
+    // The reported state in full, with its warnings: inside flow at T_mean, outside at T_so.
+    internal = ductInternalCore(air(Tm, p, warnings, "T_mean_C"), d.shape, g, d.flow_m3_s, d.roughness_m, warnings);
+    outsideAt(d, o, Tso, V, warnings, c);
   }
   let TsE = NaN;
   let TsL = NaN;
   // First guess at an end: the mean surface temperature moved by the share of the outside film.
-  const Rout = 1 / ((c.h_conv + c.h_rad) * o.P_o);
+  const Rout = 1 / ((hConv + hRad) * o.P_o);
   const shift = Rout / (Rin + Rout);
   if (bothEnds || TE <= TL) {
-    const sE = surfaceTemperature(d, o, TE, Rin, V, Tso + (TE - Tm) * shift);
+    const sE = surfaceTemperature(d, o, TE, Rin, V, Tso + (TE - Tm) * shift, c);
     TsE = sE.Ts;
     converged &&= sE.converged;
   }
   if (bothEnds || TL < TE) {
-    const sL = surfaceTemperature(d, o, TL, Rin, V, Tso + (TL - Tm) * shift);
+    const sL = surfaceTemperature(d, o, TL, Rin, V, Tso + (TL - Tm) * shift, c);
     TsL = sL.Ts;
     converged &&= sL.converged;
   }
@@ -209,14 +261,14 @@ export function evaluateDuctRun(d: DuctRunInput, t: number, V: number, warnings:
     T_leaving_K: TL,
     Q_W: mdot * cp * (TL - TE),
     UA_per_m: UA,
-    h_i: (internal as DuctInternal).h_W_m2K,
-    h_o_conv: c.h_conv,
-    h_o_rad: c.h_rad,
+    h_i: hi,
+    h_o_conv: hConv,
+    h_o_rad: hRad,
     Ts_entering_K: TsE,
     Ts_leaving_K: TsL,
     T_env_K: Tenv,
     mdot_kg_s: mdot,
-    internal: internal as DuctInternal,
+    internal,
     converged,
   };
 }
@@ -238,10 +290,11 @@ function coldestSurface(st: DuctRunState): number {
 export function minInsulationThickness(d: DuctRunInput, TdpK: number): number | null {
   const limit = TdpK + d.margin_K;
   const margins = new Map<number, number>();
+  const c = newOutside();
   const margin = (n: number): number => {
     let m = margins.get(n);
     if (m === undefined) {
-      m = coldestSurface(evaluateDuctRun(d, n * STEP_M, 0, null, false)) - limit;
+      m = coldestSurface(evaluateDuctRun(d, n * STEP_M, 0, null, false, c)) - limit;
       margins.set(n, m);
     }
     return m;
@@ -300,12 +353,13 @@ function estimateSteps(d: DuctRunInput, limit: number, nMax: number): number {
   const TE = d.T_entering_C + T0;
   const Ta = d.T_ambient_C + T0;
   const Tsur = d.T_surround_C + T0;
-  const hi = ductInternalCore(airProperties(TE, d.pressure_Pa), d.shape, g, d.flow_m3_s, d.roughness_m, null, false).h_W_m2K;
-  const Ri = 1 / (hi * g.perimeter_m);
+  const pin = airProperties(TE, d.pressure_Pa);
+  const Re = (d.flow_m3_s / g.area_m2) * g.Dh_m / pin.nu_m2_s;
+  const Ri = 1 / ((nuDuct(Re, pin.Pr, g, d.shape === "round") * pin.k_W_mK / g.Dh_m) * g.perimeter_m);
   let lo = 0;
   let up = nMax;
   const o0 = outerSection(d, 0, g.perimeter_m);
-  const c = outsideAt(d, o0, limit, 0, null);
+  const c = outsideAt(d, o0, limit, 0, null, newOutside());
   const ho = c.h_conv + c.h_rad;
   const Tenv = (c.h_conv * Ta + c.h_rad * Tsur) / ho;
   const Tair = Math.min(TE, Tenv);
@@ -340,7 +394,7 @@ export interface DuctRunResult {
   mass_flow_kg_s: number;
 }
 
-export function ductRunCore(d: DuctRunInput, warnings: Warnings): DuctRunResult {
+export function ductRunCore(d: DuctRunInput, warnings: CalcWarning[]): DuctRunResult {
   const st = evaluateDuctRun(d, d.insulation_thickness_m, d.V_wind_m_s, warnings);
   if (!st.converged) addWarning(warnings, "not_converged", "the duct-run balance did not converge");
   warnRange(warnings, "dew-point-hyland-wexler", "T_C", d.T_ambient_C);
@@ -358,10 +412,10 @@ export function ductRunCore(d: DuctRunInput, warnings: Warnings): DuctRunResult 
     T_dp_C: Tdp,
     condensation: coldestSurface(st) < TdpK + d.margin_K,
     min_insulation_thickness_m: minInsulationThickness(d, TdpK),
-    regime: st.internal.regime,
+    regime: (st.internal as DuctInternal).regime,
     correlation: "duct-run-exponential",
-    Re: st.internal.Re,
-    velocity_m_s: st.internal.velocity_m_s,
+    Re: (st.internal as DuctInternal).Re,
+    velocity_m_s: (st.internal as DuctInternal).velocity_m_s,
     T_env_C: st.T_env_K - T0,
     mass_flow_kg_s: st.mdot_kg_s,
   };

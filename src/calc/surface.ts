@@ -4,11 +4,13 @@
  * (T_inside − T_s)/(R_si + R) + α·G = h_c (T_s − T_out) + h_r (T_s − T_r), solved for T_s.
  */
 import { SIGMA, T0 } from "./constants";
-import { airProperties } from "./properties/air";
+import { airPropertiesInto, newAirProperties } from "./properties/air";
 import { hcIso6946, hcMcAdams } from "./convection/empirical";
 import { hRadiation, radiantTemperature, skyTemperatureSwinbank, skyViewFactor } from "./radiation/radiation";
-import { air, type Warnings } from "./kinds/common";
-import { plateCombinedCore, warnPlateCombined, type PlateCombined } from "./kinds/external";
+import { air } from "./kinds/common";
+import { RE_CRIT_DEFAULT, plateCombinedResult, warnPlateCombined } from "./kinds/external";
+import type { CalcWarning } from "./contract";
+import { newPlateCombinedState, plateCombinedInto } from "./select";
 import { windAtHeight } from "./kinds/wind";
 import type { Terrain } from "./wind/wind-profile";
 import { isWindward } from "./wind/wind-profile";
@@ -17,6 +19,7 @@ import { addWarning } from "./validity";
 export type ExteriorMethod = "boundary_layer" | "iso6946" | "mcadams";
 export const EXTERIOR_METHODS: readonly ExteriorMethod[] = ["boundary_layer", "iso6946", "mcadams"];
 
+/** Inputs of the `surface` kind, already checked; optional ones take the contract's defaults. */
 export interface SurfaceInput {
   area_m2: number;
   tilt_deg: number;
@@ -25,23 +28,41 @@ export interface SurfaceInput {
   length_m: number;
   panel_height_m: number;
   R_construction_m2K_W: number;
-  R_si_m2K_W: number;
+  /** Default 0.13 m²K/W. */
+  R_si_m2K_W?: number;
   T_inside_C: number;
   T_outside_C: number;
   V_met_m_s: number;
   wind_from_deg: number;
   terrain: Terrain;
-  law: "power" | "log";
-  met_height_m: number;
+  /** Default "power". */
+  law?: "power" | "log";
+  /** Default 10 m. */
+  met_height_m?: number;
   emissivity: number;
   absorptance: number;
-  solar_W_m2: number;
+  /** Default 0 W/m². */
+  solar_W_m2?: number;
   method: ExteriorMethod;
-  leeward_factor: number;
-  pressure_Pa: number;
+  /** Default 0.25. */
+  leeward_factor?: number;
+  /** Default 101 325 Pa. */
+  pressure_Pa?: number;
 }
 
-export interface SurfaceResult {
+export const SURFACE_DEFAULTS = {
+  R_si_m2K_W: 0.13,
+  law: "power",
+  met_height_m: 10,
+  solar_W_m2: 0,
+  leeward_factor: 0.25,
+  pressure_Pa: 101325,
+} as const;
+
+/** The `surface` result of the contract, envelope included (built once, in its final shape). */
+export type SurfaceResult = {
+  id: string | null;
+  ok: true;
   V_local_m_s: number;
   V_surface_m_s: number;
   windward: boolean;
@@ -50,35 +71,38 @@ export interface SurfaceResult {
   h_o_W_m2K: number;
   T_surface_C: number;
   T_sky_C: number;
-  T_radiant_C: number;
-  F_sky: number;
   T_solair_C: number;
   U_W_m2K: number;
   q_W_m2: number;
   Q_W: number;
   regime: string;
   correlation: string;
-  /** Boundary-layer method only: the combined coefficient and its parts, as last evaluated. */
-  combined: PlateCombined | null;
-  iterations: number;
-}
+  warnings: CalcWarning[];
+};
 
 // A Newton step smaller than this means T_s is within it of the root (the contract asks 0.001 K).
 const TOL_K = 1e-3;
 
-/** Solves the outside-face balance and returns every output of the `surface` kind. */
-export function surfaceCore(s: SurfaceInput, warnings: Warnings): SurfaceResult {
-  const wind = windAtHeight(s.V_met_m_s, s.height_m, s.terrain, s.law, s.met_height_m, warnings);
+/**
+ * Solves the outside-face balance and returns the `surface` result of the contract. The result
+ * is built in its final shape here, not copied, because large schedules spend their time on it.
+ */
+export function surfaceCore(s: SurfaceInput, warnings: CalcWarning[], id: string | null = null): SurfaceResult {
+  const d = SURFACE_DEFAULTS;
+  const law = s.law === undefined ? d.law : s.law;
+  const metHeight = s.met_height_m === undefined ? d.met_height_m : s.met_height_m;
+  const leeward = s.leeward_factor === undefined ? d.leeward_factor : s.leeward_factor;
+  const wind = windAtHeight(s.V_met_m_s, s.height_m, s.terrain, law, metHeight, warnings);
   const windward = isWindward(s.wind_from_deg, s.azimuth_deg, s.tilt_deg);
-  const Vs = windward ? wind.V_m_s : s.leeward_factor * wind.V_m_s;
+  const Vs = windward ? wind.V_m_s : leeward * wind.V_m_s;
   const Tin = s.T_inside_C + T0;
   const To = s.T_outside_C + T0;
-  const Rin = s.R_si_m2K_W + s.R_construction_m2K_W;
-  const solar = s.absorptance * s.solar_W_m2;
+  const Rin = (s.R_si_m2K_W === undefined ? d.R_si_m2K_W : s.R_si_m2K_W) + s.R_construction_m2K_W;
+  const solar = s.absorptance * (s.solar_W_m2 === undefined ? d.solar_W_m2 : s.solar_W_m2);
   const Tsky = skyTemperatureSwinbank(To);
   const Fsky = skyViewFactor(s.tilt_deg);
   const Tr = radiantTemperature(Fsky, Tsky, To);
-  const p = s.pressure_Pa;
+  const p = s.pressure_Pa === undefined ? d.pressure_Pa : s.pressure_Pa;
 
   const hcFixed = s.method === "iso6946" ? hcIso6946(Vs) : s.method === "mcadams" ? hcMcAdams(Vs) : -1;
   // The balance F(T_s) = (T_in − T_s)/R_in + α·G − h_c (T_s − T_out) − h_r (T_s − T_r) falls
@@ -87,7 +111,8 @@ export function surfaceCore(s: SurfaceInput, warnings: Warnings): SurfaceResult 
   // d(h_c ΔT)/dT_s = h_c + k h_N³/h_c² for the cube-law combination) and radiation's 4εσT_s³.
   let hc = hcFixed;
   let hr = 0;
-  let last: PlateCombined | null = null;
+  const props = newAirProperties();
+  const state = hcFixed < 0 ? newPlateCombinedState() : null;
   let lo = Math.min(Tin, To, Tr);
   let hi = Math.max(Tin, To, Tr) + solar * Rin;
   const hGuess = (hcFixed >= 0 ? hcFixed : hcIso6946(Vs)) + 5;
@@ -98,11 +123,11 @@ export function surfaceCore(s: SurfaceInput, warnings: Warnings): SurfaceResult 
   while (iterations < 100) {
     iterations++;
     let slopeN = 0;
-    if (hcFixed < 0) {
-      last = plateCombinedCore(airProperties((x + To) / 2, p), x, To, Vs, s.length_m, s.tilt_deg, s.panel_height_m, null);
-      hc = last.h_W_m2K;
-      const hN = last.natural.h_W_m2K;
-      if (hc > 0) slopeN = ((last.natural.regime === "turbulent" ? 1 / 3 : 1 / 4) * hN * hN * hN) / (hc * hc);
+    if (state !== null) {
+      airPropertiesInto((x + To) / 2, p, props);
+      hc = plateCombinedInto(props, x, To, Vs, s.length_m, s.tilt_deg, s.panel_height_m, RE_CRIT_DEFAULT, state);
+      const hN = state.hN;
+      if (hc > 0) slopeN = ((state.natural.turbulent ? 1 / 3 : 1 / 4) * hN * hN * hN) / (hc * hc);
     }
     hr = hRadiation(x, Tr, eps);
     const F = (Tin - x) / Rin + solar - hc * (x - To) - hr * (x - Tr);
@@ -121,12 +146,12 @@ export function surfaceCore(s: SurfaceInput, warnings: Warnings): SurfaceResult 
   // then close the balance exactly (they are taken within 0.0001 K of T_s).
   const Ts = (Tin / Rin + solar + hc * To + hr * Tr) / (1 / Rin + hc + hr);
   if (hcFixed >= 0) air((Ts + To) / 2, p, warnings, "T_film_C");
-  else if (warnings !== null) {
+  else {
     // Range warnings of the state reported, worded once.
     air((x + To) / 2, p, warnings, "T_film_C");
-    if (last !== null) warnPlateCombined(last, warnings);
+    if (state !== null) warnPlateCombined(state, warnings);
   }
-  const combined = last as PlateCombined | null;
+  const combined = state === null ? null : plateCombinedResult(state);
   const ho = hc + hr;
   const q = (Tin - Ts) / Rin;
   let Tsolair: number;
@@ -141,6 +166,8 @@ export function surfaceCore(s: SurfaceInput, warnings: Warnings): SurfaceResult 
     U = 0;
   }
   return {
+    id,
+    ok: true,
     V_local_m_s: wind.V_m_s,
     V_surface_m_s: Vs,
     windward,
@@ -149,8 +176,6 @@ export function surfaceCore(s: SurfaceInput, warnings: Warnings): SurfaceResult 
     h_o_W_m2K: ho,
     T_surface_C: Ts - T0,
     T_sky_C: Tsky - T0,
-    T_radiant_C: Tr - T0,
-    F_sky: Fsky,
     T_solair_C: Tsolair - T0,
     U_W_m2K: U,
     q_W_m2: q,
@@ -158,7 +183,6 @@ export function surfaceCore(s: SurfaceInput, warnings: Warnings): SurfaceResult 
     regime: combined === null ? "empirical" : combined.regime,
     correlation:
       combined !== null ? combined.correlation : s.method === "iso6946" ? "iso6946-simplified" : "mcadams-wind",
-    combined,
-    iterations,
+    warnings,
   };
 }

@@ -3,29 +3,29 @@
  * The *Core functions take kelvin and numbers, so that `surface` and `duct_run` can call them in
  * their iterations without re-reading input; warnings are collected only when a list is passed.
  */
-import { G } from "../constants";
-import { nuCombinedChurchill, regimeFromRichardson } from "../convection/combined";
+import { regimeFromRichardson } from "../convection/combined";
 import {
   nuCylinderCrossflowChurchillBernstein,
-  nuFlatPlateLaminarAverage,
   nuFlatPlateLaminarLocal,
-  nuFlatPlateMixedAverage,
   nuFlatPlateTurbulentLocal,
   nuSphereForcedWhitaker,
 } from "../convection/forced-external";
+import { nuHorizontalCylinderChurchillChu, nuSphereNaturalChurchill } from "../convection/natural";
 import {
-  nuHorizontalCylinderChurchillChu,
-  nuHorizontalPlateStable,
-  nuHorizontalPlateUnstableLaminar,
-  nuHorizontalPlateUnstableTurbulent,
-  nuSphereNaturalChurchill,
-  nuVerticalPlateChurchillChu,
-} from "../convection/natural";
+  grashof,
+  newNaturalBranch,
+  newPlateCombinedState,
+  nuPlateForced,
+  nuPlateNatural,
+  plateCombinedInto,
+  plateForcedBranch,
+  type NaturalBranch,
+  type PlateCombinedState,
+} from "../select";
 import type { AirProperties } from "../properties/air";
 import { air, warnRange, type Warnings } from "./common";
 
 export const RE_CRIT_DEFAULT = 5e5;
-const DEG = Math.PI / 180;
 
 export interface PlateForced {
   h_W_m2K: number;
@@ -51,19 +51,9 @@ export function plateForcedCore(
 ): PlateForced {
   const Re = (V * L) / props.nu_m2_s;
   const Pr = props.Pr;
-  let Nu: number;
-  let regime: PlateForced["regime"];
-  let correlation: string;
-  if (Re <= ReCrit) {
-    Nu = nuFlatPlateLaminarAverage(Re, Pr);
-    regime = "laminar";
-    correlation = "flat-plate-laminar";
-  } else {
-    Nu = nuFlatPlateMixedAverage(Re, Pr, ReCrit);
-    regime = ReCrit === 0 ? "turbulent" : "mixed";
-    correlation = ReCrit === 0 ? "flat-plate-turbulent" : "flat-plate-mixed";
-  }
-  const out: PlateForced = { h_W_m2K: (Nu * props.k_W_mK) / L, Nu, Re, Pr, regime, correlation };
+  const Nu = nuPlateForced(Re, Pr, ReCrit);
+  const branch = plateForcedBranch(Re, ReCrit);
+  const out: PlateForced = { h_W_m2K: (Nu * props.k_W_mK) / L, Nu, Re, Pr, regime: branch.regime, correlation: branch.id };
   warnPlateForced(out, warnings);
   if (x !== undefined) {
     const Rex = (V * x) / props.nu_m2_s;
@@ -105,22 +95,11 @@ export function warnPlateForced(f: PlateForced, warnings: Warnings): void {
 }
 
 /** Range warnings of the natural-convection branch used (on its effective Rayleigh number). */
-export function warnPlateNatural(n: PlateNatural, warnings: Warnings): void {
-  if (warnings !== null) warnRange(warnings, n.correlation, "Ra", n.Ra_effective);
+export function warnNaturalBranch(b: NaturalBranch, warnings: Warnings): void {
+  if (warnings !== null) warnRange(warnings, b.id, "Ra", b.RaEff);
 }
 
-/** Range warnings of both parts of a combined coefficient. */
-export function warnPlateCombined(c: PlateCombined, warnings: Warnings): void {
-  warnPlateForced(c.forced, warnings);
-  warnPlateNatural(c.natural, warnings);
-}
-
-/**
- * Natural convection from a plate at any tilt (0 = facing up, 90 = vertical, 180 = facing down),
- * by the contract's selection: Churchill & Chu with g·cos θ on the vertical and near-vertical
- * stable side, 0.52 Ra^⅕ beyond 60° on the stable side, and on the unstable side the larger of
- * Churchill & Chu (g·cos θ) and the horizontal forms (g·sin θ), after Raithby & Hollands.
- */
+/** Natural convection from a plate at any tilt (see nuPlateNatural for the selection). */
 export function plateNaturalCore(
   props: AirProperties,
   Ts: number,
@@ -129,54 +108,21 @@ export function plateNaturalCore(
   L: number,
   warnings: Warnings,
 ): PlateNatural {
-  const Pr = props.Pr;
-  const nu = props.nu_m2_s;
-  const Gr = (G * props.beta_1_K * Math.abs(Ts - Ta) * L * L * L) / (nu * nu);
-  const Ra = Gr * Pr;
-  const thetaDeg = Math.abs(tiltDeg - 90);
-  let Nu: number;
-  let RaEff = Ra; // the Rayleigh number of the branch used (g·cos θ or g·sin θ)
-  let turbulent: boolean;
-  let id: string;
-  const stable = Ts >= Ta !== tiltDeg < 90; // hot facing down or cold facing up
-  if (thetaDeg === 0) {
-    id = "churchill-chu-vertical-plate";
-    Nu = nuVerticalPlateChurchillChu(Ra, Pr);
-    turbulent = Ra > 1e9;
-  } else if (stable && thetaDeg > 60) {
-    id = "horizontal-plate-stable";
-    Nu = nuHorizontalPlateStable(Ra);
-    turbulent = false;
-  } else {
-    RaEff = Ra * Math.cos(thetaDeg * DEG);
-    id = "churchill-chu-inclined-plate";
-    Nu = nuVerticalPlateChurchillChu(RaEff, Pr);
-    turbulent = RaEff > 1e9;
-    if (!stable) {
-      // Unstable side: the larger of the inclined (g·cos θ) and horizontal (g·sin θ) forms.
-      const RaH = Ra * Math.sin(thetaDeg * DEG);
-      const turbH = RaH > 1e7;
-      const nuH = turbH ? nuHorizontalPlateUnstableTurbulent(RaH) : nuHorizontalPlateUnstableLaminar(RaH);
-      if (nuH > Nu) {
-        id = turbH ? "horizontal-plate-unstable-turbulent" : "horizontal-plate-unstable-laminar";
-        Nu = nuH;
-        RaEff = RaH;
-        turbulent = turbH;
-      }
-    }
-  }
-  const out: PlateNatural = {
+  const Gr = grashof(props, Ts - Ta, L);
+  const Ra = Gr * props.Pr;
+  const b = newNaturalBranch();
+  const Nu = nuPlateNatural(Ra, props.Pr, tiltDeg, Ts >= Ta, b);
+  warnNaturalBranch(b, warnings);
+  return {
     h_W_m2K: (Nu * props.k_W_mK) / L,
     Nu,
     Ra,
     Gr,
-    Pr,
-    regime: turbulent ? "turbulent" : "laminar",
-    correlation: id,
-    Ra_effective: RaEff,
+    Pr: props.Pr,
+    regime: b.turbulent ? "turbulent" : "laminar",
+    correlation: b.id,
+    Ra_effective: b.RaEff,
   };
-  warnPlateNatural(out, warnings);
-  return out;
 }
 
 export interface PlateCombined {
@@ -187,8 +133,28 @@ export interface PlateCombined {
   Ri: number | null;
   regime: "forced" | "natural" | "combined";
   correlation: string;
-  forced: PlateForced;
-  natural: PlateNatural;
+}
+
+/** Range warnings of both parts of a combined coefficient, from its state. */
+export function warnPlateCombined(st: PlateCombinedState, warnings: Warnings): void {
+  if (warnings === null) return;
+  const b = plateForcedBranch(st.Re, RE_CRIT_DEFAULT);
+  if (b.regime !== "laminar") warnRange(warnings, b.id, "Re", st.Re);
+  warnRange(warnings, b.id, "Pr", st.Pr);
+  warnNaturalBranch(st.natural, warnings);
+}
+
+/** The combined coefficient's outputs from its state. */
+export function plateCombinedResult(st: PlateCombinedState): PlateCombined {
+  return {
+    h_W_m2K: st.h,
+    Nu: st.Nu,
+    Nu_forced: st.NuF,
+    Nu_natural: st.NuN,
+    Ri: st.Ri,
+    regime: regimeFromRichardson(st.Ri),
+    correlation: "churchill-combined-plate",
+  };
 }
 
 /**
@@ -205,29 +171,10 @@ export function plateCombinedCore(
   H: number,
   warnings: Warnings,
 ): PlateCombined {
-  const forced = plateForcedCore(props, V, L, RE_CRIT_DEFAULT, undefined, warnings);
-  const natural = plateNaturalCore(props, Ts, Ta, tiltDeg, H, warnings);
-  const NuN = (natural.Nu * L) / H;
-  const Nu = nuCombinedChurchill(forced.Nu, NuN, 3);
-  let Ri: number | null = null;
-  const Re2 = forced.Re * forced.Re;
-  if (Re2 > 0) {
-    const r = L / H;
-    Ri = (natural.Gr * r * r * r) / Re2;
-    // A speed so small that Ri overflows is still air for this purpose.
-    if (!Number.isFinite(Ri)) Ri = null;
-  }
-  return {
-    h_W_m2K: (Nu * props.k_W_mK) / L,
-    Nu,
-    Nu_forced: forced.Nu,
-    Nu_natural: NuN,
-    Ri,
-    regime: regimeFromRichardson(Ri),
-    correlation: "churchill-combined-plate",
-    forced,
-    natural,
-  };
+  const st = newPlateCombinedState();
+  plateCombinedInto(props, Ts, Ta, V, L, tiltDeg, H, RE_CRIT_DEFAULT, st);
+  warnPlateCombined(st, warnings);
+  return plateCombinedResult(st);
 }
 
 /** Cylinder in cross-flow (Churchill & Bernstein), film properties. */
@@ -241,8 +188,7 @@ export function cylinderCrossflowCore(props: AirProperties, V: number, D: number
 
 /** Rayleigh number on length L with full g, from film properties. */
 export function rayleigh(props: AirProperties, dT: number, L: number): number {
-  const nu = props.nu_m2_s;
-  return ((G * props.beta_1_K * Math.abs(dT) * L * L * L) / (nu * nu)) * props.Pr;
+  return grashof(props, dT, L) * props.Pr;
 }
 
 /** Horizontal cylinder, natural convection (Churchill & Chu), film properties. */

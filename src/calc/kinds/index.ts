@@ -2,11 +2,11 @@
  * The contract's case kinds: each reads its inputs (naming the field of any bad one), calls the
  * engine and returns the outputs with `correlation` and `warnings`.
  */
-import { CaseReader, InputError, readPressure, type CalcResult, type CalcWarning } from "../contract";
-import { ductRunCore } from "../duct-run";
+import { CaseReader, InputError, PRESSURE, readPressure, rule, type CalcResult, type CalcWarning } from "../contract";
+import { ductRunCore, type DuctRunInput } from "../duct-run";
 import { hRadiation } from "../radiation/radiation";
 import { dewPointHylandWexler } from "../psychrometrics/dew-point";
-import { EXTERIOR_METHODS, surfaceCore } from "../surface";
+import { EXTERIOR_METHODS, SURFACE_DEFAULTS, surfaceCore, type SurfaceInput } from "../surface";
 import { TERRAINS } from "../wind/wind-profile";
 import { air, toK, warnRange } from "./common";
 import {
@@ -24,11 +24,23 @@ import { WIND_LAWS, windAtHeight } from "./wind";
 
 type KindFn = (r: CaseReader, id: string | null) => CalcResult;
 
-const POS = { gt: 0 };
-const NONNEG = { min: 0 };
-const FRACTION = { min: 0, max: 1 };
-const TILT = { min: 0, max: 180, why: "0 faces up, 90 is vertical, 180 faces down" };
-const BEARING = { min: 0, max: 360 };
+const POS = rule({ gt: 0 });
+const NONNEG = rule({ min: 0 });
+const FRACTION = rule({ min: 0, max: 1 });
+const TILT = rule({ min: 0, max: 180, why: "0 faces up, 90 is vertical, 180 faces down" });
+const BEARING = rule({ min: 0, max: 360 });
+const SOLAR = rule({ min: 0, max: 1500, why: "beyond the solar constant" });
+const RH = rule({ gt: 0, max: 100, why: "no dew point exists in perfectly dry air" });
+const NO_FLOW_DUCT = rule({ gt: 0, why: "a duct without flow has no inside film" });
+const NO_FLOW_RUN = rule({ gt: 0, why: "a duct run without flow has no leaving temperature" });
+const THICKNESS = rule({ min: 0, max: 1 });
+const MARGIN = rule({ min: 0, max: 50 });
+const SHAPES = ["round", "rect"] as const;
+const LOCATIONS = ["indoor", "outdoor"] as const;
+
+/** The inputs of the two schedule kinds, read by name (see CaseReader). */
+type SurfaceRaw = Partial<Record<keyof SurfaceInput, unknown>>;
+type DuctRunRaw = Partial<Record<keyof DuctRunInput, unknown>>;
 
 /** Surface and air temperatures in kelvin, with the film-temperature properties. */
 function filmCase(r: CaseReader, w: CalcWarning[]) {
@@ -39,7 +51,7 @@ function filmCase(r: CaseReader, w: CalcWarning[]) {
 }
 
 function ductSection(r: CaseReader): DuctSection {
-  const shape = r.oneOf("shape", ["round", "rect"] as const);
+  const shape = r.oneOf("shape", SHAPES);
   if (shape === "round") return { shape, diameter_m: r.num("diameter_m", POS) };
   return { shape, width_m: r.num("width_m", POS), height_m: r.num("height_m", POS) };
 }
@@ -59,7 +71,7 @@ export const KINDS: Readonly<Record<string, KindFn>> = {
     const c = filmCase(r, w);
     const V = r.num("velocity_m_s", NONNEG);
     const L = r.num("length_m", POS);
-    const x = r.has("x_m") ? r.num("x_m", { gt: 0, max: L, why: "x is measured from the leading edge, within the plate" }) : undefined;
+    const x = r.has("x_m") ? r.num("x_m", rule({ gt: 0, max: L, why: "x is measured from the leading edge, within the plate" })) : undefined;
     const ReCrit = r.optNum("Re_crit", RE_CRIT_DEFAULT, NONNEG);
     const { correlation_x: _cx, ...o } = plateForcedCore(c.props(), V, L, ReCrit, x, w);
     return { id, ok: true, ...o, warnings: w };
@@ -81,8 +93,7 @@ export const KINDS: Readonly<Record<string, KindFn>> = {
     const L = r.num("length_m", POS);
     const tilt = r.num("tilt_deg", TILT);
     const H = r.num("height_m", POS);
-    const { forced: _f, natural: _n, ...o } = plateCombinedCore(c.props(), c.Ts, c.Ta, V, L, tilt, H, w);
-    return { id, ok: true, ...o, warnings: w };
+    return { id, ok: true, ...plateCombinedCore(c.props(), c.Ts, c.Ta, V, L, tilt, H, w), warnings: w };
   },
 
   cylinder_crossflow(r, id) {
@@ -120,7 +131,7 @@ export const KINDS: Readonly<Record<string, KindFn>> = {
   duct_internal(r, id) {
     const w: CalcWarning[] = [];
     const section = ductSection(r);
-    const flow = r.num("flow_m3_s", { gt: 0, why: "a duct without flow has no inside film" });
+    const flow = r.num("flow_m3_s", NO_FLOW_DUCT);
     const T = toK(r.tempC("T_air_C"));
     if (r.has("T_wall_C")) r.tempC("T_wall_C"); // accepted and checked; no wall correction in v1
     const rough = r.optNum("roughness_m", ROUGHNESS_DEFAULT_M, NONNEG);
@@ -151,94 +162,68 @@ export const KINDS: Readonly<Record<string, KindFn>> = {
   dew_point(r, id) {
     const w: CalcWarning[] = [];
     const T = r.tempC("T_C");
-    const RH = r.num("RH_pct", { gt: 0, max: 100, why: "no dew point exists in perfectly dry air" });
+    const rh = r.num("RH_pct", RH);
     readPressure(r);
     warnRange(w, "dew-point-hyland-wexler", "T_C", T);
-    return { id, ok: true, T_dp_C: dewPointHylandWexler(T, RH), correlation: "dew-point-hyland-wexler", warnings: w };
+    return { id, ok: true, T_dp_C: dewPointHylandWexler(T, rh), correlation: "dew-point-hyland-wexler", warnings: w };
   },
 
   surface(r, id) {
-    const w: CalcWarning[] = [];
-    const R_construction = r.num("R_construction_m2K_W", NONNEG);
-    const R_si = r.optNum("R_si_m2K_W", 0.13, NONNEG);
+    // Every input is checked by name; the checked case itself then goes to the engine (no copy).
+    const v = r.raw as SurfaceRaw;
+    const R_construction = r.numAt("R_construction_m2K_W", v.R_construction_m2K_W, NONNEG);
+    const R_si = r.optNumAt("R_si_m2K_W", v.R_si_m2K_W, SURFACE_DEFAULTS.R_si_m2K_W, NONNEG);
     if (R_construction + R_si <= 0) {
       throw new InputError("R_construction_m2K_W", "R_construction_m2K_W + R_si_m2K_W must be > 0");
     }
-    const s = surfaceCore(
-      {
-        area_m2: r.num("area_m2", NONNEG),
-        tilt_deg: r.num("tilt_deg", TILT),
-        azimuth_deg: r.num("azimuth_deg", BEARING),
-        height_m: r.num("height_m", NONNEG),
-        length_m: r.num("length_m", POS),
-        panel_height_m: r.num("panel_height_m", POS),
-        R_construction_m2K_W: R_construction,
-        R_si_m2K_W: R_si,
-        T_inside_C: r.tempC("T_inside_C"),
-        T_outside_C: r.tempC("T_outside_C"),
-        V_met_m_s: r.num("V_met_m_s", NONNEG),
-        wind_from_deg: r.num("wind_from_deg", BEARING),
-        terrain: r.oneOf("terrain", TERRAINS),
-        law: r.oneOf("law", WIND_LAWS, "power"),
-        met_height_m: r.optNum("met_height_m", 10, POS),
-        emissivity: r.num("emissivity", FRACTION),
-        absorptance: r.num("absorptance", FRACTION),
-        solar_W_m2: r.optNum("solar_W_m2", 0, { min: 0, max: 1500, why: "beyond the solar constant" }),
-        method: r.oneOf("method", EXTERIOR_METHODS),
-        leeward_factor: r.optNum("leeward_factor", 0.25, FRACTION),
-        pressure_Pa: readPressure(r),
-      },
-      w,
-    );
-    // Written out field by field: the contract's output names, and a fast path for large schedules.
-    return {
-      id,
-      ok: true,
-      V_local_m_s: s.V_local_m_s,
-      V_surface_m_s: s.V_surface_m_s,
-      windward: s.windward,
-      h_c_W_m2K: s.h_c_W_m2K,
-      h_r_W_m2K: s.h_r_W_m2K,
-      h_o_W_m2K: s.h_o_W_m2K,
-      T_surface_C: s.T_surface_C,
-      T_sky_C: s.T_sky_C,
-      T_radiant_C: s.T_radiant_C,
-      F_sky: s.F_sky,
-      T_solair_C: s.T_solair_C,
-      U_W_m2K: s.U_W_m2K,
-      q_W_m2: s.q_W_m2,
-      Q_W: s.Q_W,
-      regime: s.regime,
-      Re: s.combined === null ? null : s.combined.forced.Re,
-      Ri: s.combined === null ? null : s.combined.Ri,
-      Nu_forced: s.combined === null ? null : s.combined.Nu_forced,
-      Nu_natural: s.combined === null ? null : s.combined.Nu_natural,
-      correlation: s.correlation,
-      warnings: w,
-    };
+    r.numAt("area_m2", v.area_m2, NONNEG);
+    r.numAt("tilt_deg", v.tilt_deg, TILT);
+    r.numAt("azimuth_deg", v.azimuth_deg, BEARING);
+    r.numAt("height_m", v.height_m, NONNEG);
+    r.numAt("length_m", v.length_m, POS);
+    r.numAt("panel_height_m", v.panel_height_m, POS);
+    r.tempCAt("T_inside_C", v.T_inside_C);
+    r.tempCAt("T_outside_C", v.T_outside_C);
+    r.numAt("V_met_m_s", v.V_met_m_s, NONNEG);
+    r.numAt("wind_from_deg", v.wind_from_deg, BEARING);
+    r.oneOfAt("terrain", v.terrain, TERRAINS);
+    r.oneOfAt("law", v.law, WIND_LAWS, SURFACE_DEFAULTS.law);
+    r.optNumAt("met_height_m", v.met_height_m, SURFACE_DEFAULTS.met_height_m, POS);
+    r.numAt("emissivity", v.emissivity, FRACTION);
+    r.numAt("absorptance", v.absorptance, FRACTION);
+    r.optNumAt("solar_W_m2", v.solar_W_m2, SURFACE_DEFAULTS.solar_W_m2, SOLAR);
+    r.oneOfAt("method", v.method, EXTERIOR_METHODS);
+    r.optNumAt("leeward_factor", v.leeward_factor, SURFACE_DEFAULTS.leeward_factor, FRACTION);
+    r.optNumAt("pressure_Pa", v.pressure_Pa, SURFACE_DEFAULTS.pressure_Pa, PRESSURE);
+    return surfaceCore(v as SurfaceInput, [], id);
   },
 
   duct_run(r, id) {
     const w: CalcWarning[] = [];
-    const section = ductSection(r);
-    const T_ambient_C = r.tempC("T_ambient_C");
+    const v = r.raw as DuctRunRaw;
+    const shape = r.oneOfAt("shape", v.shape, SHAPES);
+    const section: DuctSection =
+      shape === "round"
+        ? { shape, diameter_m: r.numAt("diameter_m", v.diameter_m, POS) }
+        : { shape, width_m: r.numAt("width_m", v.width_m, POS), height_m: r.numAt("height_m", v.height_m, POS) };
+    const T_ambient_C = r.tempCAt("T_ambient_C", v.T_ambient_C);
     const o = ductRunCore(
       {
         ...section,
-        length_m: r.num("length_m", NONNEG),
-        flow_m3_s: r.num("flow_m3_s", { gt: 0, why: "a duct run without flow has no leaving temperature" }),
-        T_entering_C: r.tempC("T_entering_C"),
+        length_m: r.numAt("length_m", v.length_m, NONNEG),
+        flow_m3_s: r.numAt("flow_m3_s", v.flow_m3_s, NO_FLOW_RUN),
+        T_entering_C: r.tempCAt("T_entering_C", v.T_entering_C),
         T_ambient_C,
-        RH_ambient_pct: r.num("RH_ambient_pct", { gt: 0, max: 100, why: "no dew point exists in perfectly dry air" }),
-        T_surround_C: r.tempC("T_surround_C", T_ambient_C),
-        insulation_thickness_m: r.num("insulation_thickness_m", { min: 0, max: 1 }),
-        insulation_k_W_mK: r.num("insulation_k_W_mK", POS),
-        jacket_emissivity: r.num("jacket_emissivity", FRACTION),
-        location: r.oneOf("location", ["indoor", "outdoor"] as const),
-        V_wind_m_s: r.optNum("V_wind_m_s", 0, NONNEG),
-        margin_K: r.optNum("margin_K", 0, { min: 0, max: 50 }),
-        roughness_m: r.optNum("roughness_m", ROUGHNESS_DEFAULT_M, NONNEG),
-        pressure_Pa: readPressure(r),
+        RH_ambient_pct: r.numAt("RH_ambient_pct", v.RH_ambient_pct, RH),
+        T_surround_C: r.tempCAt("T_surround_C", v.T_surround_C, T_ambient_C),
+        insulation_thickness_m: r.numAt("insulation_thickness_m", v.insulation_thickness_m, THICKNESS),
+        insulation_k_W_mK: r.numAt("insulation_k_W_mK", v.insulation_k_W_mK, POS),
+        jacket_emissivity: r.numAt("jacket_emissivity", v.jacket_emissivity, FRACTION),
+        location: r.oneOfAt("location", v.location, LOCATIONS),
+        V_wind_m_s: r.optNumAt("V_wind_m_s", v.V_wind_m_s, 0, NONNEG),
+        margin_K: r.optNumAt("margin_K", v.margin_K, 0, MARGIN),
+        roughness_m: r.optNumAt("roughness_m", v.roughness_m, ROUGHNESS_DEFAULT_M, NONNEG),
+        pressure_Pa: r.optNumAt("pressure_Pa", v.pressure_Pa, 101325, PRESSURE),
       },
       w,
     );
@@ -257,10 +242,6 @@ export const KINDS: Readonly<Record<string, KindFn>> = {
       condensation: o.condensation,
       min_insulation_thickness_m: o.min_insulation_thickness_m,
       regime: o.regime,
-      Re: o.Re,
-      velocity_m_s: o.velocity_m_s,
-      T_env_C: o.T_env_C,
-      mass_flow_kg_s: o.mass_flow_kg_s,
       correlation: o.correlation,
       warnings: w,
     };

@@ -56,11 +56,45 @@ export interface DuctInternal {
   correlation: string;
 }
 
+/** Laminar Nusselt number of the section: 3.66 round, Shah & London by aspect ratio otherwise. */
+function nuLaminar(g: DuctGeometry, round: boolean): number {
+  return round ? nuRoundDuctLaminar() : nuRectangularLaminarShahLondon(g.aspect);
+}
+
 /**
- * Fully developed flow inside a duct with bulk properties: laminar below Re 2300 (3.66 or Shah &
- * London), Gnielinski with Petukhov's factor from 3000, linear in Re between; f from 64/Re or
- * Shah & London in laminar flow and Colebrook in turbulent flow, blended likewise.
+ * Nusselt number inside a duct by regime (bulk properties): laminar below Re 2300, Gnielinski
+ * with Petukhov's factor from 3000, linear in Re between.
  */
+export function nuDuct(Re: number, Pr: number, g: DuctGeometry, round: boolean): number {
+  if (Re < RE_LAMINAR_MAX) return nuLaminar(g, round);
+  if (Re < RE_TURBULENT_MIN) {
+    return blendLinear(Re, RE_LAMINAR_MAX, RE_TURBULENT_MIN, nuLaminar(g, round), nuDuctTurbulentGnielinski(RE_TURBULENT_MIN, Pr));
+  }
+  return nuDuctTurbulentGnielinski(Re, Pr);
+}
+
+/**
+ * Darcy friction factor by regime: 64/Re or Shah & London's fRe/Re in laminar flow, Colebrook in
+ * turbulent flow, linear in Re between the laminar value at 2300 and Colebrook's at 3000.
+ */
+export function fDarcyDuct(Re: number, g: DuctGeometry, round: boolean, roughness_m: number): number {
+  const fReLam = round ? 64 : fReRectangularShahLondon(g.aspect);
+  if (Re < RE_LAMINAR_MAX) return fReLam / Re;
+  const eD = roughness_m / g.Dh_m;
+  if (Re < RE_TURBULENT_MIN) {
+    return blendLinear(Re, RE_LAMINAR_MAX, RE_TURBULENT_MIN, fReLam / RE_LAMINAR_MAX, fDarcyColebrook(RE_TURBULENT_MIN, eD));
+  }
+  return fDarcyColebrook(Re, eD);
+}
+
+/** Regime word and registry id of the inside flow. */
+export function ductRegime(Re: number, round: boolean): { regime: DuctInternal["regime"]; id: string } {
+  if (Re < RE_LAMINAR_MAX) return { regime: "laminar", id: round ? "laminar-round-duct" : "shah-london-rectangular" };
+  if (Re < RE_TURBULENT_MIN) return { regime: "transitional", id: "duct-transitional-blend" };
+  return { regime: "turbulent", id: "gnielinski-petukhov" };
+}
+
+/** Fully developed flow inside a duct with bulk properties: every output of `duct_internal`. */
 export function ductInternalCore(
   props: AirProperties,
   shape: DuctShape,
@@ -68,41 +102,26 @@ export function ductInternalCore(
   flow_m3_s: number,
   roughness_m: number,
   warnings: Warnings,
-  /** False where only the heat transfer is wanted (the duct-run iterations): f_darcy is then NaN. */
-  withFriction = true,
 ): DuctInternal {
   const V = flow_m3_s / g.area_m2;
   const Re = (V * g.Dh_m) / props.nu_m2_s;
   const Pr = props.Pr;
   const round = shape === "round";
-  // Laminar values only below Re 3000, where they are used.
-  const nuLam = Re >= RE_TURBULENT_MIN ? NaN : round ? nuRoundDuctLaminar() : nuRectangularLaminarShahLondon(g.aspect);
-  const fReLam = Re >= RE_TURBULENT_MIN ? NaN : round ? 64 : fReRectangularShahLondon(g.aspect);
-  const lamId = round ? "laminar-round-duct" : "shah-london-rectangular";
-  let Nu: number;
-  let f: number;
-  let regime: DuctInternal["regime"];
-  let correlation: string;
-  if (Re < RE_LAMINAR_MAX) {
-    Nu = nuLam;
-    f = fReLam / Re;
-    regime = "laminar";
-    correlation = lamId;
-  } else if (Re < RE_TURBULENT_MIN) {
-    const eD = roughness_m / g.Dh_m;
-    Nu = blendLinear(Re, RE_LAMINAR_MAX, RE_TURBULENT_MIN, nuLam, nuDuctTurbulentGnielinski(RE_TURBULENT_MIN, Pr));
-    f = withFriction
-      ? blendLinear(Re, RE_LAMINAR_MAX, RE_TURBULENT_MIN, fReLam / RE_LAMINAR_MAX, fDarcyColebrook(RE_TURBULENT_MIN, eD))
-      : NaN;
-    regime = "transitional";
-    correlation = "duct-transitional-blend";
-  } else {
-    Nu = nuDuctTurbulentGnielinski(Re, Pr);
-    f = withFriction ? fDarcyColebrook(Re, roughness_m / g.Dh_m) : NaN;
-    regime = "turbulent";
-    correlation = "gnielinski-petukhov";
-    warnRange(warnings, correlation, "Re", Re);
-    warnRange(warnings, correlation, "Pr", Pr);
+  const Nu = nuDuct(Re, Pr, g, round);
+  const { regime, id } = ductRegime(Re, round);
+  if (regime === "turbulent") {
+    warnRange(warnings, id, "Re", Re);
+    warnRange(warnings, id, "Pr", Pr);
   }
-  return { velocity_m_s: V, Dh_m: g.Dh_m, Re, Pr, f_darcy: f, Nu, h_W_m2K: (Nu * props.k_W_mK) / g.Dh_m, regime, correlation };
+  return {
+    velocity_m_s: V,
+    Dh_m: g.Dh_m,
+    Re,
+    Pr,
+    f_darcy: fDarcyDuct(Re, g, round, roughness_m),
+    Nu,
+    h_W_m2K: (Nu * props.k_W_mK) / g.Dh_m,
+    regime,
+    correlation: id,
+  };
 }

@@ -78,7 +78,7 @@ export function muAirDiluteLemmonJacobsen(T_K: number): number {
  * @see E. W. Lemmon, R. T. Jacobsen, "Viscosity and thermal conductivity equations for nitrogen,
  *   oxygen, argon, and air", Int. J. Thermophys. 25 (2004) 21–69.
  */
-export function airProperties(T_K: number, p_Pa: number): AirProperties {
+export function airPropertiesInto(T_K: number, p_Pa: number, out: AirProperties): AirProperties {
   const rho = p_Pa / (R_AIR * T_K);
   // Reduced density on the molar basis of Lemmon & Jacobsen (mol/dm³), from the same ideal gas.
   const delta = p_Pa / (R_UNIVERSAL * T_K) / 1000 / RHOC;
@@ -111,16 +111,26 @@ export function airProperties(T_K: number, p_Pa: number): AirProperties {
     e2 * (-16.62 * Math.sqrt(tau) * d2 * delta + d7 * (3.793 * t2 * a12 * a2 - 6.142 * a6 - 0.3778 * tau * a6 * d4));
   const k = (lambda0 + lambdaR) * 1e-3;
   const cp = cpAirTable(T_K);
-  return {
-    T_K,
-    p_Pa,
-    rho_kg_m3: rho,
-    cp_J_kgK: cp,
-    mu_Pa_s: mu,
-    k_W_mK: k,
-    Pr: (cp * mu) / k,
-    nu_m2_s: mu / rho,
-    alpha_m2_s: k / (rho * cp),
-    beta_1_K: 1 / T_K,
-  };
+  // Written field by field into `out`, so iterations can reuse one object without allocating.
+  out.T_K = T_K;
+  out.p_Pa = p_Pa;
+  out.rho_kg_m3 = rho;
+  out.cp_J_kgK = cp;
+  out.mu_Pa_s = mu;
+  out.k_W_mK = k;
+  out.Pr = (cp * mu) / k;
+  out.nu_m2_s = mu / rho;
+  out.alpha_m2_s = k / (rho * cp);
+  out.beta_1_K = 1 / T_K;
+  return out;
+}
+
+/** A fresh AirProperties object to fill with airPropertiesInto. */
+export function newAirProperties(): AirProperties {
+  return { T_K: 0, p_Pa: 0, rho_kg_m3: 0, cp_J_kgK: 0, mu_Pa_s: 0, k_W_mK: 0, Pr: 0, nu_m2_s: 0, alpha_m2_s: 0, beta_1_K: 0 };
+}
+
+/** Dry-air properties at T_K and p_Pa in a new object; see airPropertiesInto. */
+export function airProperties(T_K: number, p_Pa: number): AirProperties {
+  return airPropertiesInto(T_K, p_Pa, newAirProperties());
 }
