@@ -8,7 +8,8 @@ import { airPropertiesInto, newAirProperties } from "./properties/air";
 import { hcIso6946, hcMcAdams } from "./convection/empirical";
 import { hRadiation, radiantTemperature, skyTemperatureSwinbank, skyViewFactor } from "./radiation/radiation";
 import { air } from "./kinds/common";
-import { RE_CRIT_DEFAULT, plateCombinedResult, warnPlateCombined } from "./kinds/external";
+import { RE_CRIT_DEFAULT, warnPlateCombined } from "./kinds/external";
+import { regimeFromRichardson } from "./convection/combined";
 import type { CalcWarning } from "./contract";
 import { newPlateCombinedState, plateCombinedInto } from "./select";
 import { windAtHeight } from "./kinds/wind";
@@ -80,6 +81,11 @@ export type SurfaceResult = {
   warnings: CalcWarning[];
 };
 
+// Scratch objects of the iteration, refilled on every call: the engine is synchronous and
+// surfaceCore does not call itself, so one pair per module instance is enough.
+const PROPS = newAirProperties();
+const STATE = newPlateCombinedState();
+
 // A Newton step smaller than this means T_s is within it of the root (the contract asks 0.001 K).
 const TOL_K = 1e-3;
 
@@ -111,8 +117,8 @@ export function surfaceCore(s: SurfaceInput, warnings: CalcWarning[], id: string
   // d(h_c ΔT)/dT_s = h_c + k h_N³/h_c² for the cube-law combination) and radiation's 4εσT_s³.
   let hc = hcFixed;
   let hr = 0;
-  const props = newAirProperties();
-  const state = hcFixed < 0 ? newPlateCombinedState() : null;
+  const props = PROPS;
+  const state = hcFixed < 0 ? STATE : null;
   let lo = Math.min(Tin, To, Tr);
   let hi = Math.max(Tin, To, Tr) + solar * Rin;
   const hGuess = (hcFixed >= 0 ? hcFixed : hcIso6946(Vs)) + 5;
@@ -151,7 +157,7 @@ export function surfaceCore(s: SurfaceInput, warnings: CalcWarning[], id: string
     air((x + To) / 2, p, warnings, "T_film_C");
     if (state !== null) warnPlateCombined(state, warnings);
   }
-  const combined = state === null ? null : plateCombinedResult(state);
+  const regime = state === null ? "empirical" : regimeFromRichardson(state.Ri);
   const ho = hc + hr;
   const q = (Tin - Ts) / Rin;
   let Tsolair: number;
@@ -180,9 +186,8 @@ export function surfaceCore(s: SurfaceInput, warnings: CalcWarning[], id: string
     U_W_m2K: U,
     q_W_m2: q,
     Q_W: q * s.area_m2,
-    regime: combined === null ? "empirical" : combined.regime,
-    correlation:
-      combined !== null ? combined.correlation : s.method === "iso6946" ? "iso6946-simplified" : "mcadams-wind",
+    regime,
+    correlation: state !== null ? "churchill-combined-plate" : s.method === "iso6946" ? "iso6946-simplified" : "mcadams-wind",
     warnings,
   };
 }

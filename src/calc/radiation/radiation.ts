@@ -22,7 +22,7 @@ export function hRadiation(Ts: number, Tr: number, emissivity: number): number {
  *   339–348.
  */
 export function skyTemperatureSwinbank(Tair: number): number {
-  return 0.0552 * Math.pow(Tair, 1.5);
+  return 0.0552 * Tair * Math.sqrt(Tair);
 }
 
 /**
@@ -36,5 +36,7 @@ export function skyViewFactor(tiltDeg: number): number {
 
 /** Mean radiant temperature of sky and ground: T_r⁴ = F_sky T_sky⁴ + (1 − F_sky) T_ground⁴, K. */
 export function radiantTemperature(Fsky: number, Tsky: number, Tground: number): number {
-  return Math.pow(Fsky * Tsky ** 4 + (1 - Fsky) * Tground ** 4, 0.25);
+  const s2 = Tsky * Tsky;
+  const g2 = Tground * Tground;
+  return Math.sqrt(Math.sqrt(Fsky * s2 * s2 + (1 - Fsky) * g2 * g2));
 }
