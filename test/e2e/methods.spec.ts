@@ -1,0 +1,17 @@
+// The public method page in a real browser: every registered method with its source and validity.
+import { expect, test } from "@playwright/test";
+import { METHODS } from "../../src/calc/registry";
+
+test("the Methods page lists every registered correlation with its source and the conventions", async ({ page }) => {
+  await page.goto("/methods");
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText("Methods");
+  await expect(page.getByRole("main").getByRole("note").first()).toContainText("licensed engineer");
+  for (const m of METHODS) {
+    const card = page.locator(`article[id="${m.id}"]`);
+    await expect(card, m.id).toContainText(m.title);
+    await expect(card, m.id).toContainText(m.source);
+  }
+  await page.getByRole("link", { name: "Conventions" }).click();
+  await expect(page.getByRole("heading", { name: "Conventions" })).toBeInViewport();
+  await expect(page.locator("#conventions")).toContainText("positive for heat lost from inside");
+});
