@@ -23,6 +23,7 @@ export function leavingAirTemperature(TE: number, Tenv: number, UAperM: number, 
  * @param Do outer diameter, m
  * @param k conductivity of the insulation, W/(m·K)
  * @see Incropera et al., Fundamentals of Heat and Mass Transfer, eq. 3.33.
+  * @example D_i 0.5 m, D_o 0.55 m, k 0.04 W/mK → ln(1.1)/(2π·0.04) = 0.379 m·K/W
  */
 export function insulationResistanceRound(Di: number, Do: number, k: number): number {
   return Do > Di ? Math.log(Do / Di) / (2 * Math.PI * k) : 0;
@@ -36,6 +37,7 @@ export function insulationResistanceRound(Di: number, Do: number, k: number): nu
  * @param Po outer (jacket) perimeter, m
  * @param k conductivity of the insulation, W/(m·K)
  * @see common practice (mean-area approximation for thin layers on flat sides).
+  * @example t 25 mm, P_i 1.8 m, P_o 2.0 m, k 0.035 W/mK → 0.025/(0.035·1.9) = 0.376 m·K/W
  */
 export function insulationResistanceRect(t: number, Pi: number, Po: number, k: number): number {
   return t > 0 ? t / ((k * (Pi + Po)) / 2) : 0;

@@ -29,12 +29,15 @@ export function skyTemperatureSwinbank(Tair: number): number {
  * View factor from a tilted plane to the sky dome: F_sky = (1 + cos tilt)/2.
  * @param tiltDeg tilt from the horizontal, degrees (0 faces up)
  * @see J. A. Duffie, W. A. Beckman, Solar Engineering of Thermal Processes (4th ed.), §3.16.
+  * @example tilt 90° → 0.5; tilt 35° → 0.910
  */
 export function skyViewFactor(tiltDeg: number): number {
   return (1 + Math.cos((tiltDeg * Math.PI) / 180)) / 2;
 }
 
-/** Mean radiant temperature of sky and ground: T_r⁴ = F_sky T_sky⁴ + (1 − F_sky) T_ground⁴, K. */
+/** Mean radiant temperature of sky and ground: T_r⁴ = F_sky T_sky⁴ + (1 − F_sky) T_ground⁴, K.  * @example F_sky 0.5, T_sky 242.4 K, T_ground 268.15 K → 256.2 K
+ * @see Duffie & Beckman, Solar Engineering of Thermal Processes, §3.16 (view-factor weighting of sky and ground).
+ */
 export function radiantTemperature(Fsky: number, Tsky: number, Tground: number): number {
   const s2 = Tsky * Tsky;
   const g2 = Tground * Tground;

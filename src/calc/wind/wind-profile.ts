@@ -37,7 +37,9 @@ export function windSpeedPowerLaw(Vmet: number, H: number, terrain: Terrain, Hme
   return Vmet * Math.pow(met.delta_m / Hmet, met.a) * Math.pow(h / site.delta_m, site.a);
 }
 
-/** Terrain factor k_r = 0.19 (z0/z0,II)^0.07 of EN 1991-1-4, eq. 4.5. */
+/** Terrain factor k_r = 0.19 (z0/z0,II)^0.07 of EN 1991-1-4, eq. 4.5.  * @example z0 0.3 m (terrain III) → 0.215 (EN 1991-1-4 table 4.1 lists k_r 0.215, from memory)
+ * @see EN 1991-1-4:2005, eq. 4.5.
+ */
 export function terrainFactorEn1991(z0: number): number {
   return 0.19 * Math.pow(z0 / 0.05, 0.07);
 }
