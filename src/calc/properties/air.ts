@@ -60,7 +60,7 @@ export function cpAirTable(T_K: number): number {
   return CP_TABLE_V[i] + f * (CP_TABLE_V[i + 1] - CP_TABLE_V[i]);
 }
 
-/** Dilute-gas viscosity of air, Pa·s: η0 = 0.0266958 √(M T) / (σ² Ω(T*)) μPa·s.  * @example 300 K → 18.52 μPa·s (dilute part; the residual adds about 0.02 μPa·s at 1 bar)
+/** Dilute-gas viscosity of air, Pa·s: η0 = 0.0266958 √(M T) / (σ² Ω(T*)) μPa·s.  * @example 300 K → 18.52 μPa·s (dilute part; the residual adds about 0.014 μPa·s at 1 bar)
  * @see Lemmon & Jacobsen (2004), Int. J. Thermophys. 25, 21–69, eqs. 2–4 and table 1.
  */
 export function muAirDiluteLemmonJacobsen(T_K: number): number {
