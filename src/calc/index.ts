@@ -2,8 +2,6 @@
  * Filmsheet's calculation engine: calculation contract v1 (shared/design/calc-contract.md).
  * Pure TypeScript with no I/O, so it runs the same in the browser and on the server.
  */
-import { CalcBodyError, CaseReader, InputError, type CalcResult } from "./contract";
-import { KIND_NAMES, KINDS } from "./kinds";
 
 export { CalcBodyError, InputError } from "./contract";
 export type { CalcResult, CalcWarning, CalcErrorBody } from "./contract";
@@ -11,56 +9,9 @@ export { METHODS, METHOD_BY_ID, dispatch } from "./registry";
 export { pressureAtAltitude } from "./properties/atmosphere";
 export { airProperties } from "./properties/air";
 export { zoneTotals } from "./zone";
-export { KIND_NAMES };
+export { KIND_NAMES } from "./kinds";
+export { calculate, calculateCase } from "./calculate";
 
-function fail(id: string | null, field: string, message: string): CalcResult {
-  return { id, ok: false, error: { code: "invalid_input", field, message } };
-}
-
-/** True when every number in the value is finite (the contract never answers NaN or Infinity). */
-function allFinite(o: Record<string, unknown>): boolean {
-  for (const k in o) {
-    const v = o[k];
-    if (typeof v === "number" && !Number.isFinite(v)) return false;
-  }
-  return true;
-}
-
-/** Computes one case; never throws for bad input. */
-export function calculateCase(c: unknown): CalcResult {
-  if (c === null || typeof c !== "object" || Array.isArray(c)) {
-    return fail(null, "case", "each case must be an object with a kind");
-  }
-  const raw = c as Record<string, unknown>;
-  let id: string | null = null;
-  if (raw.id !== undefined) {
-    if (typeof raw.id === "string") id = raw.id;
-    else if (typeof raw.id === "number" && Number.isFinite(raw.id)) id = String(raw.id);
-    else return fail(null, "id", "id must be a string");
-  }
-  const kind = raw.kind;
-  if (typeof kind !== "string" || !Object.prototype.hasOwnProperty.call(KINDS, kind)) {
-    const what = kind === undefined ? "kind is required" : `unknown kind ${JSON.stringify(kind)}`;
-    return fail(id, "kind", `${what}; valid kinds: ${KIND_NAMES.join(", ")}`);
-  }
-  try {
-    const out = KINDS[kind](new CaseReader(raw), id);
-    if (!allFinite(out as Record<string, unknown>)) {
-      return fail(id, "kind", "the inputs lead outside the range where this method gives a finite answer");
-    }
-    return out;
-  } catch (e) {
-    if (e instanceof InputError) return fail(id, e.field, e.message);
-    throw e;
-  }
-}
-
-/** Computes every case of a contract body `{ "cases": [ … ] }`, answering in the same order. */
-export function calculate(body: unknown): { results: CalcResult[] } {
-  if (body === null || typeof body !== "object" || Array.isArray(body)) {
-    throw new CalcBodyError('the body must be a JSON object { "cases": [ … ] }');
-  }
-  const cases = (body as Record<string, unknown>).cases;
-  if (!Array.isArray(cases)) throw new CalcBodyError('"cases" must be an array of case objects');
-  return { results: cases.map(calculateCase) };
-}
+export * from "./schedule/types";
+export { buildupResistance, ductRunCase, insideTemperature, solarOnSurface, surfaceCase } from "./schedule/cases";
+export { scheduleResults, type Schedule, type ScheduleResults, type RowResult } from "./schedule/results";

@@ -1,0 +1,109 @@
+/**
+ * From a schedule row and a design case to a contract case (calc-contract.md): the one place that
+ * decides which temperatures, wind, solar and resistances a row sees in a design case. The cases
+ * are plain contract requests, so the browser, the server and `npm run calc` compute them alike.
+ */
+import { pressureAtAltitude } from "../properties/atmosphere";
+import { windSpeedLogLaw, windSpeedPowerLaw } from "../wind/wind-profile";
+import { ORIENTATIONS, type Buildup, type DesignCase, type DuctRunRow, type Site, type SolarTable, type SurfaceRow, type Zone } from "./types";
+
+/** Construction resistance of a build-up, m²K/W: Σ t/k over its layers, or its direct R. */
+export function buildupResistance(b: Pick<Buildup, "layers" | "R_direct_m2K_W">): number {
+  if (b.layers.length > 0) {
+    let R = 0;
+    for (const l of b.layers) R += l.thickness_m / l.k_W_mK;
+    return R;
+  }
+  return b.R_direct_m2K_W ?? 0;
+}
+
+/**
+ * Irradiance on a surface from a design case's table, W/m²: on vertical faces interpolated
+ * linearly in azimuth between the two neighbouring compass points; on tilted faces blended
+ * linearly in tilt between the horizontal value (tilt 0) and the vertical one (tilt 90); faces
+ * turned downward (tilt > 90) take the vertical value scaled down to 0 at tilt 180. A schedule-level
+ * estimate (common practice); a row needing better takes its irradiance from a solar study.
+ */
+export function solarOnSurface(table: SolarTable, tiltDeg: number, azimuthDeg: number): number {
+  const a = ((azimuthDeg % 360) + 360) % 360;
+  const i = Math.floor(a / 45) % 8;
+  const f = (a - i * 45) / 45;
+  const v0 = table[ORIENTATIONS[i]] ?? 0;
+  const v1 = table[ORIENTATIONS[(i + 1) % 8]] ?? 0;
+  const vertical = v0 + f * (v1 - v0);
+  const horizontal = table.horizontal ?? 0;
+  if (tiltDeg <= 90) return horizontal + (tiltDeg / 90) * (vertical - horizontal);
+  return vertical * ((180 - tiltDeg) / 90);
+}
+
+/** Inside temperature of a zone in a design case: heating or cooling set point by the case's kind. */
+export function insideTemperature(zone: Zone, dc: DesignCase): number {
+  return dc.kind === "heating" ? zone.T_heating_C : zone.T_cooling_C;
+}
+
+/** The `surface` case of a row in a design case. */
+export function surfaceCase(site: Site, dc: DesignCase, zone: Zone, buildup: Buildup, row: SurfaceRow) {
+  return {
+    id: row.id,
+    kind: "surface" as const,
+    area_m2: row.area_m2,
+    tilt_deg: row.tilt_deg,
+    azimuth_deg: row.azimuth_deg,
+    height_m: row.height_m,
+    length_m: row.length_m,
+    panel_height_m: row.panel_height_m,
+    R_construction_m2K_W: buildupResistance(buildup),
+    T_inside_C: insideTemperature(zone, dc),
+    T_outside_C: dc.T_outdoor_C,
+    V_met_m_s: dc.V_met_m_s,
+    wind_from_deg: dc.wind_from_deg,
+    terrain: site.terrain,
+    law: site.wind_law,
+    emissivity: row.emissivity ?? buildup.emissivity,
+    absorptance: row.absorptance ?? buildup.absorptance,
+    solar_W_m2: solarOnSurface(dc.solar_W_m2, row.tilt_deg, row.azimuth_deg),
+    method: row.method ?? site.method,
+    pressure_Pa: pressureAtAltitude(site.altitude_m),
+  };
+}
+
+/** Height assumed for an outdoor duct run without one, m (a low-rise roof). */
+export const DEFAULT_DUCT_ELEVATION_M = 10;
+
+/**
+ * The `duct_run` case of a row in a design case. The run crosses the space at T_surround (the
+ * outdoor air when none is given); its humidity is the outdoor RH outdoors or in a space at the
+ * outdoor temperature, the zone's inside RH otherwise, unless the row gives one; an outdoor run
+ * sees the site wind at its elevation.
+ */
+export function ductRunCase(site: Site, dc: DesignCase, zone: Zone, row: DuctRunRow) {
+  const outdoorAir = row.T_surround_C === null;
+  const T_ambient_C = outdoorAir ? dc.T_outdoor_C : (row.T_surround_C as number);
+  const RH = row.RH_surround_pct ?? (row.location === "outdoor" || outdoorAir ? dc.RH_outdoor_pct : zone.RH_inside_pct);
+  const z = row.elevation_m ?? DEFAULT_DUCT_ELEVATION_M;
+  const wind =
+    row.location === "outdoor"
+      ? site.wind_law === "log"
+        ? windSpeedLogLaw(dc.V_met_m_s, z, site.terrain, 10)
+        : windSpeedPowerLaw(dc.V_met_m_s, z, site.terrain, 10)
+      : 0;
+  const section = row.shape === "round" ? { diameter_m: row.diameter_m } : { width_m: row.width_m, height_m: row.height_m };
+  return {
+    id: row.id,
+    kind: "duct_run" as const,
+    shape: row.shape,
+    ...section,
+    length_m: row.length_m,
+    flow_m3_s: row.flow_m3_s,
+    T_entering_C: dc.kind === "heating" ? row.T_entering_heating_C : row.T_entering_cooling_C,
+    T_ambient_C,
+    RH_ambient_pct: RH,
+    insulation_thickness_m: row.insulation_thickness_m,
+    insulation_k_W_mK: row.insulation_k_W_mK,
+    jacket_emissivity: row.jacket_emissivity,
+    location: row.location,
+    V_wind_m_s: wind,
+    margin_K: row.margin_K,
+    pressure_Pa: pressureAtAltitude(site.altitude_m),
+  };
+}

@@ -1,0 +1,100 @@
+/**
+ * The schedule as the engine sees it: a project's site, design cases, zones, build-ups, surfaces
+ * and duct runs, in SI. The database rows and zod schemas (src/schemas) map onto these; the engine
+ * turns them into contract cases (schedule/cases.ts) and totals (schedule/results.ts).
+ */
+import type { ExteriorMethod } from "../surface";
+import type { Terrain } from "../wind/wind-profile";
+import type { WindLaw } from "../kinds/wind";
+
+export interface Site {
+  altitude_m: number;
+  terrain: Terrain;
+  wind_law: WindLaw;
+  /** The firm's or project's default exterior convection method. */
+  method: ExteriorMethod;
+}
+
+/** Orientations for which a design case gives solar irradiance on a vertical surface, plus horizontal. */
+export const ORIENTATIONS = ["N", "NE", "E", "SE", "S", "SW", "W", "NW"] as const;
+export type Orientation = (typeof ORIENTATIONS)[number];
+export type SolarTable = Partial<Record<Orientation | "horizontal", number>>;
+
+export interface DesignCase {
+  id: string;
+  name: string;
+  kind: "heating" | "cooling";
+  T_outdoor_C: number;
+  RH_outdoor_pct: number;
+  V_met_m_s: number;
+  wind_from_deg: number;
+  /** Irradiance, W/m², on vertical surfaces by orientation and on a horizontal one; absent = 0. */
+  solar_W_m2: SolarTable;
+}
+
+export interface Zone {
+  id: string;
+  name: string;
+  floor_area_m2: number;
+  T_heating_C: number;
+  T_cooling_C: number;
+  RH_inside_pct: number;
+}
+
+export interface Layer {
+  material: string;
+  thickness_m: number;
+  k_W_mK: number;
+}
+
+export interface Buildup {
+  id: string;
+  name: string;
+  /** Either layers (R = Σ t/k) or a direct construction resistance; surface resistances excluded. */
+  layers: Layer[];
+  R_direct_m2K_W: number | null;
+  absorptance: number;
+  emissivity: number;
+}
+
+export interface SurfaceRow {
+  id: string;
+  zone_id: string;
+  buildup_id: string;
+  label: string;
+  area_m2: number;
+  tilt_deg: number;
+  azimuth_deg: number;
+  height_m: number;
+  length_m: number;
+  panel_height_m: number;
+  /** Per-row overrides; null keeps the project's or build-up's value. */
+  method: ExteriorMethod | null;
+  absorptance: number | null;
+  emissivity: number | null;
+}
+
+export interface DuctRunRow {
+  id: string;
+  zone_id: string;
+  label: string;
+  shape: "round" | "rect";
+  diameter_m: number | null;
+  width_m: number | null;
+  height_m: number | null;
+  length_m: number;
+  flow_m3_s: number;
+  T_entering_heating_C: number;
+  T_entering_cooling_C: number;
+  location: "indoor" | "outdoor";
+  /** Temperature of the space the run crosses; null = the outdoor air of the design case. */
+  T_surround_C: number | null;
+  /** Relative humidity of that space; null = outdoor RH (outdoors) or the zone's inside RH. */
+  RH_surround_pct: number | null;
+  /** Height above ground of an outdoor run, for the wind at the duct; null = 10 m. */
+  elevation_m: number | null;
+  insulation_thickness_m: number;
+  insulation_k_W_mK: number;
+  jacket_emissivity: number;
+  margin_K: number;
+}

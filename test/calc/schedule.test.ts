@@ -1,0 +1,120 @@
+// The schedule mapping: which temperatures, wind, solar and resistance a row sees in a design case.
+// Expected values follow by hand from the definitions in src/calc/schedule (definition), with
+// material conductivities as common practice.
+import { describe, expect, test } from "vitest";
+import {
+  buildupResistance,
+  calculateCase,
+  ductRunCase,
+  pressureAtAltitude,
+  scheduleResults,
+  solarOnSurface,
+  surfaceCase,
+  type Buildup,
+  type DesignCase,
+  type DuctRunRow,
+  type Site,
+  type SurfaceRow,
+  type Zone,
+} from "../../src/calc/index";
+
+const site: Site = { altitude_m: 120, terrain: "suburban", wind_law: "power", method: "boundary_layer" };
+const winter: DesignCase = { id: "dc-w", name: "Windy winter", kind: "heating", T_outdoor_C: -4, RH_outdoor_pct: 85, V_met_m_s: 7, wind_from_deg: 240, solar_W_m2: {} };
+const summer: DesignCase = {
+  id: "dc-s", name: "Sunny summer", kind: "cooling", T_outdoor_C: 31, RH_outdoor_pct: 45, V_met_m_s: 3, wind_from_deg: 200,
+  solar_W_m2: { horizontal: 820, N: 110, NE: 250, E: 420, SE: 480, S: 430, SW: 480, W: 420, NW: 250 },
+};
+const zone: Zone = { id: "z1", name: "Reading room", floor_area_m2: 250, T_heating_C: 21, T_cooling_C: 24, RH_inside_pct: 50 };
+// Brick 102.5 mm (k 0.77) + mineral wool 150 mm (k 0.035): common-practice conductivities.
+const wall: Buildup = {
+  id: "b1", name: "Brick and wool",
+  layers: [{ material: "brick", thickness_m: 0.1025, k_W_mK: 0.77 }, { material: "mineral wool", thickness_m: 0.15, k_W_mK: 0.035 }],
+  R_direct_m2K_W: null, absorptance: 0.65, emissivity: 0.9,
+};
+const row: SurfaceRow = {
+  id: "s1", zone_id: "z1", buildup_id: "b1", label: "West wall", area_m2: 36, tilt_deg: 90, azimuth_deg: 270,
+  height_m: 4, length_m: 12, panel_height_m: 3, method: null, absorptance: null, emissivity: null,
+};
+
+describe("build-up resistance", () => {
+  test("layers add as Σ t/k; a direct R stands when there are no layers", () => {
+    expect(buildupResistance(wall)).toBeCloseTo(0.1025 / 0.77 + 0.15 / 0.035, 12); // 4.419 m²K/W
+    expect(buildupResistance({ layers: [], R_direct_m2K_W: 2.2 })).toBe(2.2);
+  });
+});
+
+describe("solar on a surface", () => {
+  test.each([
+    ["due west wall", 90, 270, 420],
+    ["south-south-west wall, halfway between S and SW", 90, 202.5, 455],
+    ["north wall", 90, 0, 110],
+    ["flat roof", 0, 0, 820],
+    ["roof pitched 45° to the south, halfway between horizontal and S", 45, 180, 625],
+    ["soffit facing down", 180, 180, 0],
+  ])("%s", (_label, tilt, azimuth, expected) => {
+    expect(solarOnSurface(summer.solar_W_m2, tilt, azimuth)).toBeCloseTo(expected, 9);
+  });
+  test("an absent orientation counts as no sun", () => {
+    expect(solarOnSurface({}, 90, 180)).toBe(0);
+  });
+});
+
+describe("surface case", () => {
+  test("heating case: heating set point, outdoor air, site wind and pressure, build-up R and finishes", () => {
+    const c = surfaceCase(site, winter, zone, wall, row);
+    expect(c).toMatchObject({
+      kind: "surface", T_inside_C: 21, T_outside_C: -4, V_met_m_s: 7, wind_from_deg: 240, terrain: "suburban", law: "power",
+      absorptance: 0.65, emissivity: 0.9, solar_W_m2: 0, method: "boundary_layer",
+    });
+    expect(c.R_construction_m2K_W).toBeCloseTo(buildupResistance(wall), 12);
+    expect(c.pressure_Pa).toBe(pressureAtAltitude(120));
+  });
+  test("cooling case: cooling set point and the irradiance for the face; row overrides win", () => {
+    const c = surfaceCase(site, summer, zone, wall, { ...row, method: "iso6946", absorptance: 0.3 });
+    expect(c).toMatchObject({ T_inside_C: 24, T_outside_C: 31, solar_W_m2: 420, method: "iso6946", absorptance: 0.3, emissivity: 0.9 });
+    const r = calculateCase(c);
+    expect(r.ok).toBe(true);
+    // A sunlit wall in summer gains heat: q negative by the contract's sign.
+    if (r.ok) expect(r.q_W_m2 as number).toBeLessThan(0);
+  });
+});
+
+const duct: DuctRunRow = {
+  id: "d1", zone_id: "z1", label: "Roof supply", shape: "round", diameter_m: 0.4, width_m: null, height_m: null, length_m: 18,
+  flow_m3_s: 0.7, T_entering_heating_C: 35, T_entering_cooling_C: 13, location: "outdoor", T_surround_C: null, RH_surround_pct: null,
+  elevation_m: 12, insulation_thickness_m: 0.025, insulation_k_W_mK: 0.037, jacket_emissivity: 0.9, margin_K: 1,
+};
+
+describe("duct-run case", () => {
+  test("outdoor run: outdoor air and RH, wind at its elevation, entering temperature by the case's kind", () => {
+    const c = ductRunCase(site, summer, zone, duct);
+    expect(c).toMatchObject({ T_entering_C: 13, T_ambient_C: 31, RH_ambient_pct: 45, location: "outdoor", diameter_m: 0.4 });
+    // Power law (contract): 3 m/s at 10 m open → 12 m suburban: 3 (270/10)^0.14 (12/370)^0.22.
+    expect(c.V_wind_m_s).toBeCloseTo(3 * Math.pow(27, 0.14) * Math.pow(12 / 370, 0.22), 9);
+    expect(ductRunCase(site, winter, zone, duct).T_entering_C).toBe(35);
+  });
+  test("run in a ceiling void: the void's temperature, the zone's RH, no wind", () => {
+    const c = ductRunCase(site, summer, zone, { ...duct, location: "indoor", T_surround_C: 28, shape: "rect", diameter_m: null, width_m: 0.6, height_m: 0.3 });
+    expect(c).toMatchObject({ T_ambient_C: 28, RH_ambient_pct: 50, V_wind_m_s: 0, width_m: 0.6, height_m: 0.3 });
+    expect("diameter_m" in c).toBe(false);
+  });
+});
+
+describe("schedule results", () => {
+  test("every row is computed and the zone total is the sum of its rows by sign", () => {
+    const second: SurfaceRow = { ...row, id: "s2", label: "North wall", azimuth_deg: 0, area_m2: 20 };
+    const res = scheduleResults({ site, zones: [zone], buildups: [wall], surfaces: [row, second], ductRuns: [duct] }, winter);
+    expect(res.surfaces.map((s) => s.result.ok)).toEqual([true, true]);
+    expect(res.duct_runs[0].result.ok).toBe(true);
+    const q = res.surfaces.map((s) => (s.result.ok ? (s.result.Q_W as number) : NaN));
+    const d = res.duct_runs[0].result.ok ? (res.duct_runs[0].result.Q_W as number) : NaN;
+    expect(d).toBeLessThan(0); // warm supply air losing heat on a winter roof
+    expect(res.zones[0].loss_W).toBeCloseTo(q[0] + q[1] - d, 9);
+    expect(res.zones[0].loss_W_m2).toBeCloseTo(res.zones[0].loss_W / 250, 12);
+  });
+  test("a row pointing at a missing zone or build-up answers an error naming the field, the others still compute", () => {
+    const res = scheduleResults({ site, zones: [zone], buildups: [wall], surfaces: [{ ...row, buildup_id: "nope" }, row], ductRuns: [] }, winter);
+    expect(res.surfaces[0].result).toMatchObject({ ok: false, error: { field: "buildup_id" } });
+    expect(res.surfaces[1].result.ok).toBe(true);
+  });
+});
