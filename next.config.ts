@@ -27,8 +27,9 @@ const securityHeaders = [
 const nextConfig: NextConfig = {
   poweredByHeader: false,
   reactStrictMode: true,
-  // Knex loads database drivers dynamically; bundling it breaks that, so keep it (and pg) external.
-  serverExternalPackages: ["knex", "pg"],
+  // Knex loads database drivers dynamically and graphile-worker its own SQL files; bundling breaks
+  // that, so keep them (and pg, nodemailer) external.
+  serverExternalPackages: ["knex", "pg", "graphile-worker", "nodemailer"],
   // Type errors do not stop a build (so `npm start` still serves while a change is half done);
   // `npm test` type-checks the whole project as a suite of its own (tsc --noEmit).
   typescript: { ignoreBuildErrors: true },

@@ -31,7 +31,14 @@ export default defineConfig({
           name: "integration",
           environment: "node",
           include: ["test/server/**/*.{test,spec}.ts"],
-          env: { DATABASE_URL: process.env.TEST_DATABASE_URL ?? "", NEXT_TELEMETRY_DISABLED: "1" },
+          env: {
+            DATABASE_URL: process.env.TEST_DATABASE_URL ?? "",
+            NEXT_TELEMETRY_DISABLED: "1",
+            // A fixed secret for sessions made by the in-process app; valid for tests only.
+            AUTH_SECRET: "filmsheet-test-secret-not-for-any-real-site-0123456789",
+            // No mail server by default (port 1 refuses at once); e-mail tests start their own sink.
+            SMTP_URL: "smtp://127.0.0.1:1?ignoreTLS=true",
+          },
           globalSetup: [here("./test/support/require-test-database.ts")],
           // Each file boots its own Next server or database: run them one at a time.
           fileParallelism: false,

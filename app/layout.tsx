@@ -3,6 +3,8 @@ import localFont from "next/font/local";
 import type { ReactNode } from "react";
 import { AppShell } from "@/components/shell/app-shell";
 import { themeScript } from "@/components/shell/theme";
+import { getViewer } from "@/server/auth/get-viewer";
+import { signOutAction, switchFirmAction } from "./(auth)/actions";
 import "./globals.css";
 
 // Inter (variable weight), shipped in the repository: builds never reach the internet.
@@ -26,7 +28,9 @@ export const viewport: Viewport = {
   ],
 };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  const viewer = await getViewer();
+  const shell = viewer ? { user: viewer.user, firm: viewer.actor?.firm, firms: viewer.actor?.firms ?? [] } : null;
   return (
     // The theme script sets data-theme before hydration, hence suppressHydrationWarning.
     <html lang="en" className={inter.variable} suppressHydrationWarning>
@@ -34,7 +38,9 @@ export default function RootLayout({ children }: { children: ReactNode }) {
         <script dangerouslySetInnerHTML={{ __html: themeScript }} />
       </head>
       <body>
-        <AppShell>{children}</AppShell>
+        <AppShell viewer={shell} signOut={signOutAction} switchFirm={switchFirmAction}>
+          {children}
+        </AppShell>
       </body>
     </html>
   );

@@ -18,10 +18,7 @@ export const DEMO_USERS = [
   { email: "admin@other.filmsheet.test", name: "Priya Ostrander", firm: "ostrander-mechanical", roles: ["admin"] },
 ] as const;
 
-/**
- * The invented building the demo project describes. The projects table arrives with the
- * projects work; its seed turns this into Tarnbrook & Sill's first project.
- */
+/** The invented building Tarnbrook & Sill's demo project describes. */
 export const DEMO_BUILDING = {
   name: "Larchfield Community Library, extension",
   site: "Larchfield, on an exposed ridge at 212 m above sea level",
@@ -30,6 +27,12 @@ export const DEMO_BUILDING = {
   summary:
     "Two-storey timber-frame extension: a rainscreen-clad reading room, a flat roof with a rooftop air-handling unit, and supply ducts running across the roof to the plant room.",
 } as const;
+
+/** One project per firm, so that each firm sees its own and never the other's. */
+export const DEMO_PROJECTS = [
+  { firm: "tarnbrook-sill", reference: "TS-2417", name: DEMO_BUILDING.name },
+  { firm: "ostrander-mechanical", reference: "OMD-0982", name: "Pellworth Ferry Terminal, waiting hall" },
+] as const;
 
 export async function seed(knex: Knex): Promise<void> {
   if (process.env.NODE_ENV === "production") {
@@ -57,6 +60,13 @@ export async function seed(knex: Knex): Promise<void> {
         .returning(["id"]);
       const memberships = user.roles.map((role) => ({ firm_id: firmIds.get(user.firm), user_id: row.id, role }));
       await trx("memberships").insert(memberships).onConflict(["firm_id", "user_id", "role"]).ignore();
+    }
+
+    for (const project of DEMO_PROJECTS) {
+      await trx("projects")
+        .insert({ firm_id: firmIds.get(project.firm), reference: project.reference, name: project.name })
+        .onConflict(["firm_id", "reference"])
+        .ignore();
     }
   });
 }

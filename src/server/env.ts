@@ -17,8 +17,32 @@ export const ZEnv = z.object({
   STRIPE_API_URL: z.url().default("http://127.0.0.1:12111"),
   STRIPE_SECRET_KEY: z.string().startsWith("sk_").default("sk_test_filmsheet_local"),
   HEALTH_DB_TIMEOUT_MS: z.coerce.number().int().min(100).max(30000).default(1500),
-});
+  // The e-mail worker runs inside every app instance unless switched off (e.g. a web-only node).
+  JOBS_WORKER: z.enum(["on", "off"]).default("on"),
+})
+  // Sign-in needs a secret in production, and a production site outside this machine must be
+  // served over https so that its session cookie can be marked Secure.
+  .superRefine((e, ctx) => {
+    if (e.NODE_ENV !== "production") return;
+    if (e.AUTH_SECRET === undefined) ctx.addIssue({ code: "custom", path: ["AUTH_SECRET"], message: "AUTH_SECRET is required in production" });
+    if (!isHttps(e.APP_URL) && !isLoopback(e.APP_URL)) {
+      ctx.addIssue({ code: "custom", path: ["APP_URL"], message: "APP_URL must be https:// in production (http only for localhost)" });
+    }
+  });
 export type TEnv = z.infer<typeof ZEnv>;
+
+function isHttps(url: string): boolean {
+  return url.startsWith("https://");
+}
+
+function isLoopback(url: string): boolean {
+  return ["localhost", "127.0.0.1", "[::1]"].includes(new URL(url).hostname);
+}
+
+/** Cookies are Secure whenever the app is served over https, as every production site is. */
+export function secureCookies(e: TEnv = env()): boolean {
+  return isHttps(e.APP_URL);
+}
 
 /** Parses an environment; throws one error that lists every problem. */
 export function parseEnv(source: Record<string, string | undefined>): TEnv {

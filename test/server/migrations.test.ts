@@ -6,7 +6,19 @@ import { DEFAULT_DEMO_PASSWORD, DEMO_USERS } from "../../db/seeds/01_demo_firms"
 import { createScratchDatabase, dropScratchDatabase, knexCli } from "../support/database";
 
 const NAME = "filmsheet_test_migrations";
-const TABLES = ["firms", "users", "memberships"];
+const TABLES = [
+  "accounts",
+  "api_tokens",
+  "firms",
+  "invitations",
+  "memberships",
+  "password_resets",
+  "projects",
+  "sessions",
+  "sign_in_attempts",
+  "users",
+  "verification_token",
+];
 let url: string;
 let db: Knex;
 
@@ -21,6 +33,7 @@ const counts = async () => ({
   firms: Number((await db("firms").count({ n: "*" }))[0]!.n),
   users: Number((await db("users").count({ n: "*" }))[0]!.n),
   memberships: Number((await db("memberships").count({ n: "*" }))[0]!.n),
+  projects: Number((await db("projects").count({ n: "*" }))[0]!.n),
 });
 const cli = (args: string[], extra: Record<string, string> = {}) => knexCli(args, { DATABASE_URL: url, NODE_ENV: "test", DEMO_PASSWORD: "", ...extra });
 
@@ -34,18 +47,23 @@ afterAll(async () => {
 });
 
 describe("migrations round trip", () => {
-  test("migrate:latest creates firms, users and memberships", async () => {
+  test("migrate:latest creates the firm, user, Auth.js, access and project tables", async () => {
     const r = cli(["migrate:latest"]);
     expect(r.status, r.output).toBe(0);
-    expect(await tablesPresent()).toEqual(["firms", "memberships", "users"]);
+    expect(await tablesPresent()).toEqual(TABLES);
   });
 
-  test("the demo seed loads two firms, five users and one membership each, and is idempotent", async () => {
+  test("the demo seed loads two firms, five users, one membership each and a project per firm, and is idempotent", async () => {
     for (let run = 1; run <= 2; run++) {
       const r = cli(["seed:run"]);
       expect(r.status, `seed run ${run}: ${r.output}`).toBe(0);
-      expect(await counts()).toEqual({ firms: 2, users: DEMO_USERS.length, memberships: DEMO_USERS.length });
+      expect(await counts()).toEqual({ firms: 2, users: DEMO_USERS.length, memberships: DEMO_USERS.length, projects: 2 });
     }
+    const projects = await db("projects as p").join("firms as f", "f.id", "p.firm_id").select("f.slug", "p.reference").orderBy("f.slug");
+    expect(projects).toEqual([
+      { slug: "ostrander-mechanical", reference: "OMD-0982" },
+      { slug: "tarnbrook-sill", reference: "TS-2417" },
+    ]);
     const roles = await db("memberships as m")
       .join("users as u", "u.id", "m.user_id")
       .join("firms as f", "f.id", "m.firm_id")
@@ -67,6 +85,14 @@ describe("migrations round trip", () => {
     expect(r.output).toContain("Refusing to load demo data");
   });
 
+  test("an invitation with an unknown role, or a firm with no seats, is rejected by the database", async () => {
+    const firm = await db("firms").first();
+    await expect(
+      db("invitations").insert({ firm_id: firm.id, email: "x@example.test", roles: ["owner"], token_hash: "h1", expires_at: new Date() }),
+    ).rejects.toThrow(/invitations_roles_known/);
+    await expect(db("firms").where({ id: firm.id }).update({ seats: 0 })).rejects.toThrow(/firms_seats_positive/);
+  });
+
   test("a membership role outside admin/consultant/checker/viewer is rejected by the database", async () => {
     const user = await db("users").first();
     const firm = await db("firms").first();
@@ -79,7 +105,7 @@ describe("migrations round trip", () => {
     expect(await tablesPresent()).toEqual([]);
     const up = cli(["migrate:latest"]);
     expect(up.status, up.output).toBe(0);
-    expect(await tablesPresent()).toEqual(["firms", "memberships", "users"]);
-    expect(await counts()).toEqual({ firms: 0, users: 0, memberships: 0 });
+    expect(await tablesPresent()).toEqual(TABLES);
+    expect(await counts()).toEqual({ firms: 0, users: 0, memberships: 0, projects: 0 });
   });
 });

@@ -24,6 +24,8 @@ export async function startBuiltApp(): Promise<{ server: Server; close: () => Pr
   return {
     server,
     close: async () => {
+      // The app started its job worker in this process (instrumentation.ts): stop it first.
+      await (globalThis as { __filmsheetStopWorker?: () => Promise<void> }).__filmsheetStopWorker?.();
       await app.close();
       await new Promise((resolve) => server.close(resolve));
     },

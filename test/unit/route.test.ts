@@ -16,14 +16,17 @@ describe("AppError codes map to HTTP statuses in one place", () => {
     ["invalid_input", 422],
     ["unauthenticated", 401],
     ["forbidden", 403],
+    ["cross_site_request", 403],
     ["not_found", 404],
     ["conflict", 409],
+    ["gone", 410],
     ["payload_too_large", 413],
+    ["too_many_requests", 429],
     ["unavailable", 503],
     ["internal", 500],
   ] as [AppErrorCode, number][])("%s → %i", async (code, status) => {
     expect(ERROR_STATUS[code]).toBe(status);
-    const handler = route({}, () => {
+    const handler = route({ auth: "public" }, () => {
       throw new AppError(code, `failed with ${code}`);
     });
     const res = await handler(new Request("http://test/x"));
@@ -34,7 +37,7 @@ describe("AppError codes map to HTTP statuses in one place", () => {
 
 describe("input parsing", () => {
   const ZThing = z.object({ name: z.string().min(1), width_m: z.number().positive() });
-  const create = route({ body: ZThing }, ({ body }) => ({ created: body.name }));
+  const create = route({ auth: "public", body: ZThing }, ({ body }) => ({ created: body.name }));
 
   test("a valid body reaches the handler and its return value becomes JSON", async () => {
     const res = await create(post(JSON.stringify({ name: "North wall", width_m: 4.2 })));
@@ -51,7 +54,7 @@ describe("input parsing", () => {
   });
 
   test("a route can choose 400 for invalid input, as a contract may require", async () => {
-    const strict = route({ body: ZThing, invalidStatus: 400 }, () => ({}));
+    const strict = route({ auth: "public", body: ZThing, invalidStatus: 400 }, () => ({}));
     const res = await strict(post(JSON.stringify({ name: 3 })));
     expect(res.status).toBe(400);
     expect((await res.json()).error.code).toBe("bad_request");
@@ -64,13 +67,13 @@ describe("input parsing", () => {
   });
 
   test("a body over the size limit is 413", async () => {
-    const small = route({ body: ZThing, maxBodyBytes: 16 }, () => ({}));
+    const small = route({ auth: "public", body: ZThing, maxBodyBytes: 16 }, () => ({}));
     const res = await small(post(JSON.stringify({ name: "a long name for a wall", width_m: 1 })));
     expect(res.status).toBe(413);
   });
 
   test("params and query are validated too", async () => {
-    const show = route({ params: z.object({ projectId: z.uuid() }), query: z.object({ case: z.enum(["winter", "summer"]) }) }, ({ params, query }) => ({
+    const show = route({ auth: "public", params: z.object({ projectId: z.uuid() }), query: z.object({ case: z.enum(["winter", "summer"]) }) }, ({ params, query }) => ({
       id: params.projectId,
       case: query.case,
     }));
@@ -84,13 +87,13 @@ describe("input parsing", () => {
   });
 
   test("a ZodError thrown inside a handler is mapped like invalid input", async () => {
-    const handler = route({}, () => z.object({ n: z.number() }).parse({ n: "x" }));
+    const handler = route({ auth: "public" }, () => z.object({ n: z.number() }).parse({ n: "x" }));
     expect((await handler(new Request("http://test/x"))).status).toBe(422);
   });
 
   test("an unexpected error is 500 without leaking its message", async () => {
     vi.spyOn(console, "error").mockImplementation(() => {});
-    const handler = route({}, () => {
+    const handler = route({ auth: "public" }, () => {
       throw new Error("connection string with a password");
     });
     const res = await handler(new Request("http://test/x"));
@@ -99,7 +102,7 @@ describe("input parsing", () => {
   });
 
   test("a handler may return its own Response", async () => {
-    const handler = route({}, () => new Response("teapot", { status: 418 }));
+    const handler = route({ auth: "public" }, () => new Response("teapot", { status: 418 }));
     expect((await handler(new Request("http://test/x"))).status).toBe(418);
   });
 });

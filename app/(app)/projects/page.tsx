@@ -1,12 +1,13 @@
 import type { Metadata } from "next";
-import { EmptyState } from "@/components/empty-state";
+import { hasAnyRole } from "@/server/auth/actor";
+import { requirePageActor } from "@/server/auth/get-viewer";
+import { listProjects } from "@/server/services/list-projects";
+import { ProjectsView } from "./projects-view";
 
 export const metadata: Metadata = { title: "Projects" };
 
-export default function ProjectsPage() {
-  return (
-    <EmptyState title="Projects" lead="Each project holds a schedule of external surfaces and duct runs, its design cases, zones and revisions.">
-      No projects yet. Creating projects arrives with sign-in.
-    </EmptyState>
-  );
+export default async function ProjectsPage() {
+  const actor = await requirePageActor("/projects");
+  const projects = await listProjects(actor);
+  return <ProjectsView firmName={actor.firm.name} projects={projects} canCreate={hasAnyRole(actor, ["consultant"])} />;
 }

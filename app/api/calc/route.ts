@@ -1,4 +1,5 @@
 // POST /api/calc: calculation contract v1 (shared/design/calc-contract.md); same answer as `npm run calc`.
+// Any member or API token may calculate; anonymous callers get 401.
 import { CALC_LIMITS, ZCalcBody } from "@/schemas/calc";
 import { route } from "@/server/http/route";
 import { runCalc } from "@/server/services/run-calc";

@@ -5,9 +5,26 @@ import { EngineeringCaution } from "@/components/engineering-caution";
 import { ContextSwitcher } from "./context-switcher";
 import { MainNav } from "./main-nav";
 import { ThemeSwitch } from "./theme-switch";
+import { UserMenu } from "./user-menu";
 
-/** Header (brand, firm/project switcher, theme), navigation rail, content area and footer. */
-export function AppShell({ children }: { children: ReactNode }) {
+export interface ShellViewer {
+  user: { name: string | null; email: string };
+  firm?: { id: string; name: string };
+  firms: { id: string; name: string }[];
+}
+
+/** Header (brand, firm switcher, theme, user), navigation rail, content area and footer. */
+export function AppShell({
+  children,
+  viewer,
+  signOut,
+  switchFirm,
+}: {
+  children: ReactNode;
+  viewer: ShellViewer | null;
+  signOut: (form: FormData) => Promise<void>;
+  switchFirm: (form: FormData) => Promise<void>;
+}) {
   return (
     <div className="flex min-h-dvh flex-col">
       <a href="#content" className="sr-only focus:not-sr-only focus:absolute focus:left-3 focus:top-3 focus:z-10 focus:rounded-chip focus:bg-surface focus:px-3 focus:py-2">
@@ -19,9 +36,10 @@ export function AppShell({ children }: { children: ReactNode }) {
           <span className="text-lead">Filmsheet</span>
         </Link>
         <span className="hidden h-5 w-px bg-line sm:block" aria-hidden="true" />
-        <ContextSwitcher />
+        <ContextSwitcher firm={viewer?.firm} firms={viewer?.firms ?? []} switchFirm={switchFirm} />
         <div className="ml-auto flex items-center gap-3">
           <ThemeSwitch />
+          <UserMenu user={viewer?.user} signOut={signOut} />
         </div>
       </header>
       <div className="flex flex-1 flex-col md:flex-row">

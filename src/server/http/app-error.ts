@@ -6,9 +6,12 @@ export const ERROR_STATUS = {
   invalid_input: 422,
   unauthenticated: 401,
   forbidden: 403,
+  cross_site_request: 403,
   not_found: 404,
   conflict: 409,
+  gone: 410,
   payload_too_large: 413,
+  too_many_requests: 429,
   unavailable: 503,
   internal: 500,
 } as const;

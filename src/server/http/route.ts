@@ -1,10 +1,21 @@
 import "server-only";
 import { z, type ZodType } from "zod";
+import type { TRole } from "@/schemas/roles";
+import type { Actor } from "@/server/auth/actor";
+import { requireActor, type AuthMode } from "@/server/auth/require-actor";
+import { assertSameOrigin } from "@/server/auth/same-origin";
 import { AppError } from "./app-error";
 
 type Params = Record<string, string | string[] | undefined>;
 
-export interface RouteOptions<TBody, TQuery, TParams> {
+export interface RouteOptions<TBody, TQuery, TParams, TAuth extends AuthMode = "required"> {
+  /**
+   * "required" (default): a session or an API token, else 401. "optional": the handler gets the
+   * actor or null. "public": nobody is resolved (health, sign-up, Auth.js itself).
+   */
+  auth?: TAuth;
+  /** Any one of these roles lets the request through (403 otherwise); omitted: any member. */
+  roles?: readonly TRole[];
   /** Schema of the JSON body; without one, the body is not read. */
   body?: ZodType<TBody>;
   /** Schema of the query string, given as an object of strings (repeated keys become arrays). */
@@ -17,14 +28,16 @@ export interface RouteOptions<TBody, TQuery, TParams> {
   maxBodyBytes?: number;
 }
 
-export interface RouteContext<TBody, TQuery, TParams> {
+export interface RouteContext<TBody, TQuery, TParams, TAuth extends AuthMode = "required"> {
   req: Request;
+  /** Who is acting, for which firm; scope every query by actor.firm.id. */
+  actor: TAuth extends "required" ? Actor : Actor | null;
   body: TBody;
   query: TQuery;
   params: TParams;
 }
 
-type Handler<TBody, TQuery, TParams> = (ctx: RouteContext<TBody, TQuery, TParams>) => Promise<Response | unknown> | Response | unknown;
+type Handler<TBody, TQuery, TParams, TAuth extends AuthMode> = (ctx: RouteContext<TBody, TQuery, TParams, TAuth>) => Promise<Response | unknown> | Response | unknown;
 
 /** `{ error: { code, message, details? } }` with the status the code maps to. */
 export function errorResponse(error: AppError, status = error.status): Response {
@@ -75,19 +88,24 @@ function queryObject(req: Request): Record<string, string | string[]> {
 }
 
 /**
- * The one wrapper every route handler goes through: it parses and validates input with zod and
- * maps errors to HTTP statuses in one place. Auth, role checks and firm scoping join here when
- * sign-in lands, so handlers stay a few lines long.
+ * The one wrapper every route handler goes through. In order: refuses cross-site state changes
+ * (unless token-authenticated), resolves the session or API token, the current firm and roles,
+ * checks the required role, parses input with zod, runs the handler and maps every error to its
+ * HTTP status in one place — so handlers stay a few lines long.
  *
- * @example export const GET = route({ params: ZProjectParams }, async ({ params }) => getProjectOrThrow(params.projectId));
+ * @example export const GET = route({ params: ZProjectParams }, ({ actor, params }) => getProjectOrThrow(actor, params.projectId));
  */
-export function route<TBody = undefined, TQuery = Record<string, string | string[]>, TParams = Params>(
-  options: RouteOptions<TBody, TQuery, TParams>,
-  handler: Handler<TBody, TQuery, TParams>,
+export function route<TBody = undefined, TQuery = Record<string, string | string[]>, TParams = Params, TAuth extends AuthMode = "required">(
+  options: RouteOptions<TBody, TQuery, TParams, TAuth>,
+  handler: Handler<TBody, TQuery, TParams, TAuth>,
 ): (req: Request, ctx?: { params?: Promise<Params> }) => Promise<Response> {
   const invalidStatus = options.invalidStatus ?? 422;
+  const mode: AuthMode = options.auth ?? "required";
   return async (req, ctx) => {
     try {
+      // A bearer token is never sent by a browser on its own, so it needs no Origin check.
+      if (mode === "public" || !req.headers.has("authorization")) assertSameOrigin(req);
+      const actor = await requireActor(req.headers, mode, options.roles);
       const rawParams = (await ctx?.params) ?? {};
       const params = options.params ? options.params.safeParse(rawParams) : { success: true as const, data: rawParams as TParams };
       if (!params.success) return invalid(params.error, "params", invalidStatus);
@@ -99,7 +117,7 @@ export function route<TBody = undefined, TQuery = Record<string, string | string
         if (!parsed.success) return invalid(parsed.error, "body", invalidStatus);
         body = parsed.data;
       }
-      const result = await handler({ req, body, query: query.data, params: params.data });
+      const result = await handler({ req, actor: actor as RouteContext<TBody, TQuery, TParams, TAuth>["actor"], body, query: query.data, params: params.data });
       return result instanceof Response ? result : Response.json(result ?? null);
     } catch (error) {
       if (error instanceof AppError) return errorResponse(error);

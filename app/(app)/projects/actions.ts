@@ -1,0 +1,12 @@
+"use server";
+// Server actions of the projects page.
+import { revalidatePath } from "next/cache";
+import { ZProjectCreate } from "@/schemas/project";
+import { action } from "@/server/http/action";
+import { createProject } from "@/server/services/create-project";
+
+export const createProjectAction = action({ roles: ["consultant"], input: ZProjectCreate }, async ({ actor, input }) => {
+  const project = await createProject(actor, input);
+  revalidatePath("/projects");
+  return { ok: true, message: `Project ${project.reference} created` };
+});

@@ -1,0 +1,38 @@
+import { PageHeader, Panel } from "@/components/panel";
+import type { TProject } from "@/schemas/project";
+import { NewProjectForm } from "./new-project-form";
+
+const date = (d: string | Date) => new Date(d).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" });
+
+export function ProjectsView({ firmName, projects, canCreate }: { firmName: string; projects: TProject[]; canCreate: boolean }) {
+  return (
+    <div className="grid gap-6">
+      <PageHeader title="Projects" lead={`${firmName}: each project holds a schedule of external surfaces and duct runs, its design cases, zones and revisions.`} />
+      <Panel title="All projects" lead={`${projects.length} ${projects.length === 1 ? "project" : "projects"}`}>
+        {projects.length === 0 ? (
+          <p className="text-small text-muted">No projects yet.{canCreate ? " Create the first one below." : " A consultant of your firm creates them."}</p>
+        ) : (
+          <table className="w-full text-left text-small">
+            <thead className="text-micro uppercase text-muted">
+              <tr>
+                <th className="py-2 pr-4 font-medium">Reference</th>
+                <th className="py-2 pr-4 font-medium">Name</th>
+                <th className="py-2 font-medium">Last changed</th>
+              </tr>
+            </thead>
+            <tbody>
+              {projects.map((p) => (
+                <tr key={p.id} className="border-t border-line">
+                  <td className="py-2 pr-4 font-mono">{p.reference}</td>
+                  <td className="py-2 pr-4 font-medium">{p.name}</td>
+                  <td className="py-2 text-muted">{date(p.updated_at)}</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        )}
+      </Panel>
+      {canCreate ? <NewProjectForm /> : null}
+    </div>
+  );
+}

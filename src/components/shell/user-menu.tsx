@@ -1,0 +1,21 @@
+import Link from "next/link";
+import { SignOutButton } from "./sign-out-button";
+
+/** Who is signed in and the way out; or the way in. */
+export function UserMenu({ user, signOut }: { user?: { name: string | null; email: string }; signOut: (form: FormData) => Promise<void> }) {
+  if (!user) {
+    return (
+      <Link href="/sign-in" className="rounded-chip bg-accent px-3 py-1.5 text-small font-semibold text-accent-ink hover:opacity-90">
+        Sign in
+      </Link>
+    );
+  }
+  return (
+    <div className="flex items-center gap-2">
+      <span className="hidden max-w-48 truncate text-small text-muted md:inline" title={user.email}>
+        {user.name ?? user.email}
+      </span>
+      <SignOutButton signOut={signOut} className="px-2.5 py-1 text-small" />
+    </div>
+  );
+}

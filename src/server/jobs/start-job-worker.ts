@@ -1,0 +1,50 @@
+import "server-only";
+import { Logger, run, type Runner } from "graphile-worker";
+import { db } from "@/server/db/knex";
+import { env } from "@/server/env";
+import { ZEmailMessage } from "@/server/email/message";
+import { sendEmail } from "@/server/email/send-email";
+import { ensureJobSchema } from "./job-schema";
+
+type Holder = { __filmsheetWorker?: Promise<Runner>; __filmsheetStopWorker?: () => Promise<void> };
+const holder = globalThis as Holder;
+
+// Only problems are worth a log line; a completed job is routine.
+const logger = new Logger(() => (level, message) => {
+  if (level === "error" || level === "warning") console.warn(`[jobs] ${message}`);
+});
+
+/**
+ * Starts the job worker inside this app instance (once per process). Every instance runs one;
+ * PostgreSQL hands each job to exactly one of them. Failed jobs are retried with backoff.
+ */
+export function startJobWorker(): Promise<Runner> {
+  holder.__filmsheetWorker ??= (async () => {
+    await ensureJobSchema();
+    const runner = await run({
+      connectionString: env().DATABASE_URL,
+      maxPoolSize: 4,
+      concurrency: 2,
+      noHandleSignals: true,
+      pollInterval: 1000,
+      logger,
+      taskList: {
+        send_email: async (payload) => sendEmail(ZEmailMessage.parse(payload)),
+        // Attempts older than a day no longer count toward any limit.
+        prune_sign_in_attempts: async () => {
+          await db()("sign_in_attempts").where("created_at", "<", db().raw("now() - interval '1 day'")).delete();
+        },
+      },
+      crontab: "17 * * * * prune_sign_in_attempts",
+    });
+    holder.__filmsheetStopWorker = () => runner.stop();
+    return runner;
+  })().catch((error: unknown) => {
+    // The database may not be up yet: try again shortly rather than run without a worker.
+    console.warn(`[jobs] worker did not start (${error instanceof Error ? error.message : String(error)}); retrying in 10 s`);
+    holder.__filmsheetWorker = undefined;
+    setTimeout(() => void startJobWorker().catch(() => {}), 10_000).unref();
+    throw error;
+  });
+  return holder.__filmsheetWorker;
+}
