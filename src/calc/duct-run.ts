@@ -71,12 +71,15 @@ function outerSection(d: DuctRunInput, t: number, P_i: number): OuterSection {
 interface Outside {
   h_conv: number;
   h_rad: number;
+  /** The parts of h_conv: buoyant, and wind-driven (0 in still air). */
+  h_natural: number;
+  h_forced: number;
   props: AirProperties;
   branch: NaturalBranch;
 }
 
 function newOutside(): Outside {
-  return { h_conv: 0, h_rad: 0, props: newAirProperties(), branch: newNaturalBranch() };
+  return { h_conv: 0, h_rad: 0, h_natural: 0, h_forced: 0, props: newAirProperties(), branch: newNaturalBranch() };
 }
 
 /** h of a natural-convection plate of length L at tilt, from film properties (warns via the branch). */
@@ -105,7 +108,10 @@ function outsideAt(d: DuctRunInput, o: OuterSection, Tso: number, V: number, war
     const Ra = grashof(props, Tso - Ta, o.D_o) * props.Pr;
     warnRange(warnings, "churchill-chu-horizontal-cylinder", "Ra", Ra);
     const hn = (nuHorizontalCylinderChurchillChu(Ra, props.Pr) * props.k_W_mK) / o.D_o;
-    h = V > 0 ? nuCombinedChurchill(hCrossflow(c, V, o.D_o, warnings), hn, 4) : hn;
+    const hf = V > 0 ? hCrossflow(c, V, o.D_o, warnings) : 0;
+    h = V > 0 ? nuCombinedChurchill(hf, hn, 4) : hn;
+    c.h_natural = hn;
+    c.h_forced = hf;
   } else {
     // Vertical sides on the outer height; top and bottom as horizontal plates on half the width.
     const side = hPlate(c, Tso, Ta, 90, o.H_o, warnings);
@@ -113,11 +119,41 @@ function outsideAt(d: DuctRunInput, o: OuterSection, Tso: number, V: number, war
     const bottom = hPlate(c, Tso, Ta, 180, o.W_o / 2, warnings);
     const hn = (2 * o.H_o * side + o.W_o * (top + bottom)) / (2 * (o.H_o + o.W_o));
     // Wind across the duct on the equivalent diameter P_o/π; same length and k, so h combines as Nu.
-    h = V > 0 ? nuCombinedChurchill(hCrossflow(c, V, o.P_o / Math.PI, warnings), hn, 3) : hn;
+    const hf = V > 0 ? hCrossflow(c, V, o.P_o / Math.PI, warnings) : 0;
+    h = V > 0 ? nuCombinedChurchill(hf, hn, 3) : hn;
+    c.h_natural = hn;
+    c.h_forced = hf;
   }
   c.h_conv = h;
   c.h_rad = hRadiation(Tso, d.T_surround_C + T0, d.jacket_emissivity);
   return c;
+}
+
+/** What the duct-run evaluation computed on the way, for a row's working (src/calc/working). */
+export interface DuctRunTrace {
+  area_m2: number;
+  P_i_m: number;
+  P_o_m: number;
+  D_o_m: number;
+  W_o_m: number;
+  H_o_m: number;
+  R_ins_mK_W: number;
+  R_i_mK_W: number;
+  T_mean_K: number;
+  inside_props: AirProperties | null;
+  internal: DuctInternal | null;
+  T_so_K: number;
+  outside_props: AirProperties | null;
+  h_natural: number;
+  h_forced: number;
+  natural_branch: string;
+}
+
+export function newDuctRunTrace(): DuctRunTrace {
+  return {
+    area_m2: 0, P_i_m: 0, P_o_m: 0, D_o_m: 0, W_o_m: 0, H_o_m: 0, R_ins_mK_W: 0, R_i_mK_W: 0, T_mean_K: 0,
+    inside_props: null, internal: null, T_so_K: 0, outside_props: null, h_natural: 0, h_forced: 0, natural_branch: "",
+  };
 }
 
 /**
@@ -171,6 +207,7 @@ export function evaluateDuctRun(
   warnings: Warnings,
   bothEnds = true,
   c: Outside = newOutside(),
+  trace: DuctRunTrace | null = null,
 ): DuctRunState {
   const g = ductGeometry(d);
   const round = d.shape === "round";
@@ -241,6 +278,24 @@ export function evaluateDuctRun(
     // The reported state in full, with its warnings: inside flow at T_mean, outside at T_so.
     internal = ductInternalCore(air(Tm, p, warnings, "T_mean_C"), d.shape, g, d.flow_m3_s, d.roughness_m, warnings);
     outsideAt(d, o, Tso, V, warnings, c);
+    if (trace !== null) {
+      trace.area_m2 = g.area_m2;
+      trace.P_i_m = o.P_i;
+      trace.P_o_m = o.P_o;
+      trace.D_o_m = o.D_o;
+      trace.W_o_m = o.W_o;
+      trace.H_o_m = o.H_o;
+      trace.R_ins_mK_W = o.R_ins;
+      trace.R_i_mK_W = Rin - o.R_ins;
+      trace.T_mean_K = Tm;
+      trace.inside_props = airProperties(Tm, p);
+      trace.internal = internal;
+      trace.T_so_K = Tso;
+      trace.outside_props = { ...c.props };
+      trace.h_natural = c.h_natural;
+      trace.h_forced = c.h_forced;
+      trace.natural_branch = d.shape === "round" ? "churchill-chu-horizontal-cylinder" : "plates";
+    }
   }
   let TsE = NaN;
   let TsL = NaN;
@@ -394,8 +449,8 @@ export interface DuctRunResult {
   mass_flow_kg_s: number;
 }
 
-export function ductRunCore(d: DuctRunInput, warnings: CalcWarning[]): DuctRunResult {
-  const st = evaluateDuctRun(d, d.insulation_thickness_m, d.V_wind_m_s, warnings);
+export function ductRunCore(d: DuctRunInput, warnings: CalcWarning[], trace: DuctRunTrace | null = null): DuctRunResult {
+  const st = evaluateDuctRun(d, d.insulation_thickness_m, d.V_wind_m_s, warnings, true, newOutside(), trace);
   if (!st.converged) addWarning(warnings, "not_converged", "the duct-run balance did not converge");
   warnRange(warnings, "dew-point-hyland-wexler", "T_C", d.T_ambient_C);
   const Tdp = dewPointHylandWexler(d.T_ambient_C, d.RH_ambient_pct);

@@ -15,3 +15,5 @@ export { calculate, calculateCase } from "./calculate";
 export * from "./schedule/types";
 export { buildupResistance, ductRunCase, insideTemperature, solarOnSurface, surfaceCase } from "./schedule/cases";
 export { scheduleResults, type Schedule, type ScheduleResults, type RowResult } from "./schedule/results";
+export { working } from "./working/index";
+export type { Working, WorkingLine, MethodUsed, WorkingCharts, LocalHPoint, WindPoint } from "./working/index";

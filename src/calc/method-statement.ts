@@ -3,7 +3,7 @@
  * docs/methods.md (npm run docs:methods) and of the report's method appendix.
  */
 import { CONVENTIONS } from "./conventions";
-import { METHODS, type MethodEntry, type MethodFamily } from "./registry";
+import { METHODS, METHOD_BY_ID, type MethodEntry, type MethodFamily } from "./registry";
 import { rangeText } from "./validity";
 
 export const FAMILY_TITLES: Record<MethodFamily, string> = {
@@ -23,6 +23,12 @@ export const FAMILY_TITLES: Record<MethodFamily, string> = {
 export function validityText(m: MethodEntry): string {
   const parts = Object.entries(m.ranges).map(([q, r]) => `${q} ${rangeText(r)}${r.minSlack ? ` (lower bound with ${r.minSlack * 100} % slack)` : ""}`);
   return parts.length > 0 ? parts.join("; ") : "no published limits beyond its definition";
+}
+
+/** One method as a report or a working prints it. */
+export function methodStatementMethod(id: string): { id: string; title: string; equation: string; source: string; validity: string; evaluation: string } {
+  const m = METHOD_BY_ID[id];
+  return { id, title: m.title, equation: m.equation, source: m.source, validity: validityText(m), evaluation: m.evaluation };
 }
 
 export function methodsByFamily(): [MethodFamily, MethodEntry[]][] {

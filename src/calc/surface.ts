@@ -4,14 +4,14 @@
  * (T_inside − T_s)/(R_si + R) + α·G = h_c (T_s − T_out) + h_r (T_s − T_r), solved for T_s.
  */
 import { SIGMA, T0 } from "./constants";
-import { airPropertiesInto, newAirProperties } from "./properties/air";
+import { airProperties, airPropertiesInto, newAirProperties, type AirProperties } from "./properties/air";
 import { hcIso6946, hcMcAdams } from "./convection/empirical";
 import { hRadiation, radiantTemperature, skyTemperatureSwinbank, skyViewFactor } from "./radiation/radiation";
 import { air } from "./kinds/common";
 import { RE_CRIT_DEFAULT, warnPlateCombined } from "./kinds/external";
 import { regimeFromRichardson } from "./convection/combined";
 import type { CalcWarning } from "./contract";
-import { newPlateCombinedState, plateCombinedInto } from "./select";
+import { newPlateCombinedState, plateCombinedInto, type PlateCombinedState } from "./select";
 import { windAtHeight } from "./kinds/wind";
 import type { Terrain } from "./wind/wind-profile";
 import { isWindward } from "./wind/wind-profile";
@@ -81,6 +81,33 @@ export type SurfaceResult = {
   warnings: CalcWarning[];
 };
 
+/** What surfaceCore computed on the way, for a row's working (src/calc/working). */
+export interface SurfaceTrace {
+  law: "power" | "log";
+  met_height_m: number;
+  leeward_factor: number;
+  pressure_Pa: number;
+  R_in_m2K_W: number;
+  absorbed_solar_W_m2: number;
+  F_sky: number;
+  T_sky_K: number;
+  T_radiant_K: number;
+  /** Surface temperature at which h_c and h_r were last evaluated (within 0.001 K of T_s). */
+  T_eval_K: number;
+  iterations: number;
+  /** Film properties of the last evaluation. */
+  props: AirProperties;
+  /** Boundary-layer method: the combined coefficient and its parts. */
+  combined: PlateCombinedState | null;
+}
+
+export function newSurfaceTrace(): SurfaceTrace {
+  return {
+    law: "power", met_height_m: 0, leeward_factor: 0, pressure_Pa: 0, R_in_m2K_W: 0, absorbed_solar_W_m2: 0, F_sky: 0,
+    T_sky_K: 0, T_radiant_K: 0, T_eval_K: 0, iterations: 0, props: newAirProperties(), combined: null,
+  };
+}
+
 // Scratch objects of the iteration, refilled on every call: the engine is synchronous and
 // surfaceCore does not call itself, so one pair per module instance is enough.
 const PROPS = newAirProperties();
@@ -93,7 +120,12 @@ const TOL_K = 1e-3;
  * Solves the outside-face balance and returns the `surface` result of the contract. The result
  * is built in its final shape here, not copied, because large schedules spend their time on it.
  */
-export function surfaceCore(s: SurfaceInput, warnings: CalcWarning[], id: string | null = null): SurfaceResult {
+export function surfaceCore(
+  s: SurfaceInput,
+  warnings: CalcWarning[],
+  id: string | null = null,
+  trace: SurfaceTrace | null = null,
+): SurfaceResult {
   const d = SURFACE_DEFAULTS;
   const law = s.law === undefined ? d.law : s.law;
   const metHeight = s.met_height_m === undefined ? d.met_height_m : s.met_height_m;
@@ -158,6 +190,22 @@ export function surfaceCore(s: SurfaceInput, warnings: CalcWarning[], id: string
     if (state !== null) warnPlateCombined(state, warnings);
   }
   const regime = state === null ? "empirical" : regimeFromRichardson(state.Ri);
+  if (trace !== null) {
+    // The state the result was computed from, copied out of the scratch objects.
+    trace.law = law;
+    trace.met_height_m = metHeight;
+    trace.leeward_factor = leeward;
+    trace.pressure_Pa = p;
+    trace.R_in_m2K_W = Rin;
+    trace.absorbed_solar_W_m2 = solar;
+    trace.F_sky = Fsky;
+    trace.T_sky_K = Tsky;
+    trace.T_radiant_K = Tr;
+    trace.T_eval_K = x;
+    trace.iterations = iterations;
+    trace.props = state === null ? airProperties((Ts + To) / 2, p) : { ...props };
+    trace.combined = state === null ? null : { ...state, natural: { ...state.natural } };
+  }
   const ho = hc + hr;
   const q = (Tin - Ts) / Rin;
   let Tsolair: number;

@@ -56,6 +56,34 @@ function ductSection(r: CaseReader): DuctSection {
   return { shape, width_m: r.num("width_m", POS), height_m: r.num("height_m", POS) };
 }
 
+/** Reads and checks a `duct_run` case (errors name the field), defaults applied. */
+export function readDuctRun(r: CaseReader): DuctRunInput {
+  const v = r.raw as DuctRunRaw;
+  const shape = r.oneOfAt("shape", v.shape, SHAPES);
+  const section: DuctSection =
+    shape === "round"
+    ? { shape, diameter_m: r.numAt("diameter_m", v.diameter_m, POS) }
+    : { shape, width_m: r.numAt("width_m", v.width_m, POS), height_m: r.numAt("height_m", v.height_m, POS) };
+  const T_ambient_C = r.tempCAt("T_ambient_C", v.T_ambient_C);
+  return {
+    ...section,
+    length_m: r.numAt("length_m", v.length_m, NONNEG),
+    flow_m3_s: r.numAt("flow_m3_s", v.flow_m3_s, NO_FLOW_RUN),
+    T_entering_C: r.tempCAt("T_entering_C", v.T_entering_C),
+    T_ambient_C,
+    RH_ambient_pct: r.numAt("RH_ambient_pct", v.RH_ambient_pct, RH),
+    T_surround_C: r.tempCAt("T_surround_C", v.T_surround_C, T_ambient_C),
+    insulation_thickness_m: r.numAt("insulation_thickness_m", v.insulation_thickness_m, THICKNESS),
+    insulation_k_W_mK: r.numAt("insulation_k_W_mK", v.insulation_k_W_mK, POS),
+    jacket_emissivity: r.numAt("jacket_emissivity", v.jacket_emissivity, FRACTION),
+    location: r.oneOfAt("location", v.location, LOCATIONS),
+    V_wind_m_s: r.optNumAt("V_wind_m_s", v.V_wind_m_s, 0, NONNEG),
+    margin_K: r.optNumAt("margin_K", v.margin_K, 0, MARGIN),
+    roughness_m: r.optNumAt("roughness_m", v.roughness_m, ROUGHNESS_DEFAULT_M, NONNEG),
+    pressure_Pa: r.optNumAt("pressure_Pa", v.pressure_Pa, 101325, PRESSURE),
+  };
+}
+
 export const KINDS: Readonly<Record<string, KindFn>> = {
   air_properties(r, id) {
     const warnings: CalcWarning[] = [];
@@ -200,33 +228,7 @@ export const KINDS: Readonly<Record<string, KindFn>> = {
 
   duct_run(r, id) {
     const w: CalcWarning[] = [];
-    const v = r.raw as DuctRunRaw;
-    const shape = r.oneOfAt("shape", v.shape, SHAPES);
-    const section: DuctSection =
-      shape === "round"
-        ? { shape, diameter_m: r.numAt("diameter_m", v.diameter_m, POS) }
-        : { shape, width_m: r.numAt("width_m", v.width_m, POS), height_m: r.numAt("height_m", v.height_m, POS) };
-    const T_ambient_C = r.tempCAt("T_ambient_C", v.T_ambient_C);
-    const o = ductRunCore(
-      {
-        ...section,
-        length_m: r.numAt("length_m", v.length_m, NONNEG),
-        flow_m3_s: r.numAt("flow_m3_s", v.flow_m3_s, NO_FLOW_RUN),
-        T_entering_C: r.tempCAt("T_entering_C", v.T_entering_C),
-        T_ambient_C,
-        RH_ambient_pct: r.numAt("RH_ambient_pct", v.RH_ambient_pct, RH),
-        T_surround_C: r.tempCAt("T_surround_C", v.T_surround_C, T_ambient_C),
-        insulation_thickness_m: r.numAt("insulation_thickness_m", v.insulation_thickness_m, THICKNESS),
-        insulation_k_W_mK: r.numAt("insulation_k_W_mK", v.insulation_k_W_mK, POS),
-        jacket_emissivity: r.numAt("jacket_emissivity", v.jacket_emissivity, FRACTION),
-        location: r.oneOfAt("location", v.location, LOCATIONS),
-        V_wind_m_s: r.optNumAt("V_wind_m_s", v.V_wind_m_s, 0, NONNEG),
-        margin_K: r.optNumAt("margin_K", v.margin_K, 0, MARGIN),
-        roughness_m: r.optNumAt("roughness_m", v.roughness_m, ROUGHNESS_DEFAULT_M, NONNEG),
-        pressure_Pa: r.optNumAt("pressure_Pa", v.pressure_Pa, 101325, PRESSURE),
-      },
-      w,
-    );
+    const o = ductRunCore(readDuctRun(r), w);
     return {
       id,
       ok: true,

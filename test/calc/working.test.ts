@@ -1,0 +1,90 @@
+// A row's working is the engine's own trace: its result is the API's result, its lines agree with
+// each other by the definitions they print, and its charts follow the published flat-plate laws.
+import { describe, expect, test } from "vitest";
+import { calculateCase, working, type WorkingLine } from "../../src/calc/index";
+
+const wall = {
+  id: "w1", kind: "surface", area_m2: 20, tilt_deg: 90, azimuth_deg: 270, height_m: 10, length_m: 12, panel_height_m: 3,
+  R_construction_m2K_W: 2.5, T_inside_C: 21, T_outside_C: -5, V_met_m_s: 6, wind_from_deg: 285, terrain: "suburban",
+  emissivity: 0.9, absorptance: 0.6, method: "boundary_layer",
+};
+const duct = {
+  id: "d1", kind: "duct_run", shape: "round", diameter_m: 0.5, length_m: 30, flow_m3_s: 1.2, T_entering_C: 13, T_ambient_C: 35,
+  RH_ambient_pct: 60, insulation_thickness_m: 0.025, insulation_k_W_mK: 0.04, jacket_emissivity: 0.9, location: "outdoor", V_wind_m_s: 4,
+};
+
+const line = (lines: WorkingLine[], symbol: string) => {
+  const l = lines.find((x) => x.symbol === symbol);
+  if (l === undefined) throw new Error(`no line ${symbol}`);
+  return l.value as number;
+};
+
+describe("surface working", () => {
+  const w = working(wall);
+  test("its result is exactly what the API answers", () => {
+    expect(JSON.parse(JSON.stringify(w.result))).toEqual(JSON.parse(JSON.stringify(calculateCase(wall))));
+  });
+  test("sections come in calculation order", () => {
+    const sections = [...new Set(w.lines.map((l) => l.section))];
+    expect(sections).toEqual(["Inputs", "Wind at the surface", "Sky and surroundings", "Surface balance", "Air properties", "Convection", "Results"]);
+  });
+  test("the lines agree with each other by the definitions they print", () => {
+    const L = w.lines;
+    expect(line(L, "Re_L")).toBeCloseTo((line(L, "V") * 12) / line(L, "ν"), 6);
+    expect(line(L, "Pr")).toBeCloseTo((line(L, "c_p") * line(L, "μ")) / line(L, "k"), 12);
+    expect(line(L, "Nu")).toBeCloseTo(Math.cbrt(line(L, "Nu_F") ** 3 + line(L, "Nu_N") ** 3), 9);
+    expect(line(L, "Nu_N")).toBeCloseTo((line(L, "Nu_N,H") * 12) / 3, 9);
+    expect(line(L, "h_o")).toBeCloseTo(line(L, "h_c") + line(L, "h_r"), 12);
+    expect(line(L, "h_c")).toBe(w.result.ok ? w.result.h_c_W_m2K : NaN);
+  });
+  test("names every method it applies with its source", () => {
+    const ids = w.methods.map((m) => m.id);
+    for (const id of ["wind-power-law", "sky-swinbank", "air-lemmon-jacobsen", "churchill-chu-vertical-plate", "churchill-combined-plate", "radiation-linearised"]) {
+      expect(ids).toContain(id);
+    }
+    expect(w.methods.find((m) => m.id === "churchill-chu-vertical-plate")?.source).toMatch(/Churchill.*Chu.*1975/);
+  });
+  test("local h falls as x^−½ in the laminar part and jumps up at transition (flat-plate laws)", () => {
+    const pts = w.charts.local_h ?? [];
+    const lam = pts.filter((p) => p.regime === "laminar");
+    const turb = pts.filter((p) => p.regime === "turbulent");
+    expect(lam.length).toBeGreaterThan(2);
+    expect(turb.length).toBeGreaterThan(2);
+    const [a, b] = [lam[0], lam[lam.length - 1]];
+    expect(a.h_W_m2K / b.h_W_m2K).toBeCloseTo(Math.sqrt(b.x_m / a.x_m), 9);
+    expect(turb[0].h_W_m2K).toBeGreaterThan(lam[lam.length - 1].h_W_m2K);
+  });
+  test("h against wind: natural alone at 0 m/s, rising with speed, the row's point on the combined curve", () => {
+    const pts = w.charts.h_vs_wind ?? [];
+    expect(pts[0].V_m_s).toBe(0);
+    expect(pts[0].h_forced_W_m2K).toBe(0);
+    expect(pts[0].h_combined_W_m2K).toBeCloseTo(pts[0].h_natural_W_m2K, 12);
+    for (let i = 1; i < pts.length; i++) expect(pts[i].h_combined_W_m2K).toBeGreaterThanOrEqual(pts[i - 1].h_combined_W_m2K);
+    expect(w.charts.current?.V_m_s).toBe(w.result.ok ? w.result.V_surface_m_s : NaN);
+  });
+});
+
+describe("duct-run working", () => {
+  const w = working(duct);
+  test("its result is exactly what the API answers, and T_L follows from its own lines", () => {
+    expect(JSON.parse(JSON.stringify(w.result))).toEqual(JSON.parse(JSON.stringify(calculateCase(duct))));
+    const L = w.lines;
+    const Tenv = line(L, "T_env");
+    expect(line(L, "T_L")).toBeCloseTo(Tenv + (13 - Tenv) * Math.exp(-line(L, "NTU")), 9);
+    expect(line(L, "R′_ins")).toBeCloseTo(Math.log(0.55 / 0.5) / (2 * Math.PI * 0.04), 12);
+    expect(w.methods.map((m) => m.id)).toEqual(expect.arrayContaining(["gnielinski-petukhov", "churchill-bernstein-cylinder", "dew-point-hyland-wexler", "duct-run-exponential"]));
+  });
+});
+
+describe("other kinds and bad input", () => {
+  test("a single correlation lists inputs, the correlation and outputs", () => {
+    const w = working({ kind: "plate_forced", T_surface_C: 40, T_air_C: 20, velocity_m_s: 3, length_m: 2 });
+    expect(w.lines.find((l) => l.symbol === "length_m")?.value).toBe(2);
+    expect(w.methods[0].id).toBe("flat-plate-laminar");
+  });
+  test("a bad case has no working, only the error naming the field", () => {
+    const w = working({ ...wall, emissivity: 2 });
+    expect(w.result).toMatchObject({ ok: false, error: { field: "emissivity" } });
+    expect(w.lines).toEqual([]);
+  });
+});
