@@ -104,6 +104,8 @@ async function runPlaywright(dbEnv) {
     ...dbEnv,
     NODE_ENV: "production",
     APP_URL: `http://localhost:${ports.app}`,
+    // No mail server during the browser tests (port 1 refuses at once); e-mail is tested with a sink.
+    SMTP_URL: "smtp://127.0.0.1:1?ignoreTLS=true",
     AUTH_SECRET: authSecret(),
     STRIPE_API_URL: `http://127.0.0.1:${ports.stripe}`,
   });

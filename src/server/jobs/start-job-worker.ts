@@ -11,7 +11,8 @@ const holder = globalThis as Holder;
 
 // Only problems are worth a log line; a completed job is routine.
 const logger = new Logger(() => (level, message) => {
-  if (level === "error" || level === "warning") console.warn(`[jobs] ${message}`);
+  // First line only: the stack of "mail server down" adds nothing to the retry notice.
+  if (level === "error" || level === "warning") console.warn(`[jobs] ${message.split("\n")[0]}`);
 });
 
 /**
