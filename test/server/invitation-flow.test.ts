@@ -91,6 +91,22 @@ describe("a new firm invites a colleague who joins it", () => {
   });
 });
 
+describe("a person in two firms", () => {
+  test("works in the firm the firm cookie names, if they belong to it; otherwise in their first firm", async () => {
+    const user = await testDb()("users").where({ email: colleague }).first("id");
+    const demo = await testDb()("firms").where({ slug: "tarnbrook-sill" }).first("id", "name");
+    const other = await testDb()("firms").where({ slug: "ostrander-mechanical" }).first("id");
+    await testDb()("memberships").insert({ firm_id: demo.id, user_id: user.id, role: "viewer" });
+    const cookie = await sessionCookie(app.server, colleague, "colleague-password");
+    const asIn = (firmId?: string) => api().get("/api/me").set("cookie", firmId ? `${cookie}; filmsheet-firm=${firmId}` : cookie);
+    expect((await asIn()).body.firm.name).toBe(founder.firmName); // first by name
+    expect((await asIn(demo.id)).body).toMatchObject({ firm: { name: demo.name }, roles: ["viewer"] });
+    // A firm they do not belong to cannot be chosen: the cookie is ignored.
+    expect((await asIn(other.id)).body.firm.name).toBe(founder.firmName);
+    await testDb()("memberships").where({ firm_id: demo.id, user_id: user.id }).delete();
+  });
+});
+
 describe("seats, resend, revoke and roles", () => {
   const invite = (email: string) => asAdmin(api().post("/api/firm/invitations")).send({ email, roles: ["viewer"] });
 

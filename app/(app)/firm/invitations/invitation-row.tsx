@@ -10,7 +10,8 @@ type Invitation = { id: string; email: string; roles: TRole[]; expires_at: strin
 export function InvitationRow({ invitation: i }: { invitation: Invitation }) {
   const [resent, resend] = useActionState(resendInvitationAction, null);
   const [revoked, revoke] = useActionState(revokeInvitationAction, null);
-  const when = new Date(i.expires_at).toLocaleString("en-GB", { day: "numeric", month: "short", hour: "2-digit", minute: "2-digit" });
+  // UTC on server and browser alike, so the rendered text does not change on hydration.
+  const when = `${new Date(i.expires_at).toLocaleString("en-GB", { day: "numeric", month: "short", hour: "2-digit", minute: "2-digit", timeZone: "UTC" })} UTC`;
   return (
     <li className="grid gap-2 py-3 md:grid-cols-[1fr_auto] md:items-center" aria-label={i.email}>
       <div>
