@@ -81,6 +81,24 @@ describe("a new firm invites a colleague who joins it", () => {
     expect(again.status).toBe(410);
   });
 
+  test("someone who already has an account (in another firm) accepts with their own password", async () => {
+    const existing = "admin@other.filmsheet.test";
+    expect((await asAdmin(api().post("/api/firm/invitations")).send({ email: existing, roles: ["viewer"] })).status).toBe(201);
+    const token = linkIn(await sink.waitFor(existing), "/invitations/").split("/").at(-1);
+    const wrong = await api().post("/api/invitations/accept").send({ token, password: "not-their-password" });
+    expect(wrong.status).toBe(403);
+    expect(wrong.body.error.details).toEqual([{ field: "password", message: "Wrong password" }]);
+    const res = await api().post("/api/invitations/accept").send({ token, password: process.env.DEMO_PASSWORD || "filmsheet-demo" });
+    expect(res.status, res.text).toBe(200);
+    expect(res.body).toMatchObject({ accountCreated: false, roles: ["viewer"], firm: { name: founder.firmName } });
+    // Their own firm is untouched; here they are a viewer. Removed again to keep the seat count below.
+    const { members } = (await asAdmin(api().get("/api/firm/members"))).body;
+    const row = members.find((m: { email: string }) => m.email === existing);
+    expect(row.roles).toEqual(["viewer"]);
+    expect((await asAdmin(api().delete(`/api/firm/members/${row.id}`))).status).toBe(200);
+    expect(await testDb()("memberships as m").join("firms as f", "f.id", "m.firm_id").where({ "m.user_id": row.id }).pluck("f.slug")).toEqual(["ostrander-mechanical"]);
+  });
+
   test("the members list shows both, with their roles and the seats in use", async () => {
     const res = await asAdmin(api().get("/api/firm/members"));
     expect(res.body.members.map((m: { email: string; roles: string[] }) => [m.email, m.roles])).toEqual([
