@@ -1,8 +1,9 @@
 // `npm start`: installs what is missing, starts PostgreSQL, the mail inbox and the Stripe
 // stand-in, migrates and seeds, builds and serves the app. Ctrl-C stops all of it.
-import { DB_USER, clusterDir, databaseUrl, ensureBuild, ensureDatabase, ensureNodeModules, ensurePostgres, knex, startCluster, stopCluster } from "./lib/bootstrap.mjs";
+import { join } from "node:path";
+import { DB_USER, ROOT, clusterDir, databaseUrl, ensureBuild, ensureDatabase, ensureNodeModules, ensurePostgres, knex, startCluster, stopCluster } from "./lib/bootstrap.mjs";
 import { assertPortFree, step, stopService } from "./lib/proc.mjs";
-import { DEFAULT_DEMO_PASSWORD, DEMO_ACCOUNTS, authSecret, portFromEnv, startApp, startMaildev, startStripeStandIn } from "./lib/services.mjs";
+import { DEFAULT_DEMO_PASSWORD, DEMO_ACCOUNTS, LOCAL_WEBHOOK_SECRET, authSecret, portFromEnv, startApp, startMaildev, startStripeStandIn } from "./lib/services.mjs";
 
 process.env.NEXT_TELEMETRY_DISABLED = "1";
 const ports = {
@@ -57,7 +58,8 @@ async function main() {
 
   step("Starting the mail inbox, the Stripe stand-in and the app");
   const mail = startMaildev(ports.smtp, ports.mailWeb);
-  const stripe = startStripeStandIn(ports.stripe);
+  // The stand-in keeps its state in .data, beside the database whose firms refer to it.
+  const stripe = startStripeStandIn(ports.stripe, { appPort: ports.app, stateFile: join(ROOT, ".data", "stripe-stand-in.json") });
   services.push(mail.service, stripe.service);
   await Promise.all([mail.ready(), stripe.ready()]);
   const app = startApp(ports.app, {
@@ -66,6 +68,7 @@ async function main() {
     AUTH_SECRET: authSecret(),
     SMTP_URL: `smtp://127.0.0.1:${ports.smtp}?ignoreTLS=true`,
     STRIPE_API_URL: `http://127.0.0.1:${ports.stripe}`,
+    STRIPE_WEBHOOK_SECRET: process.env.STRIPE_WEBHOOK_SECRET ?? LOCAL_WEBHOOK_SECRET,
   });
   services.push(app.service);
   await app.ready();
@@ -78,7 +81,7 @@ Filmsheet is running.
   App              http://127.0.0.1:${ports.app}   (or http://localhost:${ports.app})
   Health           http://127.0.0.1:${ports.app}/api/health
   Mail inbox       http://127.0.0.1:${ports.mailWeb}   (SMTP 127.0.0.1:${ports.smtp})
-  Stripe stand-in  http://127.0.0.1:${ports.stripe}
+  Stripe stand-in  http://127.0.0.1:${ports.stripe}   (test Checkout and portal pages; webhooks to the app)
   PostgreSQL       ${url.replace(/:[^:@/]+@/, ":***@")}${process.env.DATABASE_URL ? "" : `  (private cluster, user ${DB_USER})`}
 
 Demo sign-in (password: ${password})

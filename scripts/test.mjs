@@ -21,7 +21,7 @@ import {
 } from "./lib/bootstrap.mjs";
 import { assertPortFree, runAsync, step, stopService } from "./lib/proc.mjs";
 import { closingLine, countPlaywright, countVitest, readSuite, total } from "./lib/reports.mjs";
-import { DEFAULT_DEMO_PASSWORD, authSecret, portFromEnv, startApp, startStripeStandIn } from "./lib/services.mjs";
+import { DEFAULT_DEMO_PASSWORD, LOCAL_WEBHOOK_SECRET, authSecret, portFromEnv, startApp, startStripeStandIn } from "./lib/services.mjs";
 
 process.env.NEXT_TELEMETRY_DISABLED = "1";
 const ports = {
@@ -97,7 +97,7 @@ async function runTypecheck() {
 async function runPlaywright(dbEnv) {
   step("End-to-end tests (Playwright, Debian Chromium)");
   const report = join(REPORTS, "e2e.json");
-  const stripe = startStripeStandIn(ports.stripe);
+  const stripe = startStripeStandIn(ports.stripe, { appPort: ports.app });
   services.push(stripe.service);
   await stripe.ready();
   const app = startApp(ports.app, {
@@ -108,12 +108,14 @@ async function runPlaywright(dbEnv) {
     SMTP_URL: "smtp://127.0.0.1:1?ignoreTLS=true",
     AUTH_SECRET: authSecret(),
     STRIPE_API_URL: `http://127.0.0.1:${ports.stripe}`,
+    STRIPE_WEBHOOK_SECRET: LOCAL_WEBHOOK_SECRET,
   });
   services.push(app.service);
   await app.ready();
   const code = await runAsync(join(ROOT, "node_modules/.bin/playwright"), ["test", "--config", join(ROOT, "playwright.config.ts")], {
     cwd: ROOT,
-    env: baseEnv({ E2E_BASE_URL: `http://localhost:${ports.app}`, E2E_JSON_REPORT: report, CHROMIUM_PATH: CHROMIUM }),
+    // The database URL lets a browser test put the demo firm back on the free plan before it starts.
+    env: baseEnv({ E2E_BASE_URL: `http://localhost:${ports.app}`, E2E_JSON_REPORT: report, CHROMIUM_PATH: CHROMIUM, E2E_DATABASE_URL: dbEnv.DATABASE_URL }),
   });
   return readSuite(report, countPlaywright, code);
 }

@@ -34,10 +34,22 @@ export function authSecret() {
   return readFileSync(file, "utf8").trim();
 }
 
-export function startStripeStandIn(port) {
+/** The webhook signing secret shared by the stand-in and the app (local runs only). */
+export const LOCAL_WEBHOOK_SECRET = "whsec_filmsheet_local";
+
+/**
+ * The Stripe stand-in, posting signed webhooks to the app on `appPort`. `stateFile` keeps its
+ * customers and subscriptions across restarts (npm start); without it, state lives in memory.
+ */
+export function startStripeStandIn(port, { appPort, stateFile } = {}) {
   const service = startService("stripe stand-in", process.execPath, ["--import", "tsx", join(ROOT, "scripts/stripe-stand-in.ts")], {
     cwd: ROOT,
-    env: baseEnv({ STRIPE_STAND_IN_PORT: String(port) }),
+    env: baseEnv({
+      STRIPE_STAND_IN_PORT: String(port),
+      STRIPE_STAND_IN_STATE: stateFile ?? "memory",
+      STRIPE_WEBHOOK_SECRET: process.env.STRIPE_WEBHOOK_SECRET ?? LOCAL_WEBHOOK_SECRET,
+      ...(appPort ? { STRIPE_WEBHOOK_URL: `http://127.0.0.1:${appPort}/api/webhooks/stripe` } : {}),
+    }),
   });
   return { service, ready: () => waitForHttp(`http://127.0.0.1:${port}/health`, { service, accept: (s) => s === 200 }) };
 }
