@@ -1,0 +1,78 @@
+// The calculation report as a reader gets it: text extracted from the PDF with pdfjs-dist must
+// carry the cover, every zone total and every row label, with the engine's own numbers.
+import { fileURLToPath } from "node:url";
+import { getDocument } from "pdfjs-dist/legacy/build/pdf.mjs";
+import { describe, expect, test } from "vitest";
+import { scheduleResults } from "../../src/calc/index";
+import { buildReport } from "../../src/report/build-report";
+import { num } from "../../src/report/format";
+import type { ReportMeta } from "../../src/report/types";
+import { SAMPLE_CASES, sampleSchedule } from "../support/sample-schedule";
+
+// pdfjs needs the metrics of the 14 standard fonts the report uses; they ship with pdfjs-dist.
+const FONTS = fileURLToPath(new URL("../../node_modules/pdfjs-dist/standard_fonts/", import.meta.url));
+
+const meta: ReportMeta = {
+  projectName: "Larchfield Community Library extension", projectReference: "TS-2417", siteDescription: "Larchfield; suburban; 85 m",
+  firmName: "Tarnbrook & Sill Building Services", author: "Mina Okafor", checker: "Declan Rusk", date: "2026-12-02",
+  status: "draft", revision: null, unitSystem: "SI", watermark: true,
+};
+
+async function pages(pdf: Uint8Array): Promise<string[]> {
+  const doc = await getDocument({ data: pdf.slice(), isEvalSupported: false, standardFontDataUrl: FONTS }).promise;
+  const out: string[] = [];
+  for (let i = 1; i <= doc.numPages; i++) {
+    const page = await doc.getPage(i);
+    const content = await page.getTextContent();
+    out.push(content.items.map((it) => ("str" in it ? it.str : "")).join(" ").replace(/\s+/g, " "));
+  }
+  return out;
+}
+
+describe("calculation report", () => {
+  const schedule = sampleSchedule(24, 4);
+  const draft = buildReport({ meta, schedule, designCases: SAMPLE_CASES });
+
+  test("the cover names the project, firm, people, status and date", async () => {
+    const [cover] = await pages(draft.pdf);
+    for (const s of ["CALCULATION REPORT", meta.projectName, "TS-2417", meta.firmName, "Mina Okafor", "Declan Rusk", "Draft", "2026-12-02", "licensed engineer"]) {
+      expect(cover).toContain(s);
+    }
+  });
+
+  test("every zone total and every row label is in it, with the engine's numbers", async () => {
+    const text = (await pages(draft.pdf)).join(" ");
+    for (const dc of SAMPLE_CASES) {
+      const r = scheduleResults(schedule, dc);
+      expect(text).toContain(dc.name);
+      for (const z of r.zones) {
+        expect(text).toContain(`${num(z.loss_W)} W`);
+        expect(text).toContain(`${num(z.gain_W)} W`);
+      }
+    }
+    for (const row of [...schedule.surfaces, ...schedule.ductRuns]) expect(text).toContain(row.label);
+    expect(text).toContain("°C"); // Latin-1 survives the text passes the report leaves out
+  });
+
+  test("method statement, conventions, warnings and workings appendix are there, page-numbered", async () => {
+    const p = await pages(draft.pdf);
+    const text = p.join(" ");
+    for (const s of ["Method statement", "Churchill", "Assumptions and conventions", "Warnings", "Appendix A", "Workings"]) expect(text).toContain(s);
+    expect(p[p.length - 1]).toContain(`page ${p.length} of ${p.length}`);
+    expect(draft.pages).toBe(p.length);
+  });
+
+  test("a draft carries the watermark on every page; an issued revision of a paid firm does not", async () => {
+    const p = await pages(draft.pdf);
+    expect(p.every((t) => t.includes("NOT FOR ISSUE"))).toBe(true);
+    const issued = buildReport({ meta: { ...meta, status: "issued", revision: "A", watermark: false }, schedule, designCases: SAMPLE_CASES });
+    const q = await pages(issued.pdf);
+    expect(q.some((t) => t.includes("NOT FOR ISSUE"))).toBe(false);
+    expect(q[0]).toContain("Issued");
+  });
+
+  test("the page count grows with the rows", () => {
+    const bigger = buildReport({ meta, schedule: sampleSchedule(96, 12), designCases: SAMPLE_CASES });
+    expect(bigger.pages).toBeGreaterThan(draft.pages);
+  });
+});
