@@ -37,12 +37,12 @@ export class Writer {
     this.doc.setTextColor(INK).setFont("helvetica", "normal");
   }
 
-  paragraph(text: string, size = 9, color = INK): void {
+  paragraph(text: string, size = 9, color = INK, indent = 0): void {
     this.doc.setFontSize(size).setTextColor(color);
-    const lines = this.doc.splitTextToSize(pdfText(text), PAGE.w - 2 * PAGE.margin) as string[];
+    const lines = this.doc.splitTextToSize(pdfText(text), PAGE.w - 2 * PAGE.margin - 2 * indent) as string[];
     for (const line of lines) {
       this.need(size * 0.45);
-      this.doc.text(line, PAGE.margin, this.y + size * 0.35);
+      this.doc.text(line, PAGE.margin + indent, this.y + size * 0.35);
       this.y += size * 0.45;
     }
     this.y += 1.5;

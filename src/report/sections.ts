@@ -50,9 +50,9 @@ export function cover(w: Writer, input: ReportInput): void {
     ]),
   });
   w.afterTable(10);
-  doc.setDrawColor(...ACCENT).setLineWidth(0.4).rect(PAGE.margin, w.y, PAGE.w - 2 * PAGE.margin, 18);
-  w.y += 5;
-  w.paragraph(`Engineering caution. ${CAUTION}`, 9);
+  doc.setDrawColor(...ACCENT).setLineWidth(0.4).rect(PAGE.margin, w.y, PAGE.w - 2 * PAGE.margin, 16);
+  w.y += 4;
+  w.paragraph(`Engineering caution. ${CAUTION}`, 9, INK, 4);
 }
 
 export function designCases(w: Writer, input: ReportInput): void {
