@@ -14,6 +14,12 @@ export function MethodsView() {
           Every correlation Filmsheet uses, with its equation, the temperature at which air properties are taken, the range in which it was published and its
           source. Outside that range a result still comes back, marked with an out-of-range warning.
         </p>
+        <p className="max-w-prose text-small">
+          <a href="/methods/example" className="font-semibold text-accent underline-offset-2 hover:underline">
+            See a worked example
+          </a>{" "}
+          — one wall panel derived step by step.
+        </p>
         <EngineeringCaution className="max-w-prose" />
       </header>
 
