@@ -15,3 +15,14 @@ test("the Methods page lists every registered correlation with its source and th
   await expect(page.getByRole("heading", { name: "Conventions" })).toBeInViewport();
   await expect(page.locator("#conventions")).toContainText("positive for heat lost from inside");
 });
+
+test("the worked example shows a row's working with its charts, correlation, Re and sources", async ({ page }) => {
+  await page.goto("/methods/example");
+  await expect(page.getByRole("heading", { level: 1 })).toHaveText("One wall panel, one design case");
+  await expect(page.getByRole("figure", { name: "Local film coefficient along the surface" }).locator("svg").first()).toBeVisible();
+  await expect(page.getByRole("figure", { name: "Film coefficient against wind speed" }).locator("svg").first()).toBeVisible();
+  const convection = page.getByRole("region", { name: "Convection" });
+  await expect(convection).toContainText("Re_L");
+  await expect(convection).toContainText("churchill-combined-plate");
+  await expect(page.getByRole("region", { name: "Methods applied" })).toContainText("Churchill, H. H. S. Chu");
+});
