@@ -1,6 +1,9 @@
 import "server-only";
 import { z } from "zod";
 
+const LOCAL_STRIPE_SECRET_KEY = "sk_test_filmsheet_local";
+const LOCAL_STRIPE_WEBHOOK_SECRET = "whsec_filmsheet_local";
+
 /**
  * Every environment variable the app reads, validated once at start-up (instrumentation.ts).
  * `npm start` and `npm test` set these for their own services; defaults suit local development.
@@ -15,7 +18,11 @@ export const ZEnv = z.object({
   SMTP_URL: z.string().regex(/^smtps?:\/\//, "SMTP_URL must be an smtp:// URL").default("smtp://127.0.0.1:1025?ignoreTLS=true"),
   MAIL_FROM: z.string().default("Filmsheet <no-reply@filmsheet.test>"),
   STRIPE_API_URL: z.url().default("http://127.0.0.1:12111"),
-  STRIPE_SECRET_KEY: z.string().startsWith("sk_").default("sk_test_filmsheet_local"),
+  STRIPE_SECRET_KEY: z.string().startsWith("sk_", "STRIPE_SECRET_KEY must start with sk_").default(LOCAL_STRIPE_SECRET_KEY),
+  // The signing secret of the webhook endpoint (/api/webhooks/stripe); the stand-in signs with the same.
+  STRIPE_WEBHOOK_SECRET: z.string().startsWith("whsec_", "STRIPE_WEBHOOK_SECRET must start with whsec_").default(LOCAL_STRIPE_WEBHOOK_SECRET),
+  // The recurring per-seat price that Checkout sells (the stand-in knows this one).
+  STRIPE_SEAT_PRICE_ID: z.string().startsWith("price_", "STRIPE_SEAT_PRICE_ID must start with price_").default("price_filmsheet_seat_monthly"),
   HEALTH_DB_TIMEOUT_MS: z.coerce.number().int().min(100).max(30000).default(1500),
   // The e-mail worker runs inside every app instance unless switched off (e.g. a web-only node).
   JOBS_WORKER: z.enum(["on", "off"]).default("on"),
@@ -27,6 +34,11 @@ export const ZEnv = z.object({
     if (e.AUTH_SECRET === undefined) ctx.addIssue({ code: "custom", path: ["AUTH_SECRET"], message: "AUTH_SECRET is required in production" });
     if (!isHttps(e.APP_URL) && !isLoopback(e.APP_URL)) {
       ctx.addIssue({ code: "custom", path: ["APP_URL"], message: "APP_URL must be https:// in production (http only for localhost)" });
+    }
+    // Against real Stripe the local stand-in's well-known secrets would let anyone forge webhooks.
+    if (!isLoopback(e.STRIPE_API_URL)) {
+      if (e.STRIPE_SECRET_KEY === LOCAL_STRIPE_SECRET_KEY) ctx.addIssue({ code: "custom", path: ["STRIPE_SECRET_KEY"], message: "STRIPE_SECRET_KEY must be set to the account's key when STRIPE_API_URL is not the local stand-in" });
+      if (e.STRIPE_WEBHOOK_SECRET === LOCAL_STRIPE_WEBHOOK_SECRET) ctx.addIssue({ code: "custom", path: ["STRIPE_WEBHOOK_SECRET"], message: "STRIPE_WEBHOOK_SECRET must be set to the endpoint's signing secret when STRIPE_API_URL is not the local stand-in" });
     }
   });
 export type TEnv = z.infer<typeof ZEnv>;

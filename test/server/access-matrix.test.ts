@@ -5,13 +5,14 @@ import { readdirSync, readFileSync } from "node:fs";
 import { join, relative } from "node:path";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { clearPlan, connectWebhooks, startTestStandIn } from "../support/billing";
 import { startBuiltApp } from "../support/built-app";
 import { closeTestDb, testDb } from "../support/db";
 import { ROOT } from "../support/paths";
 import { sessionCookie } from "../support/sessions";
 import { bearer, makeToken } from "../support/tokens";
 import { ENTRIES, PRINCIPALS, type MatrixEntry, type Principal } from "./access-matrix/entries";
-import { DEMO_FIRM, OTHER_FIRM } from "./access-matrix/fixtures";
+import { DEMO_FIRM, OTHER_FIRM, firmId } from "./access-matrix/fixtures";
 
 const API = join(ROOT, "app/api");
 const PASSWORD = process.env.DEMO_PASSWORD || "filmsheet-demo";
@@ -36,14 +37,18 @@ describe("the matrix covers every route handler", () => {
 });
 
 let app: Awaited<ReturnType<typeof startBuiltApp>>;
+let stripe: Awaited<ReturnType<typeof startTestStandIn>>;
 let origin: string;
 const headers = {} as Record<Principal, Record<string, string>>;
 let seats: { id: string; seats: number }[] = [];
 
 beforeAll(async () => {
+  // The billing routes talk to Stripe: a stand-in of this file's own.
+  stripe = await startTestStandIn();
   app = await startBuiltApp();
   const { port } = app.server.address() as { port: number };
   origin = `http://127.0.0.1:${port}`;
+  connectWebhooks(stripe, origin);
   // Room for the invitations and members the cells create; restored afterwards.
   seats = await testDb()("firms").whereIn("slug", [DEMO_FIRM, OTHER_FIRM]).select("id", "seats");
   await testDb()("firms").whereIn("slug", [DEMO_FIRM, OTHER_FIRM]).update({ seats: 10_000 });
@@ -61,7 +66,10 @@ beforeAll(async () => {
 
 afterAll(async () => {
   for (const f of seats) await testDb()("firms").where({ id: f.id }).update({ seats: f.seats });
+  // Entries that needed a paid plan or made a Stripe customer leave the demo firms as they were: free.
+  for (const slug of [DEMO_FIRM, OTHER_FIRM]) await clearPlan(await firmId(slug));
   await app?.close();
+  await stripe?.close();
   await closeTestDb();
 });
 

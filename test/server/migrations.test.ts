@@ -9,6 +9,7 @@ const NAME = "filmsheet_test_migrations";
 const TABLES = [
   "accounts",
   "api_tokens",
+  "firm_billing",
   "firms",
   "invitations",
   "memberships",
@@ -18,6 +19,7 @@ const TABLES = [
   "sign_in_attempts",
   "users",
   "verification_token",
+  "webhook_events",
 ];
 let url: string;
 let db: Knex;
@@ -47,7 +49,7 @@ afterAll(async () => {
 });
 
 describe("migrations round trip", () => {
-  test("migrate:latest creates the firm, user, Auth.js, access and project tables", async () => {
+  test("migrate:latest creates the firm, user, Auth.js, access, project and billing tables", async () => {
     const r = cli(["migrate:latest"]);
     expect(r.status, r.output).toBe(0);
     expect(await tablesPresent()).toEqual(TABLES);

@@ -25,6 +25,8 @@ describe("parseEnv", () => {
     ["a non-postgres DATABASE_URL", { DATABASE_URL: "mysql://x" }, /postgres:\/\/ URL/],
     ["a short AUTH_SECRET", { DATABASE_URL: URL, AUTH_SECRET: "short" }, /AUTH_SECRET must be at least 32/],
     ["a timeout of 0 ms", { DATABASE_URL: URL, HEALTH_DB_TIMEOUT_MS: "0" }, /HEALTH_DB_TIMEOUT_MS/],
+    ["a webhook secret without whsec_", { DATABASE_URL: URL, STRIPE_WEBHOOK_SECRET: "secret" }, /STRIPE_WEBHOOK_SECRET must start with whsec_/],
+    ["a seat price that is not a price id", { DATABASE_URL: URL, STRIPE_SEAT_PRICE_ID: "prod_x" }, /STRIPE_SEAT_PRICE_ID must start with price_/],
   ])("rejects %s", (_label, source, message) => {
     expect(() => parseEnv(source)).toThrow(message);
   });
@@ -36,6 +38,16 @@ describe("production settings for sign-in", () => {
   test.each([
     ["no AUTH_SECRET", { DATABASE_URL: URL, NODE_ENV: "production", APP_URL: "https://app.example.test" }, /AUTH_SECRET is required in production/],
     ["an http APP_URL off this machine", { DATABASE_URL: URL, NODE_ENV: "production", AUTH_SECRET: SECRET, APP_URL: "http://app.example.test" }, /APP_URL must be https/],
+    [
+      "real Stripe with the stand-in's secret key",
+      { DATABASE_URL: URL, NODE_ENV: "production", AUTH_SECRET: SECRET, APP_URL: "https://app.example.test", STRIPE_API_URL: "https://api.stripe.com", STRIPE_WEBHOOK_SECRET: "whsec_real" },
+      /STRIPE_SECRET_KEY must be set/,
+    ],
+    [
+      "real Stripe with the stand-in's webhook secret",
+      { DATABASE_URL: URL, NODE_ENV: "production", AUTH_SECRET: SECRET, APP_URL: "https://app.example.test", STRIPE_API_URL: "https://api.stripe.com", STRIPE_SECRET_KEY: "sk_live_x" },
+      /STRIPE_WEBHOOK_SECRET must be set/,
+    ],
   ])("rejects %s", (_label, source, message) => {
     expect(() => parseEnv(source)).toThrow(message);
   });

@@ -15,6 +15,7 @@ describe("AppError codes map to HTTP statuses in one place", () => {
     ["bad_request", 400],
     ["invalid_input", 422],
     ["unauthenticated", 401],
+    ["plan_limit", 402],
     ["forbidden", 403],
     ["cross_site_request", 403],
     ["not_found", 404],

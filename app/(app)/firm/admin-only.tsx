@@ -4,7 +4,7 @@ import { Panel } from "@/components/panel";
 export function AdminOnly() {
   return (
     <Panel title="For firm admins">
-      <p className="text-small text-muted">Only a firm admin can manage members, invitations and API tokens. Ask one of your firm's admins if something needs changing.</p>
+      <p className="text-small text-muted">Only a firm admin can manage members, invitations, API tokens and billing. Ask one of your firm's admins if something needs changing.</p>
     </Panel>
   );
 }

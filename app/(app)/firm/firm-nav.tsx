@@ -5,6 +5,7 @@ const TABS = [
   { href: "/firm/members", label: "Members" },
   { href: "/firm/invitations", label: "Invitations" },
   { href: "/firm/tokens", label: "API tokens" },
+  { href: "/firm/billing", label: "Billing" },
 ] as const;
 
 /** Tabs between the firm pages; the admin-only ones are shown to admins only. */

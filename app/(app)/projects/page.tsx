@@ -1,6 +1,8 @@
 import type { Metadata } from "next";
 import { hasAnyRole } from "@/server/auth/actor";
 import { requirePageActor } from "@/server/auth/get-viewer";
+import { PlanNotice } from "@/components/billing/plan-notice";
+import { getPlan } from "@/server/services/get-plan";
 import { listProjects } from "@/server/services/list-projects";
 import { ProjectsView } from "./projects-view";
 
@@ -8,6 +10,7 @@ export const metadata: Metadata = { title: "Projects" };
 
 export default async function ProjectsPage() {
   const actor = await requirePageActor("/projects");
-  const projects = await listProjects(actor);
-  return <ProjectsView firmName={actor.firm.name} projects={projects} canCreate={hasAnyRole(actor, ["consultant"])} />;
+  const [projects, plan] = await Promise.all([listProjects(actor), getPlan(actor.firm.id)]);
+  const notice = <PlanNotice plan={plan} projects={projects.length} isAdmin={hasAnyRole(actor, ["admin"])} />;
+  return <ProjectsView firmName={actor.firm.name} projects={projects} canCreate={hasAnyRole(actor, ["consultant"])} notice={notice} />;
 }

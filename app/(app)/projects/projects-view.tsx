@@ -1,13 +1,15 @@
+import type { ReactNode } from "react";
 import { PageHeader, Panel } from "@/components/panel";
 import type { TProject } from "@/schemas/project";
 import { NewProjectForm } from "./new-project-form";
 
 const date = (d: string | Date) => new Date(d).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" });
 
-export function ProjectsView({ firmName, projects, canCreate }: { firmName: string; projects: TProject[]; canCreate: boolean }) {
+export function ProjectsView({ firmName, projects, canCreate, notice }: { firmName: string; projects: TProject[]; canCreate: boolean; notice?: ReactNode }) {
   return (
     <div className="grid gap-6">
       <PageHeader title="Projects" lead={`${firmName}: each project holds a schedule of external surfaces and duct runs, its design cases, zones and revisions.`} />
+      {notice}
       <Panel title="All projects" lead={`${projects.length} ${projects.length === 1 ? "project" : "projects"}`}>
         {projects.length === 0 ? (
           <p className="text-small text-muted">No projects yet.{canCreate ? " Create the first one below." : " A consultant of your firm creates them."}</p>

@@ -5,6 +5,8 @@ export const ERROR_STATUS = {
   bad_request: 400,
   invalid_input: 422,
   unauthenticated: 401,
+  // The firm's plan does not include this (free-plan limits); the message names the upgrade path.
+  plan_limit: 402,
   forbidden: 403,
   cross_site_request: 403,
   not_found: 404,

@@ -1,7 +1,7 @@
 // The expected status of every route handler in app/api for every kind of caller. The test
 // checks this list against the route files on disk: a new route (or method) without an entry
 // here fails, as does an entry whose route is gone.
-import { demoProjectId, newInvitation, newMember, newPasswordReset, newToken, uniqueEmail } from "./fixtures";
+import { demoProjectId, freeDemoFirm, newInvitation, newMember, newPasswordReset, newToken, paidDemoFirm, uniqueEmail } from "./fixtures";
 
 export const PRINCIPALS = ["anonymous", "admin", "consultant", "checker", "viewer", "other_firm", "admin_token", "revoked_token", "expired_token"] as const;
 export type Principal = (typeof PRINCIPALS)[number];
@@ -45,7 +45,8 @@ export const ENTRIES: MatrixEntry[] = [
   {
     file: "projects/route.ts",
     method: "POST",
-    request: async () => ({ path: "/api/projects", body: { name: "Matrix test building", reference: `MX-${Date.now()}-${Math.floor(Math.random() * 1e6)}` } }),
+    // The demo firm is paid here: the matrix is about who may, not about the free plan's one project.
+    request: async () => ({ ...(await paidDemoFirm()), path: "/api/projects", body: { name: "Matrix test building", reference: `MX-${Date.now()}-${Math.floor(Math.random() * 1e6)}` } }),
     // Only consultants build projects; no admin here holds that role.
     expect: { ...same(403), ...refusedTokens, consultant: 201 },
   },
@@ -70,6 +71,14 @@ export const ENTRIES: MatrixEntry[] = [
   { file: "firm/tokens/route.ts", method: "GET", request: async () => ({ path: "/api/firm/tokens" }), expect: adminOnly(200), isolation: noDemoData },
   { file: "firm/tokens/route.ts", method: "POST", request: async () => ({ path: "/api/firm/tokens", body: { name: "matrix", role: "viewer", expiresInDays: 7 } }), expect: adminOnly(201) },
   { file: "firm/tokens/[tokenId]/route.ts", method: "DELETE", request: async () => ({ path: `/api/firm/tokens/${await newToken()}` }), expect: adminOnly(200, 404) },
+  { file: "firm/billing/route.ts", method: "GET", request: async () => ({ path: "/api/firm/billing" }), expect: adminOnly(200), isolation: noDemoData },
+  // Checkout is for a firm without a subscription; each admin's firm gets a session (never paid).
+  { file: "firm/billing/checkout/route.ts", method: "POST", request: async () => ({ ...(await freeDemoFirm()), path: "/api/firm/billing/checkout", body: { seats: 400 } }), expect: adminOnly(201) },
+  // Changing seats needs a subscription, which neither demo firm has: admins get through to the 409.
+  { file: "firm/billing/seats/route.ts", method: "PUT", request: async () => ({ ...(await freeDemoFirm()), path: "/api/firm/billing/seats", body: { seats: 400 } }), expect: adminOnly(409) },
+  { file: "firm/billing/portal/route.ts", method: "POST", request: async () => ({ path: "/api/firm/billing/portal" }), expect: adminOnly(201) },
+  // Stripe's webhook needs its signature, whoever sends it; without one: 400 and nothing changes.
+  { file: "webhooks/stripe/route.ts", method: "POST", request: async () => ({ path: "/api/webhooks/stripe", body: { id: "evt_matrix", object: "event", type: "customer.subscription.updated" } }), expect: same(400) },
   // Public routes: who calls makes no difference (a bad token is not even looked at).
   {
     file: "sign-up/route.ts",

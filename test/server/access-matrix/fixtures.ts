@@ -1,6 +1,7 @@
 // Rows the access matrix acts on, made fresh for each cell so that one principal's successful
 // DELETE or PATCH never leaves the next one nothing to act on.
 import { createHash, randomBytes } from "node:crypto";
+import { clearPlan, grantPaidPlan } from "../../support/billing";
 import { testDb } from "../../support/db";
 
 export const DEMO_FIRM = "tarnbrook-sill";
@@ -52,4 +53,16 @@ export async function newPasswordReset(): Promise<string> {
 export async function demoProjectId(): Promise<string> {
   const row = await testDb()("projects").where({ firm_id: await firmId(DEMO_FIRM), reference: "TS-2417" }).first("id");
   return row.id;
+}
+
+/** The demo firm on the paid plan, for entries that go beyond the free limits (returns nothing to spread). */
+export async function paidDemoFirm(): Promise<Record<string, never>> {
+  await grantPaidPlan(await firmId(DEMO_FIRM));
+  return {};
+}
+
+/** The demo firm with no subscription (and no Stripe customer), for the Checkout entries. */
+export async function freeDemoFirm(): Promise<Record<string, never>> {
+  await clearPlan(await firmId(DEMO_FIRM));
+  return {};
 }

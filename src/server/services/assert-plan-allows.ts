@@ -1,0 +1,75 @@
+import "server-only";
+import type { Knex } from "knex";
+import { FREE_PLAN, type TPlan } from "@/schemas/billing";
+import { AppError } from "@/server/http/app-error";
+import { getPlan } from "./get-plan";
+
+/** A count the change would leave behind: a number, or a function that counts (see below). */
+export type PlanCount = number | (() => Promise<number>);
+
+export interface PlanNeeds {
+  /** Projects the firm will hold once the change is saved (creating the second project: 2). */
+  projects?: PlanCount;
+  /** Rows (surfaces + duct runs) the one project will hold once the change is saved. */
+  rows?: PlanCount;
+  /** The change issues a revision. */
+  revisions?: true;
+  /** The change produces a report without the "not for issue" watermark. */
+  cleanReport?: true;
+}
+
+const UPGRADE = "A firm admin can upgrade under Firm › Billing; nothing already saved is removed.";
+
+/**
+ * The one paid-tier check. Free firms get one project, 40 rows per project, watermarked reports
+ * and no revisions; paid firms (subscription active or trialing) get everything. Call it inside
+ * the transaction that makes the change, before or after the write: when it throws, roll back
+ * and nothing is saved.
+ *
+ * Counts are totals *after* the change, not increments: adding 3 rows to a project of 38 rows
+ * passes `rows: 41`. Pass a function instead of a number to count race-free: for a free firm the
+ * check first locks the firm's row (SELECT … FOR UPDATE), then calls your function, so two
+ * concurrent writers of one firm cannot both take the last place. Paid firms take no lock and
+ * your function is never called.
+ *
+ * @param trx the transaction of the change.
+ * @param firmId the acting firm (`actor.firm.id`).
+ * @param needs what the change needs; omitted keys are not checked.
+ * @returns the firm's plan (for callers that also word a notice).
+ * @throws AppError `plan_limit` (HTTP 402 through route(); the form's message through action())
+ *   with a message naming the limit and the upgrade path, and `details` = `{ limit, allowed,
+ *   requested, upgradePath: "/firm/billing" }`.
+ * @example
+ *   // creating a project (src/server/services/create-project.ts)
+ *   await assertPlanAllows(trx, actor.firm.id, { projects: async () => (await countProjects(trx)) + 1 });
+ *   // adding rows to a schedule: count after inserting, inside the same transaction
+ *   await assertPlanAllows(trx, actor.firm.id, { rows: () => countRows(trx, projectId) });
+ *   // issuing a revision / a clean report
+ *   await assertPlanAllows(trx, actor.firm.id, { revisions: true });
+ */
+export async function assertPlanAllows(trx: Knex.Transaction, firmId: string, needs: PlanNeeds): Promise<TPlan> {
+  const plan = await getPlan(firmId, trx);
+  if (plan.plan === "paid") return plan;
+  await trx("firms").where({ id: firmId }).forUpdate().first("id");
+  const count = async (c: PlanCount) => (typeof c === "number" ? c : await c());
+
+  if (needs.projects !== undefined) {
+    const requested = await count(needs.projects);
+    if (requested > FREE_PLAN.projects) {
+      throw refuse("projects", FREE_PLAN.projects, requested, `The free plan holds ${FREE_PLAN.projects} project; a paid plan has no limit. ${UPGRADE}`);
+    }
+  }
+  if (needs.rows !== undefined) {
+    const requested = await count(needs.rows);
+    if (requested > FREE_PLAN.rowsPerProject) {
+      throw refuse("rows", FREE_PLAN.rowsPerProject, requested, `The free plan holds ${FREE_PLAN.rowsPerProject} rows per project (this change would make ${requested}); a paid plan has no limit. ${UPGRADE}`);
+    }
+  }
+  if (needs.revisions) throw refuse("revisions", 0, 1, `Issuing revisions needs a paid plan. ${UPGRADE}`);
+  if (needs.cleanReport) throw refuse("cleanReport", 0, 1, `Reports without the “not for issue” mark need a paid plan. ${UPGRADE}`);
+  return plan;
+}
+
+function refuse(limit: keyof PlanNeeds, allowed: number, requested: number, message: string): AppError {
+  return new AppError("plan_limit", message, { limit, allowed, requested, upgradePath: "/firm/billing" });
+}
