@@ -16,7 +16,8 @@ export function PlanNotice({ plan, projects, isAdmin }: { plan: TPlan; projects:
           {lapsed ? `Subscription ${STATUS_WORDS[plan.status!]?.toLowerCase() ?? plan.status}: your firm is held to the free limits` : "Your firm is on the free plan"}
         </p>
         <p className="text-small text-muted">
-          {projects} of {FREE_PLAN.projects} project used · up to {FREE_PLAN.rowsPerProject} rows per project · reports marked “not for issue” · no revisions.
+          {projects <= FREE_PLAN.projects ? `${projects} of ${FREE_PLAN.projects} project used` : `${projects} projects kept, but no new ones (the free plan holds ${FREE_PLAN.projects})`} · up to{" "}
+          {FREE_PLAN.rowsPerProject} rows per project · reports marked “not for issue” · no revisions.
           {lapsed ? " Nothing has been deleted." : ""}
         </p>
       </div>

@@ -14,7 +14,7 @@ export const STATUS_WORDS: Record<string, string> = {
 
 export function planLabel(plan: TPlan): string {
   if (plan.plan === "paid") return "Paid plan";
-  return plan.status === null ? "Free plan" : `Free limits (${STATUS_WORDS[plan.status] ?? plan.status})`;
+  return plan.status === null ? "Free plan" : "Free limits";
 }
 
 /** The two plans side by side, as lines a page can list. */

@@ -48,7 +48,8 @@ function Billing({ overview, checkout }: { overview: BillingOverview; checkout: 
           <div className="grid gap-4">
             <p className="flex flex-wrap items-baseline gap-3">
               <strong className={`text-title ${paid ? "text-ok" : "text-ink"}`}>{planLabel(plan)}</strong>
-              {plan.status ? <span className={`text-small ${overdue ? "text-danger" : "text-muted"}`}>Subscription: {STATUS_WORDS[plan.status] ?? plan.status}</span> : null}
+              {plan.status && !paid ? <span className={`text-small ${overdue ? "text-danger" : "text-muted"}`}>Subscription: {STATUS_WORDS[plan.status] ?? plan.status}</span> : null}
+              {paid && plan.currentPeriodEnd && !plan.cancelAtPeriodEnd ? <span className="text-small text-muted">{plan.subscribedSeats} seats · renews {day(plan.currentPeriodEnd)}</span> : null}
             </p>
             {overdue ? (
               <p className="text-small text-danger">The last payment failed, so the firm is held to the free limits. Nothing has been deleted: pay the overdue invoice under “Manage payment” to lift them.</p>
@@ -79,7 +80,9 @@ function Billing({ overview, checkout }: { overview: BillingOverview; checkout: 
         <Panel title="Seats" lead={paid ? "Seats bought on the subscription, and who fills them." : "Every member and every pending invitation takes a seat."}>
           <div className="grid gap-5">
             <SeatMeter seats={seats} />
-            {subscribed && !paid ? null : (
+            {subscribed && !paid ? (
+              <p className="text-small text-muted">Seats can be changed again once the subscription is paid up (“Manage payment”).</p>
+            ) : (
               <SeatsForm mode={subscribed ? "change" : "buy"} suggested={subscribed ? plan.seats : Math.max(seats.used, 1)} minimum={seats.used} priceLabel={priceLabel} />
             )}
           </div>

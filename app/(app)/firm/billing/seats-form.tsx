@@ -10,9 +10,11 @@ import { buySeatsAction, changeSeatsAction } from "./actions";
  */
 export function SeatsForm({ mode, suggested, minimum, priceLabel }: { mode: "buy" | "change"; suggested: number; minimum: number; priceLabel: string | null }) {
   const [state, submit] = useActionState(mode === "buy" ? buySeatsAction : changeSeatsAction, null);
+  // After a refusal the form shows what was typed, not the suggestion.
+  const typed = state && !state.ok ? state.values?.seats : undefined;
   return (
     <form action={submit} className="grid gap-3" noValidate>
-      <div className="grid gap-3 sm:grid-cols-[10rem_auto] sm:items-start">
+      <div className="flex flex-wrap items-start gap-3">
         <Field
           label="Seats"
           name="seats"
@@ -20,12 +22,13 @@ export function SeatsForm({ mode, suggested, minimum, priceLabel }: { mode: "buy
           inputMode="numeric"
           min={1}
           step={1}
-          defaultValue={suggested}
+          size={6}
+          defaultValue={typed ?? suggested}
           required
           hint={`At least ${minimum} (in use now)${priceLabel ? ` · ${priceLabel}` : ""}`}
           state={state}
         />
-        <div className="sm:pt-6">
+        <div className="pt-6">
           <SubmitButton>{mode === "buy" ? "Continue to checkout" : "Change seats"}</SubmitButton>
         </div>
       </div>
