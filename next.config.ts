@@ -28,8 +28,8 @@ const nextConfig: NextConfig = {
   poweredByHeader: false,
   reactStrictMode: true,
   // Knex loads database drivers dynamically and graphile-worker its own SQL files; bundling breaks
-  // that, so keep them (and pg, nodemailer) external.
-  serverExternalPackages: ["knex", "pg", "graphile-worker", "nodemailer"],
+  // that, so keep them (and pg, nodemailer, and exceljs with its zip streams) external.
+  serverExternalPackages: ["knex", "pg", "graphile-worker", "nodemailer", "exceljs"],
   // Type errors do not stop a build (so `npm start` still serves while a change is half done);
   // `npm test` type-checks the whole project as a suite of its own (tsc --noEmit).
   typescript: { ignoreBuildErrors: true },

@@ -77,10 +77,11 @@ const cells = ENTRIES.flatMap((entry) => PRINCIPALS.map((principal) => [`${entry
 
 describe("status by route and caller", () => {
   test.each(cells)("%s as %s → %i", async (_label, principal, status, entry: MatrixEntry) => {
-    const { path, body, form } = await entry.request();
+    const { path, body, form, raw } = await entry.request();
     let req = request(app.server)[entry.method.toLowerCase() as "get" | "post" | "patch" | "put" | "delete"](path).set(headers[principal]);
     if (body !== undefined) req = req.send(body as object);
     if (form !== undefined) req = req.type("form").send(form);
+    if (raw !== undefined) req = req.set("content-type", raw.type).send(raw.data);
     const res = await req;
     expect(res.status, `${entry.method} ${path}: ${res.text.slice(0, 300)}`).toBe(status);
     if (principal === "other_firm" && status < 300) entry.isolation?.(res.body);

@@ -3,12 +3,17 @@ import bcrypt from "bcryptjs";
 import knexFactory, { type Knex } from "knex";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { DEFAULT_DEMO_PASSWORD, DEMO_USERS } from "../../db/seeds/01_demo_firms";
+import { DEMO_CASES, DEMO_DUCT_RUNS, DEMO_SURFACE_COUNT, DEMO_ZONES } from "../../db/seeds/02_demo_schedule";
 import { createScratchDatabase, dropScratchDatabase, knexCli } from "../support/database";
 
 const NAME = "filmsheet_test_migrations";
 const TABLES = [
   "accounts",
   "api_tokens",
+  "buildup_layers",
+  "buildups",
+  "design_cases",
+  "duct_runs",
   "firm_billing",
   "firms",
   "invitations",
@@ -17,9 +22,11 @@ const TABLES = [
   "projects",
   "sessions",
   "sign_in_attempts",
+  "surfaces",
   "users",
   "verification_token",
   "webhook_events",
+  "zones",
 ];
 let url: string;
 let db: Knex;
@@ -73,6 +80,37 @@ describe("migrations round trip", () => {
       .orderBy("u.email");
     expect(roles).toContainEqual({ email: "checker@demo.filmsheet.test", role: "checker", slug: "tarnbrook-sill" });
     expect(roles).toContainEqual({ email: "admin@other.filmsheet.test", role: "admin", slug: "ostrander-mechanical" });
+  });
+
+  test("the demo schedule: at least 3 zones, 40 surfaces on several orientations and heights, 8 duct runs, 3 design cases; a second run adds nothing", async () => {
+    const n = async (table: string) => Number((await db(table).count({ n: "*" }))[0]!.n);
+    const expected = { zones: DEMO_ZONES.length, surfaces: DEMO_SURFACE_COUNT, duct_runs: DEMO_DUCT_RUNS.length, design_cases: DEMO_CASES.length };
+    expect(expected.zones).toBeGreaterThanOrEqual(3);
+    expect(expected.surfaces).toBeGreaterThanOrEqual(40);
+    expect(expected).toMatchObject({ duct_runs: 8, design_cases: 3 });
+    const counts = async () => ({ zones: await n("zones"), surfaces: await n("surfaces"), duct_runs: await n("duct_runs"), design_cases: await n("design_cases") });
+    expect(await counts()).toEqual(expected);
+    const orientations = await db("surfaces").where({ tilt_deg: 90 }).distinct("azimuth_deg");
+    const heights = await db("surfaces").distinct("height_m");
+    expect(orientations.length).toBeGreaterThanOrEqual(4);
+    expect(heights.length).toBeGreaterThanOrEqual(5);
+    expect(await db("duct_runs").where({ location: "outdoor" }).count({ n: "*" })).not.toEqual([{ n: "0" }]);
+    expect(await db("duct_runs").where({ location: "indoor" }).whereNotNull("T_surround_C").count({ n: "*" })).not.toEqual([{ n: "0" }]);
+    // Edits made during a demo survive the next start (rows are inserted only when missing).
+    await db("zones").where({ name: "Reading room" }).update({ floor_area_m2: 999 });
+    expect(cli(["seed:run"]).status).toBe(0);
+    expect(await counts()).toEqual(expected);
+    expect((await db("zones").where({ name: "Reading room" }).first()).floor_area_m2).toBe(999);
+  });
+
+  test("a surface cannot point at another project's zone, nor sit in another firm's project", async () => {
+    const [a, b] = await db("projects").orderBy("reference").select("id", "firm_id");
+    const zone = await db("zones").first();
+    const other = a!.id === zone.project_id ? b! : a!;
+    const buildup = await db("buildups").where({ project_id: zone.project_id }).first();
+    const row = { label: "x", area_m2: 1, tilt_deg: 90, azimuth_deg: 0, height_m: 1, length_m: 1, panel_height_m: 1, position: 0 };
+    await expect(db("surfaces").insert({ ...row, firm_id: other.firm_id, project_id: other.id, zone_id: zone.id, buildup_id: buildup.id })).rejects.toThrow(/foreign key/);
+    await expect(db("surfaces").insert({ ...row, firm_id: other.firm_id, project_id: zone.project_id, zone_id: zone.id, buildup_id: buildup.id })).rejects.toThrow(/project_firm_fk/);
   });
 
   test("demo passwords are bcrypt hashes of the default DEMO_PASSWORD", async () => {

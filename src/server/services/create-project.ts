@@ -14,7 +14,7 @@ export async function createProject(actor: Actor, input: TProjectCreate): Promis
       // The free plan holds one project; counted under the plan check's lock.
       const projects = async () => Number((await trx("projects").where({ firm_id: actor.firm.id }).count({ n: "*" }))[0]!.n) + 1;
       await assertPlanAllows(trx, actor.firm.id, { projects });
-      const [project] = await trx("projects").insert({ firm_id: actor.firm.id, name: input.name, reference: input.reference }).returning([...PROJECT_COLUMNS]);
+      const [project] = await trx("projects").insert({ ...input, firm_id: actor.firm.id }).returning([...PROJECT_COLUMNS]);
       return project;
     });
   } catch (error) {

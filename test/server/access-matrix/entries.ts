@@ -2,6 +2,7 @@
 // checks this list against the route files on disk: a new route (or method) without an entry
 // here fails, as does an entry whose route is gone.
 import { demoProjectId, freeDemoFirm, newInvitation, newMember, newPasswordReset, newToken, paidDemoFirm, uniqueEmail } from "./fixtures";
+import { SCHEDULE_ENTRIES } from "./schedule-entries";
 
 export const PRINCIPALS = ["anonymous", "admin", "consultant", "checker", "viewer", "other_firm", "admin_token", "revoked_token", "expired_token"] as const;
 export type Principal = (typeof PRINCIPALS)[number];
@@ -12,7 +13,7 @@ export interface MatrixEntry {
   file: string;
   method: Method;
   /** Builds one request (fresh fixtures each time). */
-  request: () => Promise<{ path: string; body?: unknown; form?: Record<string, string> }>;
+  request: () => Promise<{ path: string; body?: unknown; form?: Record<string, string>; raw?: { type: string; data: string } }>;
   expect: Record<Principal, number>;
   /** Extra check of what the other firm's member got back: nothing of the demo firm. */
   isolation?: (body: unknown) => void;
@@ -99,4 +100,5 @@ export const ENTRIES: MatrixEntry[] = [
     request: async () => ({ path: "/api/password-resets/confirm", body: { token: await newPasswordReset(), password: "a-fresh-password" } }),
     expect: same(200),
   },
+  ...SCHEDULE_ENTRIES,
 ];

@@ -1,0 +1,136 @@
+import "server-only";
+import type { Knex } from "knex";
+import type { Actor } from "@/server/auth/actor";
+import { isUniqueViolation } from "@/server/db/unique-violation";
+import { AppError } from "@/server/http/app-error";
+import { attachLayers } from "@/server/repositories/schedule";
+import { assertPlanAllows } from "@/server/services/assert-plan-allows";
+import { checkChanges, type CheckedChange, type ItemChange, type RowConflict, type RowProblem } from "./check-changes";
+import { ENTITIES, readColumns, type EntityName } from "./entities";
+
+export interface WriteResult {
+  created: { sheet: EntityName; row: Record<string, unknown> }[];
+  updated: { sheet: EntityName; row: Record<string, unknown> }[];
+  deleted: { sheet: EntityName; id: string }[];
+}
+
+// PostgreSQL takes at most 65,535 bind parameters a statement; 500 rows × ~20 columns stays well below.
+const INSERT_CHUNK = 500;
+
+const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? one : many}`;
+
+export function refuseProblems(problems: RowProblem[]): never {
+  const rows = new Set(problems.map((p) => p.row)).size;
+  throw new AppError("invalid_input", `${plural(problems.length, "problem")} in ${plural(rows, "row")}; nothing was saved`, problems);
+}
+
+function refuseConflicts(conflicts: RowConflict[]): never {
+  throw new AppError("conflict", `${plural(conflicts.length, "row")} changed since you read ${conflicts.length === 1 ? "it" : "them"}; nothing was saved`, conflicts);
+}
+
+async function countRows(trx: Knex.Transaction, projectId: string): Promise<number> {
+  const { rows } = await trx.raw<{ rows: { n: string }[] }>("select (select count(*) from surfaces where project_id = ?) + (select count(*) from duct_runs where project_id = ?) as n", [projectId, projectId]);
+  return Number(rows[0]!.n);
+}
+
+/** The columns a table stores for a parsed row (layers live in their own table). */
+function columnsOf(parsed: Record<string, unknown>, name: EntityName): Record<string, unknown> {
+  const { layers: _l, ...cols } = parsed;
+  if (name === "design_cases") cols.solar_W_m2 = JSON.stringify(cols.solar_W_m2);
+  return cols;
+}
+
+async function writeLayers(trx: Knex.Transaction, firmId: string, buildupId: string, layers: unknown): Promise<void> {
+  await trx("buildup_layers").where({ buildup_id: buildupId }).del();
+  const list = layers as { material: string; thickness_m: number; k_W_mK: number }[];
+  if (list.length > 0) await trx("buildup_layers").insert(list.map((l, i) => ({ ...l, buildup_id: buildupId, firm_id: firmId, position: i })));
+}
+
+/** Refuses to delete zones or build-ups that rows still use, naming how many. */
+async function assertUnused(trx: Knex.Transaction, deletes: CheckedChange[]): Promise<void> {
+  const conflicts: RowConflict[] = [];
+  for (const d of deletes) {
+    for (const use of ENTITIES[d.entity].usedBy) {
+      const [{ n }] = await trx(use.table).where(use.field, d.id).count({ n: "*" });
+      if (Number(n) > 0) {
+        const name = String(d.current?.name ?? d.id);
+        conflicts.push({ row: d.row, sheet: d.entity, id: d.id as string, field: "id", message: `${name} is used by ${plural(Number(n), use.noun.replace(/s$/, ""), use.noun)}; move or delete them first`, current: d.current ?? null });
+      }
+    }
+  }
+  if (conflicts.length) refuseConflicts(conflicts);
+}
+
+async function insertAll(trx: Knex.Transaction, actor: Actor, projectId: string, name: EntityName, creates: CheckedChange[]): Promise<Record<string, unknown>[]> {
+  const e = ENTITIES[name];
+  let next = 0;
+  if (e.positioned) {
+    const [{ max }] = await trx(e.table).where({ project_id: projectId }).max({ max: "position" });
+    next = (max ?? -1) + 1;
+  }
+  const records = creates.map((c) => ({
+    ...columnsOf(c.parsed as Record<string, unknown>, name),
+    ...(c.id === undefined ? {} : { id: c.id }),
+    ...(e.positioned ? { position: next++ } : {}),
+    firm_id: actor.firm.id,
+    project_id: projectId,
+  }));
+  const out: Record<string, unknown>[] = [];
+  for (let i = 0; i < records.length; i += INSERT_CHUNK) {
+    out.push(...(await trx(e.table).insert(records.slice(i, i + INSERT_CHUNK)).returning(readColumns(e))));
+  }
+  if (name === "buildups") {
+    for (const [i, row] of out.entries()) await writeLayers(trx, actor.firm.id, row.id as string, creates[i]!.parsed!.layers);
+    return attachLayers(trx, out);
+  }
+  return out;
+}
+
+/**
+ * Applies creates, updates and deletes of one project's items in the caller's transaction, all
+ * or nothing: every change is checked first (stale versions → 409 naming each row with its
+ * current state; bad values → 422 naming row and field), and only a clean set is written.
+ */
+export async function writeItems(trx: Knex.Transaction, actor: Actor, projectId: string, changes: ItemChange[]): Promise<WriteResult> {
+  const { checked, problems, conflicts } = await checkChanges(trx, actor.firm.id, projectId, changes);
+  if (conflicts.length) refuseConflicts(conflicts);
+  if (problems.length) refuseProblems(problems);
+
+  const result: WriteResult = { created: [], updated: [], deleted: [] };
+  const deletes = checked.filter((c) => c.op === "delete");
+  await assertUnused(trx, deletes);
+  for (const name of new Set(deletes.map((d) => d.entity))) {
+    const ids = deletes.filter((d) => d.entity === name).map((d) => d.id as string);
+    await trx(ENTITIES[name].table).where({ firm_id: actor.firm.id, project_id: projectId }).whereIn("id", ids).del();
+    result.deleted.push(...ids.map((id) => ({ sheet: name, id })));
+  }
+
+  const creates = checked.filter((c) => c.op === "create");
+  try {
+    for (const name of new Set(creates.map((c) => c.entity))) {
+      const rows = await insertAll(trx, actor, projectId, name, creates.filter((c) => c.entity === name));
+      result.created.push(...rows.map((row) => ({ sheet: name, row })));
+    }
+    // The free plan's row limit, counted after the inserts (and deletes) of this transaction:
+    // a refusal (402) rolls all of it back.
+    if (creates.some((c) => c.entity === "surfaces" || c.entity === "duct_runs")) {
+      await assertPlanAllows(trx, actor.firm.id, { rows: () => countRows(trx, projectId) });
+    }
+    for (const u of checked.filter((c) => c.op === "update")) {
+      const e = ENTITIES[u.entity];
+      const [row] = await trx(e.table)
+        .where({ id: u.id, firm_id: actor.firm.id })
+        .update({ ...columnsOf(u.parsed as Record<string, unknown>, u.entity), version: trx.raw("version + 1"), updated_at: trx.fn.now() })
+        .returning(readColumns(e));
+      if (u.entity === "buildups" && u.values?.layers !== undefined) await writeLayers(trx, actor.firm.id, u.id as string, u.parsed!.layers);
+      result.updated.push({ sheet: u.entity, row: u.entity === "buildups" ? (await attachLayers(trx, [row]))[0]! : row });
+    }
+  } catch (error) {
+    if (isUniqueViolation(error)) {
+      const e = ENTITIES[changes[0]!.entity];
+      refuseProblems([{ row: changes[0]!.row, sheet: e.table, field: "name", message: `Another ${e.noun} of this project already has that name` }]);
+    }
+    throw error;
+  }
+  return result;
+}

@@ -1,0 +1,15 @@
+import "server-only";
+import type { Actor } from "@/server/auth/actor";
+import { db } from "@/server/db/knex";
+import { AppError } from "@/server/http/app-error";
+
+/** Deletes a project and its whole schedule, at the version the caller read. */
+export async function deleteProject(actor: Actor, projectId: string, version: number): Promise<{ deleted: string }> {
+  return db().transaction(async (trx) => {
+    const current = await trx("projects").where({ id: projectId, firm_id: actor.firm.id }).forUpdate().first("id", "version", "name", "reference");
+    if (!current) throw new AppError("not_found", "No project with that id in this firm");
+    if (current.version !== version) throw new AppError("conflict", `This project was changed by someone else (now version ${current.version}); nothing was deleted`, [{ row: 1, sheet: "projects", id: projectId, field: "version", message: "Stale version", current }]);
+    await trx("projects").where({ id: projectId }).del();
+    return { deleted: projectId };
+  });
+}
