@@ -1,3 +1,4 @@
+import Link from "next/link";
 import type { ReactNode } from "react";
 import { PageHeader, Panel } from "@/components/panel";
 import type { TProject } from "@/schemas/project";
@@ -25,8 +26,16 @@ export function ProjectsView({ firmName, projects, canCreate, notice }: { firmNa
             <tbody>
               {projects.map((p) => (
                 <tr key={p.id} className="border-t border-line">
-                  <td className="py-2 pr-4 font-mono">{p.reference}</td>
-                  <td className="py-2 pr-4 font-medium">{p.name}</td>
+                  <td className="py-2 pr-4 font-mono">
+                    <Link href={`/projects/${p.id}`} className="hover:underline">
+                      {p.reference}
+                    </Link>
+                  </td>
+                  <td className="py-2 pr-4 font-medium">
+                    <Link href={`/projects/${p.id}`} className="text-accent hover:underline">
+                      {p.name}
+                    </Link>
+                  </td>
                   <td className="py-2 text-muted">{date(p.updated_at)}</td>
                 </tr>
               ))}

@@ -37,9 +37,11 @@ export async function attachLayers(q: Q, buildups: Record<string, unknown>[]): P
 export async function loadSchedule(q: Q, firmId: string, projectId: string): Promise<TSchedule | null> {
   const project = await q("projects").where({ id: projectId, firm_id: firmId }).first([...PROJECT_COLUMNS]);
   if (!project) return null;
-  const [design_cases, zones, buildups, surfaces, duct_runs] = await Promise.all(
-    (["design_cases", "zones", "buildups", "surfaces", "duct_runs"] as const).map((n) => loadItems(q, n, firmId, projectId)),
-  );
+  const tables = ["design_cases", "zones", "buildups", "surfaces", "duct_runs"] as const;
+  // On the pool the five reads run side by side; a transaction has one connection, so in turn.
+  const [design_cases, zones, buildups, surfaces, duct_runs] = (q as Knex.Transaction).isTransaction
+    ? await tables.reduce<Promise<Record<string, unknown>[][]>>(async (acc, n) => [...(await acc), await loadItems(q, n, firmId, projectId)], Promise.resolve([]))
+    : await Promise.all(tables.map((n) => loadItems(q, n, firmId, projectId)));
   // The rows hold exactly the columns the schemas name (readColumns), as PostgreSQL typed them.
   return { project, design_cases, zones, buildups, surfaces, duct_runs } as unknown as TSchedule;
 }

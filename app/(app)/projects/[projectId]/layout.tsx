@@ -1,0 +1,29 @@
+import { notFound } from "next/navigation";
+import type { ReactNode } from "react";
+import { ZProjectParams } from "@/schemas/project";
+import { hasAnyRole } from "@/server/auth/actor";
+import { requirePageActor } from "@/server/auth/get-viewer";
+import { AppError } from "@/server/http/app-error";
+import { getScheduleOrThrow } from "@/server/services/get-schedule";
+import { ScheduleProvider } from "@/components/schedule/schedule-context";
+import { ProjectHeader } from "./project-header";
+import "@/components/schedule/project-wide.css";
+
+// Every page of a project shares one load of its schedule, handed to the browser's query cache.
+export default async function ProjectLayout({ children, params }: { children: ReactNode; params: Promise<{ projectId: string }> }) {
+  const { projectId } = await params;
+  const actor = await requirePageActor(`/projects/${projectId}`);
+  if (!ZProjectParams.safeParse({ projectId }).success) notFound();
+  const schedule = await getScheduleOrThrow(actor, projectId).catch((error) => {
+    if (error instanceof AppError && error.code === "not_found") notFound();
+    throw error;
+  });
+  return (
+    <ScheduleProvider initial={schedule} canEdit={hasAnyRole(actor, ["consultant"])}>
+      <div className="fs-project grid gap-5">
+        <ProjectHeader />
+        {children}
+      </div>
+    </ScheduleProvider>
+  );
+}

@@ -1,0 +1,108 @@
+"use client";
+
+import { useState, type ReactNode } from "react";
+import type { TDesignCase, TSheet } from "@/schemas/schedule";
+import { SHEETS } from "@/schemas/schedule";
+import { SHEET_TITLES } from "@/schedule/sheet-columns";
+import type { useSheetEditing } from "@/components/grid/use-sheet-editing";
+import { useProject } from "@/components/schedule/schedule-context";
+
+const button = "rounded-chip border border-line bg-surface px-3 py-1.5 text-small font-medium hover:bg-sunken disabled:opacity-50 disabled:hover:bg-surface";
+
+/** Sheet tabs, design case and units, and the row actions, import and export of the schedule page. */
+export function ScheduleToolbar(props: {
+  sheet: TSheet;
+  onSheet: (s: TSheet) => void;
+  counts: Record<TSheet, number>;
+  cases: TDesignCase[];
+  caseId: string;
+  onCase: (id: string) => void;
+  units: ReactNode;
+  canEdit: boolean;
+  selected: string[];
+  editing: ReturnType<typeof useSheetEditing>;
+  onImport: () => void;
+}) {
+  const { projectId } = useProject();
+  const [confirming, setConfirming] = useState(false);
+  const n = props.selected.length;
+  const exportUrl = (format: string, extra = "") => `/api/projects/${projectId}/export?format=${format}${extra}`;
+  return (
+    <div className="flex flex-wrap items-end justify-between gap-3">
+      <div className="flex flex-wrap items-end gap-3">
+        <div role="tablist" aria-label="Sheets" className="inline-flex rounded-chip border border-line bg-sunken p-0.5">
+          {SHEETS.map((s) => (
+            <button
+              key={s}
+              role="tab"
+              type="button"
+              aria-selected={props.sheet === s}
+              onClick={() => props.onSheet(s)}
+              className="rounded-[0.3rem] px-3 py-1.5 text-small font-semibold text-muted aria-selected:bg-surface aria-selected:text-ink aria-selected:shadow-panel"
+            >
+              {SHEET_TITLES[s]} <span className="font-normal text-muted">{props.counts[s]}</span>
+            </button>
+          ))}
+        </div>
+        <label className="grid gap-0.5 text-micro font-medium uppercase text-muted">
+          Design case
+          <select value={props.caseId} onChange={(e) => props.onCase(e.target.value)} className="rounded-chip border border-line bg-canvas px-2 py-1.5 text-small normal-case text-ink">
+            {props.cases.map((c) => (
+              <option key={c.id} value={c.id}>
+                {c.name} ({c.kind})
+              </option>
+            ))}
+          </select>
+        </label>
+        {props.units}
+      </div>
+      <div className="flex flex-wrap items-center gap-2">
+        {props.canEdit ? (
+          <>
+            <button type="button" className={button} onClick={props.editing.addRow}>
+              Add row
+            </button>
+            <button type="button" className={button} disabled={n === 0} onClick={() => props.editing.duplicate(props.selected)}>
+              Duplicate{n ? ` ${n}` : ""}
+            </button>
+            {confirming && n > 0 ? (
+              <span className="inline-flex items-center gap-1 rounded-chip border border-danger/40 bg-danger/10 px-2 py-1 text-small text-danger">
+                Delete {n} {n === 1 ? "row" : "rows"}?
+                <button type="button" className="rounded-chip bg-danger px-2 py-0.5 font-semibold text-accent-ink" onClick={() => (props.editing.remove(props.selected), setConfirming(false))}>
+                  Delete
+                </button>
+                <button type="button" className="px-1 underline" onClick={() => setConfirming(false)}>
+                  Keep
+                </button>
+              </span>
+            ) : (
+              <button type="button" className={button} disabled={n === 0} onClick={() => setConfirming(true)}>
+                Delete{n ? ` ${n}` : ""}
+              </button>
+            )}
+            <button type="button" className={button} onClick={props.onImport}>
+              Import…
+            </button>
+          </>
+        ) : null}
+        <details className="relative">
+          <summary className={`${button} cursor-pointer list-none`}>Export ▾</summary>
+          <div className="absolute right-0 z-10 mt-1 grid w-64 gap-1 rounded-chip border border-line bg-surface p-2 text-small shadow-panel">
+            <a className="rounded px-2 py-1 hover:bg-sunken" href={exportUrl("csv", `&sheet=${props.sheet}&case=${props.caseId}`)} download>
+              {SHEET_TITLES[props.sheet]} as CSV (with results)
+            </a>
+            <a className="rounded px-2 py-1 hover:bg-sunken" href={exportUrl("xlsx", `&case=${props.caseId}`)} download>
+              Whole schedule as XLSX (with results)
+            </a>
+            <a className="rounded px-2 py-1 hover:bg-sunken" href={exportUrl("csv", `&sheet=${props.sheet}&template=1`)} download>
+              {SHEET_TITLES[props.sheet]} template (CSV)
+            </a>
+            <a className="rounded px-2 py-1 hover:bg-sunken" href={exportUrl("xlsx", "&template=1")} download>
+              Template workbook (XLSX)
+            </a>
+          </div>
+        </details>
+      </div>
+    </div>
+  );
+}

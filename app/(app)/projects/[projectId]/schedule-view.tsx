@@ -1,0 +1,99 @@
+"use client";
+
+import { useMemo, useState } from "react";
+import type { TSheet } from "@/schemas/schedule";
+import { resultsFor } from "@/schedule/engine-schedule";
+import { RESULT_COLUMNS } from "@/schedule/result-columns";
+import { SHEET_TITLES } from "@/schedule/sheet-columns";
+import { ImportPanel } from "@/components/grid/import-panel";
+import { ScheduleGrid } from "@/components/grid/schedule-grid";
+import { useSheetEditing } from "@/components/grid/use-sheet-editing";
+import { Notices } from "@/components/schedule/notices";
+import { useProject, useSchedule } from "@/components/schedule/schedule-context";
+import { UnitsSwitch } from "@/components/schedule/units-switch";
+import { ZoneTotalsPanel } from "@/components/schedule/zone-totals-panel";
+import { ScheduleToolbar } from "./schedule-toolbar";
+
+/** The schedule: two sheets in the grid, recalculated in the browser for the chosen design case, with zone totals beside. */
+export function ScheduleView() {
+  const schedule = useSchedule();
+  const { canEdit, system } = useProject();
+  const [sheet, setSheet] = useState<TSheet>("surfaces");
+  const [caseId, setCaseId] = useState(() => (schedule.design_cases.find((d) => d.kind === "heating") ?? schedule.design_cases[0])?.id ?? null);
+  const [selected, setSelected] = useState<string[]>([]);
+  const [importing, setImporting] = useState(false);
+  const editing = useSheetEditing(sheet, schedule);
+  const dc = schedule.design_cases.find((d) => d.id === caseId) ?? schedule.design_cases[0];
+
+  // Every edit changes `schedule`, and with it every row's results and the zone totals, here in the browser.
+  const results = useMemo(() => (dc ? resultsFor(schedule, dc) : null), [schedule, dc]);
+  const byRow = useMemo(() => new Map((results ? [...results.surfaces, ...results.duct_runs] : []).map((r) => [r.row_id, r.result])), [results]);
+  const totals = useMemo(() => {
+    const rows = sheet === "surfaces" ? schedule.surfaces : schedule.duct_runs;
+    const t: Record<string, number> = { area_m2: 0, length_m: 0 };
+    for (const r of rows) {
+      t.area_m2! += (r as { area_m2?: number }).area_m2 ?? 0;
+      t.length_m! += r.length_m;
+    }
+    for (const c of RESULT_COLUMNS[sheet].filter((c) => c.total)) {
+      t[c.key] = rows.reduce((sum, r) => {
+        const res = byRow.get(r.id);
+        return sum + (res?.ok ? ((res as Record<string, unknown>)[c.key] as number) : 0);
+      }, 0);
+    }
+    return t;
+  }, [schedule, sheet, byRow]);
+
+  if (!dc || !results) {
+    return (
+      <p className="rounded-panel border border-dashed border-line bg-surface p-8 text-small text-muted">
+        No design case yet. Add one (outdoor conditions) under Design cases: the grid computes every row for the case you choose.
+      </p>
+    );
+  }
+
+  return (
+    <div className="grid gap-4">
+      <ScheduleToolbar
+        sheet={sheet}
+        onSheet={(s) => {
+          setSheet(s);
+          setSelected([]);
+        }}
+        counts={{ surfaces: schedule.surfaces.length, duct_runs: schedule.duct_runs.length }}
+        cases={schedule.design_cases}
+        caseId={dc.id}
+        onCase={setCaseId}
+        units={<UnitsSwitch />}
+        canEdit={canEdit}
+        selected={selected}
+        editing={editing}
+        onImport={() => setImporting((v) => !v)}
+      />
+      <Notices />
+      {importing && canEdit ? <ImportPanel sheet={sheet} onClose={() => setImporting(false)} /> : null}
+      <div className="grid gap-4 xl:grid-cols-[minmax(0,1fr)_20rem]">
+        <section aria-label={`${SHEET_TITLES[sheet]} sheet`} className="min-w-0">
+          <ScheduleGrid
+            key={sheet}
+            sheet={sheet}
+            schedule={schedule}
+            results={byRow}
+            totals={totals}
+            system={system}
+            canEdit={canEdit}
+            cellErrors={editing.cellErrors}
+            onEdit={editing.onEdit}
+            onPaste={editing.onPaste}
+            onSelection={setSelected}
+          />
+          <p className="mt-2 text-micro text-muted">
+            {canEdit ? "Double-click or press Enter to edit; arrows and Tab move; paste a block copied from a spreadsheet onto the focused cell. " : ""}
+            Shaded columns are computed for the chosen design case; blank overrides show the build-up&apos;s value in italics.
+          </p>
+        </section>
+        <ZoneTotalsPanel schedule={schedule} results={results} />
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,71 @@
+/**
+ * A cell edit from what was typed to stored values: converted to SI, the whole row checked with
+ * the same schema the server uses (messages in the person's units), and a few helpful fills (a
+ * duct switched to rectangular gets an equal-area section to start from).
+ */
+import { numberProblem } from "@/schemas/schedule-fields";
+import { ZDuctRunValues, ZSurfaceValues, type TSheet } from "@/schemas/schedule";
+import { SHEET_COLUMNS, type SheetColumn } from "@/schedule/sheet-columns";
+import { fromDisplay, type UnitSystem } from "@/units/units";
+import type { Row } from "@/components/schedule/schedule-cache";
+
+const SCHEMAS = { surfaces: ZSurfaceValues, duct_runs: ZDuctRunValues } as const;
+const META = new Set(["id", "version", "position"]);
+
+/** Every problem of a whole row, by field, worded in the unit system. */
+export function rowProblems(sheet: TSheet, row: Record<string, unknown>, system: UnitSystem): Map<string, string> {
+  const values = Object.fromEntries(Object.entries(row).filter(([k]) => !META.has(k)));
+  const parsed = SCHEMAS[sheet].safeParse(values);
+  const out = new Map<string, string>();
+  if (parsed.success) return out;
+  for (const issue of parsed.error.issues) {
+    const field = String(issue.path[0] ?? "");
+    const col = SHEET_COLUMNS[sheet].find((c) => c.field === field);
+    const inUnits = col?.kind === "number" ? numberProblem(col.spec!, values[field] as number | null, system) : null;
+    if (!out.has(field)) out.set(field, inUnits ?? issue.message);
+  }
+  return out;
+}
+
+/** What a typed value stores as (SI, ids, null for blank). */
+export function storedValue(col: SheetColumn, shown: unknown, system: UnitSystem): unknown {
+  if (col.kind === "number") {
+    if (shown === null || shown === undefined || shown === "") return null;
+    const n = typeof shown === "number" ? shown : Number(shown);
+    return Number.isFinite(n) ? fromDisplay(col.spec!.quantity, n, system) : Number.NaN;
+  }
+  if (col.kind === "text") return String(shown ?? "").trim();
+  if (col.kind === "choice") return shown === "" || shown === null || shown === undefined ? null : String(shown);
+  return shown === null || shown === undefined ? "" : String(shown);
+}
+
+/** Fills that make a change complete: an equal-area section when a duct changes shape. */
+export function completeChange(sheet: TSheet, row: Row, values: Record<string, unknown>): Record<string, unknown> {
+  if (sheet !== "duct_runs" || values.shape === undefined || values.shape === row.shape) return values;
+  const d = row.diameter_m as number | null;
+  const w = row.width_m as number | null;
+  const h = row.height_m as number | null;
+  if (values.shape === "rect" && (w === null || h === null) && d !== null) {
+    // A square of the same area as the round duct, to the millimetre.
+    const side = Math.round(Math.sqrt((Math.PI * d * d) / 4) * 1000) / 1000;
+    return { width_m: side, height_m: side, ...values };
+  }
+  if (values.shape === "round" && d === null && w !== null && h !== null) {
+    return { diameter_m: Math.round(Math.sqrt((4 * w * h) / Math.PI) * 1000) / 1000, ...values };
+  }
+  return values;
+}
+
+export type EditOutcome = { ok: true; values: Record<string, unknown> } | { ok: false; message: string };
+
+/** One cell typed into: the values to save, or why not (the row's other problems are not this edit's). */
+export function editCell(sheet: TSheet, row: Row, col: SheetColumn, shown: unknown, system: UnitSystem): EditOutcome {
+  const value = storedValue(col, shown, system);
+  if (typeof value === "number" && Number.isNaN(value)) return { ok: false, message: `${col.title} must be a number` };
+  const values = completeChange(sheet, row, { [col.field]: value });
+  const problems = rowProblems(sheet, { ...row, ...values }, system);
+  const before = rowProblems(sheet, row, system);
+  const fresh = [...problems].filter(([f, m]) => before.get(f) !== m);
+  if (fresh.length) return { ok: false, message: fresh.map(([, m]) => m).join("; ") };
+  return { ok: true, values };
+}

@@ -1,0 +1,142 @@
+/**
+ * AG Grid column definitions for a sheet, built from the shared column list (inputs, in the
+ * person's units, with typed editors) and the result list (computed in the browser), plus a
+ * notes column for warnings and errors.
+ */
+import type { ColDef, ValueFormatterParams, ValueGetterParams } from "ag-grid-community";
+import { labelOf } from "@/schemas/schedule-fields";
+import type { TSchedule, TSheet } from "@/schemas/schedule";
+import { RESULT_COLUMNS, resultHeader, resultValue, type ResultColumn } from "@/schedule/result-columns";
+import { SHEET_COLUMNS, columnHeader, type SheetColumn } from "@/schedule/sheet-columns";
+import { decimals, formatShown } from "@/units/format";
+import { toDisplay, type UnitSystem } from "@/units/units";
+import type { Row } from "@/components/schedule/schedule-cache";
+import { TOTALS_ID, cellKey, type GridContext } from "./grid-context";
+
+type P = ValueGetterParams<Row, unknown> & { context: GridContext };
+type F = ValueFormatterParams<Row, unknown> & { context: GridContext };
+
+const isTotals = (p: { node?: { rowPinned?: string | null } | null; data?: Row }) => p.data?.id === TOTALS_ID;
+
+/** The value a row inherits when an override is blank (the build-up's absorptance or emissivity). */
+function inherited(col: SheetColumn, row: Row, ctx: GridContext): number | null {
+  if (ctx.sheet !== "surfaces" || (col.field !== "absorptance" && col.field !== "emissivity")) return null;
+  const b = ctx.buildups.get(row.buildup_id as string);
+  return b ? (b[col.field] as number) : null;
+}
+
+function inputColumn(col: SheetColumn, s: TSchedule, system: UnitSystem): ColDef<Row> {
+  const header = columnHeader(col, system);
+  const base: ColDef<Row> = {
+    colId: col.field,
+    headerName: header,
+    headerTooltip: col.kind === "number" && col.spec!.blank ? `${header}; blank = ${col.spec!.blank}` : header,
+    editable: (p) => (p.context as GridContext).canEdit && !isTotals(p),
+    cellClassRules: {
+      "fs-cell-error": (p) => !!p.data && (p.context as GridContext).cellErrors.has(cellKey(p.data.id, col.field)),
+      "fs-inherited": (p) => !isTotals(p) && p.value == null,
+    },
+    tooltipValueGetter: (p) => (p.data ? (p.context as GridContext).cellErrors.get(cellKey(p.data.id, col.field)) : undefined),
+  };
+  switch (col.kind) {
+    case "text":
+      return { ...base, field: col.field as never, width: 200, pinned: "left", filter: "agTextColumnFilter", cellEditor: "agTextCellEditor" };
+    case "number": {
+      const q = col.spec!.quantity;
+      const d = decimals(q, col.spec!.digits, system);
+      return {
+        ...base,
+        type: "numericColumn",
+        width: 104,
+        filter: "agNumberColumnFilter",
+        cellEditor: "agNumberCellEditor",
+        cellEditorParams: { showStepperButtons: false },
+        valueGetter: (p: P) => {
+          if (isTotals(p)) return col.field === "area_m2" || col.field === "length_m" ? toDisplay(q, p.context.totals[col.field] ?? 0, system) : null;
+          const v = p.data?.[col.field] as number | null | undefined;
+          return v === null || v === undefined ? null : toDisplay(q, v, system);
+        },
+        valueFormatter: (p: F) => {
+          if (p.value === null || p.value === undefined) {
+            if (!p.data || isTotals(p)) return "";
+            const from = inherited(col, p.data, p.context);
+            return from === null ? (col.spec!.blank ? `(${col.spec!.blank})` : "") : formatShown(from, d);
+          }
+          return formatShown(p.value as number, d);
+        },
+      };
+    }
+    case "zone":
+    case "buildup": {
+      const list = col.kind === "zone" ? s.zones : s.buildups;
+      const refData = Object.fromEntries(list.map((z) => [z.id, z.name]));
+      return { ...base, field: col.field as never, width: col.kind === "zone" ? 140 : 190, refData, filter: "agTextColumnFilter", cellEditor: "agSelectCellEditor", cellEditorParams: { values: list.map((z) => z.id) } };
+    }
+    case "choice": {
+      const blank = col.blankLabel ? `${col.blankLabel} (${labelOf(col.options!, s.project.default_method)})` : undefined;
+      const refData = { ...(blank ? { "": blank } : {}), ...Object.fromEntries(col.options!.map((o) => [o.value, o.label])) };
+      return {
+        ...base,
+        width: 150,
+        refData,
+        filter: "agTextColumnFilter",
+        valueGetter: (p: P) => (isTotals(p) ? null : ((p.data?.[col.field] as string | null) ?? (blank ? "" : null))),
+        cellEditor: "agSelectCellEditor",
+        cellEditorParams: { values: Object.keys(refData) },
+      };
+    }
+  }
+}
+
+function resultColumn(c: ResultColumn, system: UnitSystem): ColDef<Row> {
+  const d = c.quantity ? decimals(c.quantity, c.digits ?? 1, system) : 0;
+  return {
+    colId: `r:${c.key}`,
+    headerName: resultHeader(c, system),
+    headerClass: "fs-computed-header",
+    editable: false,
+    width: c.quantity ? 104 : 112,
+    // The heat flow stays in view at the right while the inputs scroll.
+    pinned: c.key === "Q_W" ? "right" : undefined,
+    type: c.quantity ? "numericColumn" : undefined,
+    filter: c.quantity ? "agNumberColumnFilter" : "agTextColumnFilter",
+    valueGetter: (p: P) => {
+      if (isTotals(p)) return c.total ? toDisplay(c.quantity!, p.context.totals[c.key] ?? 0, system) : null;
+      return p.data ? resultValue(c, p.context.results.get(p.data.id), system) : null;
+    },
+    valueFormatter: (p: F) => (typeof p.value === "number" ? formatShown(p.value, d) : p.value === null || p.value === undefined ? "—" : String(p.value)),
+    cellClassRules: {
+      "fs-computed": () => true,
+      "fs-gain": (p) => c.key === "Q_W" && typeof p.value === "number" && ((p.context as GridContext).sheet === "surfaces" ? p.value < 0 : p.value > 0),
+      "fs-loss": (p) => c.key === "Q_W" && typeof p.value === "number" && ((p.context as GridContext).sheet === "surfaces" ? p.value > 0 : p.value < 0),
+      "fs-risk": (p) => c.key === "condensation" && p.value === "risk",
+    },
+  };
+}
+
+/** Warnings and errors of the row's calculation, counted in the cell and listed in its tooltip. */
+const notesColumn: ColDef<Row> = {
+  colId: "notes",
+  headerName: "Notes",
+  editable: false,
+  sortable: true,
+  width: 120,
+  pinned: "right",
+  valueGetter: (p: P) => {
+    if (!p.data || isTotals(p)) return null;
+    const r = p.context.results.get(p.data.id);
+    if (!r) return null;
+    if (!r.ok) return `error: ${r.error.message}`;
+    return r.warnings.length ? `${r.warnings.length} warning${r.warnings.length > 1 ? "s" : ""}` : null;
+  },
+  tooltipValueGetter: (p) => {
+    const r = p.data ? (p.context as GridContext).results.get(p.data.id) : undefined;
+    if (!r) return undefined;
+    return r.ok ? r.warnings.map((w) => w.message).join("\n") || undefined : r.error.message;
+  },
+  cellClassRules: { "fs-note-error": (p) => typeof p.value === "string" && p.value.startsWith("error"), "fs-note-warn": (p) => typeof p.value === "string" && !p.value.startsWith("error") },
+};
+
+export function sheetColumnDefs(sheet: TSheet, s: TSchedule, system: UnitSystem): ColDef<Row>[] {
+  return [...SHEET_COLUMNS[sheet].map((c) => inputColumn(c, s, system)), ...RESULT_COLUMNS[sheet].map((c) => resultColumn(c, system)), notesColumn];
+}

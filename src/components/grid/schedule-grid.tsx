@@ -1,0 +1,110 @@
+"use client";
+
+import { AllCommunityModule, ModuleRegistry, type CellEditRequestEvent, type GridApi, type GridReadyEvent } from "ag-grid-community";
+import { AgGridReact } from "ag-grid-react";
+import { useCallback, useEffect, useMemo, useRef, useState, type ClipboardEvent } from "react";
+import type { CalcResult } from "@/calc/index";
+import type { TSchedule, TSheet } from "@/schemas/schedule";
+import type { UnitSystem } from "@/units/units";
+import type { Row } from "@/components/schedule/schedule-cache";
+import { sheetColumnDefs } from "./column-defs";
+import { TOTALS_ID, type GridContext } from "./grid-context";
+import { gridTheme } from "./grid-theme";
+import "./schedule-grid.css";
+
+ModuleRegistry.registerModules([AllCommunityModule]);
+
+export interface PasteRequest {
+  text: string;
+  rows: Row[];
+  startRow: number;
+  columnIds: string[];
+  startColumn: string;
+}
+
+export interface ScheduleGridProps {
+  sheet: TSheet;
+  schedule: TSchedule;
+  results: Map<string, CalcResult>;
+  totals: Record<string, number>;
+  system: UnitSystem;
+  canEdit: boolean;
+  cellErrors: Map<string, string>;
+  onEdit: (row: Row, field: string, shown: unknown) => void;
+  onPaste: (p: PasteRequest) => void;
+  onSelection: (ids: string[]) => void;
+  onReady?: (api: GridApi<Row>) => void;
+}
+
+/**
+ * One sheet of the schedule in AG Grid (community): typed editors in the person's units, computed
+ * columns read from the browser's recalculation, a pinned totals row, sorting, filtering,
+ * keyboard navigation, row selection — and paste of a tab-separated block, read here because the
+ * community grid has no clipboard module.
+ */
+export function ScheduleGrid(props: ScheduleGridProps) {
+  const { sheet, schedule, results, totals, system, canEdit, cellErrors } = props;
+  const [api, setApi] = useState<GridApi<Row> | null>(null);
+  const rows = (sheet === "surfaces" ? schedule.surfaces : schedule.duct_runs) as unknown as Row[];
+  const context = useRef<GridContext>({ sheet, system, canEdit, results, cellErrors, totals, rowCount: rows.length, buildups: new Map() }).current;
+  Object.assign(context, { sheet, system, canEdit, results, cellErrors, totals, rowCount: rows.length, buildups: new Map(schedule.buildups.map((b) => [b.id, b])) });
+
+  const { zones, buildups, project } = schedule;
+  const columnDefs = useMemo(
+    () => sheetColumnDefs(sheet, { ...schedule, zones, buildups, project } as TSchedule, system),
+    // Rebuilt when the pick-lists, the default method or the units change, not on every edit.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+    [sheet, zones, buildups, project.default_method, system],
+  );
+  const pinned = useMemo(() => [{ id: TOTALS_ID, label: `Total of ${rows.length} ${rows.length === 1 ? "row" : "rows"}` } as unknown as Row], [rows.length]);
+
+  useEffect(() => {
+    api?.refreshCells();
+  }, [api, results, totals, cellErrors, system]);
+
+  const onGridReady = useCallback((e: GridReadyEvent<Row>) => {
+    setApi(e.api);
+    props.onReady?.(e.api);
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, []);
+
+  const onCellEditRequest = useCallback((e: CellEditRequestEvent<Row>) => props.onEdit(e.data, e.colDef.colId ?? "", e.newValue), [props]);
+
+  const onPaste = (e: ClipboardEvent<HTMLDivElement>) => {
+    if (!api || !canEdit || api.getEditingCells().length > 0) return;
+    const focused = api.getFocusedCell();
+    const text = e.clipboardData.getData("text/plain");
+    if (!focused || focused.rowPinned || !text) return;
+    e.preventDefault();
+    const shown: Row[] = [];
+    api.forEachNodeAfterFilterAndSort((n) => n.data && shown.push(n.data));
+    const columnIds = api.getAllDisplayedColumns().map((c) => c.getColId()).filter((id) => id !== "ag-Grid-SelectionColumn");
+    props.onPaste({ text, rows: shown, startRow: focused.rowIndex, columnIds, startColumn: focused.column.getColId() });
+  };
+
+  return (
+    <div className="fs-grid h-[34rem] min-w-0" onPaste={onPaste} data-sheet={sheet}>
+      <AgGridReact<Row>
+        theme={gridTheme}
+        rowData={rows}
+        columnDefs={columnDefs}
+        context={context}
+        getRowId={(p) => p.data.id}
+        readOnlyEdit
+        onCellEditRequest={onCellEditRequest}
+        pinnedBottomRowData={pinned}
+        defaultColDef={{ sortable: true, filter: true, resizable: true, wrapHeaderText: true }}
+        selectionColumnDef={{ pinned: "left", width: 48, resizable: false, sortable: false }}
+        rowSelection={canEdit ? { mode: "multiRow", checkboxes: true, headerCheckbox: true, enableClickSelection: false } : undefined}
+        onSelectionChanged={(e) => props.onSelection(e.api.getSelectedRows().map((r) => r.id))}
+        singleClickEdit={false}
+        stopEditingWhenCellsLoseFocus
+        enterNavigatesVerticallyAfterEdit
+        tooltipShowDelay={250}
+        onGridReady={onGridReady}
+        animateRows={false}
+        suppressColumnVirtualisation
+      />
+    </div>
+  );
+}

@@ -1,0 +1,72 @@
+"use client";
+
+import { QueryClient, QueryClientProvider, useQuery } from "@tanstack/react-query";
+import { createContext, useCallback, useContext, useMemo, useState, type ReactNode } from "react";
+import type { TSchedule } from "@/schemas/schedule";
+import type { UnitSystem } from "@/units/units";
+import { api } from "./api-client";
+
+export interface Notice {
+  id: number;
+  tone: "error" | "ok";
+  message: string;
+  lines?: string[];
+}
+
+interface ProjectContext {
+  projectId: string;
+  canEdit: boolean;
+  /** Units shown: the project's, or a reader's own choice for this visit. */
+  system: UnitSystem;
+  /** A reader's own choice for this visit; null follows the project. */
+  setSystem: (s: UnitSystem | null) => void;
+  notices: Notice[];
+  notify: (n: Omit<Notice, "id">) => void;
+  dismiss: (id: number) => void;
+}
+
+const Ctx = createContext<ProjectContext | null>(null);
+export const scheduleKey = (projectId: string) => ["schedule", projectId] as const;
+
+/**
+ * The project's data for every page under /projects/[id]: one TanStack Query cache seeded with
+ * the schedule the server rendered, the units shown, and the notices (errors and confirmations).
+ */
+export function ScheduleProvider({ initial, canEdit, children }: { initial: TSchedule; canEdit: boolean; children: ReactNode }) {
+  const [client] = useState(() => new QueryClient({ defaultOptions: { queries: { staleTime: 30_000, refetchOnWindowFocus: false } } }));
+  useState(() => client.setQueryData(scheduleKey(initial.project.id), initial));
+  return (
+    <QueryClientProvider client={client}>
+      <ProjectState projectId={initial.project.id} canEdit={canEdit} unitSystem={initial.project.unit_system}>
+        {children}
+      </ProjectState>
+    </QueryClientProvider>
+  );
+}
+
+function ProjectState({ projectId, canEdit, unitSystem, children }: { projectId: string; canEdit: boolean; unitSystem: UnitSystem; children: ReactNode }) {
+  const [override, setOverride] = useState<UnitSystem | null>(null);
+  const [notices, setNotices] = useState<Notice[]>([]);
+  const { data } = useQuery({ queryKey: scheduleKey(projectId), queryFn: () => api<TSchedule>("GET", `/api/projects/${projectId}/schedule`) });
+  const stored = data?.project.unit_system ?? unitSystem;
+  const notify = useCallback((n: Omit<Notice, "id">) => setNotices((all) => [...all.slice(-3), { ...n, id: Date.now() + Math.random() }]), []);
+  const dismiss = useCallback((id: number) => setNotices((all) => all.filter((n) => n.id !== id)), []);
+  const value = useMemo(
+    () => ({ projectId, canEdit, system: override ?? stored, setSystem: setOverride, notices, notify, dismiss }),
+    [projectId, canEdit, override, stored, notices, notify, dismiss],
+  );
+  return <Ctx.Provider value={value}>{children}</Ctx.Provider>;
+}
+
+export function useProject(): ProjectContext {
+  const c = useContext(Ctx);
+  if (!c) throw new Error("useProject outside ScheduleProvider");
+  return c;
+}
+
+/** The schedule, always present (seeded from the server render). */
+export function useSchedule(): TSchedule {
+  const { projectId } = useProject();
+  const q = useQuery({ queryKey: scheduleKey(projectId), queryFn: () => api<TSchedule>("GET", `/api/projects/${projectId}/schedule`) });
+  return q.data as TSchedule;
+}

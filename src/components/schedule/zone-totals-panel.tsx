@@ -1,0 +1,102 @@
+"use client";
+
+import { useDeferredValue, useMemo, useState } from "react";
+import type { ScheduleResults } from "@/calc/index";
+import type { TSchedule } from "@/schemas/schedule";
+import { resultsFor } from "@/schedule/engine-schedule";
+import { formatQuantity } from "@/units/format";
+import { toDisplay, unitLabel } from "@/units/units";
+import { ZoneTotalsChart } from "@/components/charts/zone-totals-chart";
+import { EngineeringCaution } from "@/components/engineering-caution";
+import { useProject } from "./schedule-context";
+
+/**
+ * Zone totals beside the grid: heat loss and gain of each zone in the chosen design case, in W
+ * and W/m² of floor area, a bar chart of them, and each zone's governing figure in every case.
+ */
+export function ZoneTotalsPanel({ schedule, results }: { schedule: TSchedule; results: ScheduleResults }) {
+  const { system } = useProject();
+  const W = unitLabel("power", system);
+  const Wm2 = unitLabel("heat_flux", system);
+  const p = (v: number) => formatQuantity("power", v, system, 0);
+  const f = (v: number | null) => (v === null ? "—" : formatQuantity("heat_flux", v, system, 1));
+  // The other cases are computed only while their table is open, and after the grid has
+  // repainted (deferred), so neither the first paint nor typing waits for them.
+  const [open, setOpen] = useState(false);
+  const later = useDeferredValue(schedule);
+  const byCase = useMemo(() => (open ? later.design_cases.map((dc) => ({ dc, zones: resultsFor(later, dc).zones })) : []), [later, open]);
+  const bars = results.zones.map((z) => ({ zone: z.name, loss: toDisplay("power", z.loss_W, system), gain: toDisplay("power", z.gain_W, system) }));
+  const total = results.zones.reduce((a, z) => ({ loss: a.loss + z.loss_W, gain: a.gain + z.gain_W }), { loss: 0, gain: 0 });
+
+  return (
+    <section aria-label="Zone totals" className="grid content-start gap-4 rounded-panel border border-line bg-surface p-4 shadow-panel">
+      <header>
+        <h2 className="text-lead font-semibold">Zone totals</h2>
+        <p className="text-small text-muted">{schedule.design_cases.find((d) => d.id === results.design_case_id)?.name}</p>
+      </header>
+      <table className="w-full text-small" aria-label="Zone totals for the design case">
+        <thead className="text-micro uppercase text-muted">
+          <tr>
+            <th className="py-1 text-left font-medium">Zone</th>
+            <th className="py-1 text-right font-medium">Loss {W}</th>
+            <th className="py-1 text-right font-medium">{Wm2}</th>
+            <th className="py-1 text-right font-medium">Gain {W}</th>
+            <th className="py-1 text-right font-medium">{Wm2}</th>
+          </tr>
+        </thead>
+        <tbody>
+          {results.zones.map((z) => (
+            <tr key={z.zone_id} className="border-t border-line" data-zone={z.name}>
+              <th scope="row" className="py-1 pr-2 text-left font-medium">
+                {z.name}
+              </th>
+              <td className="py-1 text-right text-frost" data-total="loss">{p(z.loss_W)}</td>
+              <td className="py-1 text-right text-muted">{f(z.loss_W_m2)}</td>
+              <td className="py-1 text-right text-heat" data-total="gain">{p(z.gain_W)}</td>
+              <td className="py-1 text-right text-muted">{f(z.gain_W_m2)}</td>
+            </tr>
+          ))}
+          <tr className="border-t-2 border-line font-semibold">
+            <th scope="row" className="py-1 text-left">All zones</th>
+            <td className="py-1 text-right text-frost">{p(total.loss)}</td>
+            <td />
+            <td className="py-1 text-right text-heat">{p(total.gain)}</td>
+            <td />
+          </tr>
+        </tbody>
+      </table>
+      <ZoneTotalsChart data={bars} unit={W} />
+      <details className="text-small" onToggle={(e) => setOpen(e.currentTarget.open)}>
+        <summary className="cursor-pointer font-medium">Every design case</summary>
+        <table className="mt-2 w-full" aria-label="Zone totals in every design case">
+          <thead className="text-micro uppercase text-muted">
+            <tr>
+              <th className="py-1 text-left font-medium">Zone</th>
+              {byCase.map(({ dc }) => (
+                <th key={dc.id} className="py-1 text-right font-medium" title={dc.name}>
+                  {dc.kind === "heating" ? "Loss" : "Gain"} · {dc.name.split(",")[0]}
+                </th>
+              ))}
+            </tr>
+          </thead>
+          <tbody>
+            {schedule.zones.map((zone) => (
+              <tr key={zone.id} className="border-t border-line">
+                <th scope="row" className="py-1 pr-2 text-left font-medium">{zone.name}</th>
+                {byCase.map(({ dc, zones }) => {
+                  const z = zones.find((x) => x.zone_id === zone.id);
+                  return (
+                    <td key={dc.id} className={`py-1 text-right ${dc.kind === "heating" ? "text-frost" : "text-heat"}`}>
+                      {z ? p(dc.kind === "heating" ? z.loss_W : z.gain_W) : "—"}
+                    </td>
+                  );
+                })}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </details>
+      <EngineeringCaution className="border-t border-line pt-3 text-micro" />
+    </section>
+  );
+}
