@@ -2,6 +2,7 @@
 // zone total in place, a refused edit says why and saves nothing, a pasted block becomes one
 // bulk change, a CSV import runs its progress bar to the end, and IP units show °F and Btu/h.
 import { expect as baseExpect, test, type Page } from "@playwright/test";
+import knexFactory, { type Knex } from "knex";
 
 const PASSWORD = process.env.DEMO_PASSWORD || "filmsheet-demo";
 // The project page loads the grid, the engine and the chart: give a busy two-core machine room.
@@ -86,24 +87,43 @@ test("a 3×4 block pasted from a spreadsheet lands in three rows and four column
   await expect(cell(page, ids[2]!, "azimuth_deg")).toHaveText("210");
 });
 
-test("a CSV import runs its progress bar to the end and adds the rows", async ({ page }) => {
-  await openDemoSchedule(page);
-  await expect(page.getByRole("tab", { name: /Surfaces/ })).toContainText("42");
-  await page.getByRole("button", { name: "Import…" }).click();
-  const csv = [
-    "Label,Zone,Build-up,Area (m²),Tilt (°),Azimuth (°),Centroid height (m),Length along the wind (m),Panel height (m),Method",
-    "Imported north panel,Study gallery,Copper-clad gallery wall,9.5,90,0,6,4,3.6,",
-    "Imported roof light kerb,Reading room,Warm-deck flat roof,2.4,30,180,5,2,1,McAdams wind formula",
-  ].join("\n");
-  await page.getByLabel("File").setInputFiles({ name: "gallery-additions.csv", mimeType: "text/csv", buffer: Buffer.from(csv) });
-  await page.getByRole("button", { name: "Import", exact: true }).click();
-  await expect(page.getByRole("progressbar", { name: "Import progress" })).toHaveAttribute("aria-valuenow", "100");
-  await expect(page.getByText("Imported 2 rows into Surfaces").first()).toBeVisible();
-  await expect(page.getByRole("tab", { name: /Surfaces/ })).toContainText("44");
-  // Saved, with the named method: read back from the API in the same session.
-  const projectId = page.url().split("/").pop();
-  const saved = await page.evaluate(async (id) => (await (await fetch(`/api/projects/${id}/surfaces`)).json()).items, projectId);
-  expect(saved.find((r: { label: string }) => r.label === "Imported roof light kerb")).toMatchObject({ area_m2: 2.4, tilt_deg: 30, method: "mcadams" });
+test.describe("on the paid plan", () => {
+  // The demo schedule (50 rows) is beyond the free plan's 40: adding rows needs a paid firm.
+  // Set straight in the database, as the billing tests' fixtures do, and put back afterwards.
+  let db: Knex;
+  let before: Record<string, unknown> | undefined;
+  test.beforeAll(async () => {
+    db = knexFactory({ client: "pg", connection: process.env.E2E_DATABASE_URL, pool: { min: 0, max: 1 } });
+    const firm = await db("firms").where({ slug: "tarnbrook-sill" }).first("id");
+    before = await db("firm_billing").where({ firm_id: firm.id }).first();
+    await db("firm_billing").insert({ firm_id: firm.id, subscription_status: "active", subscription_seats: 50 }).onConflict("firm_id").merge({ subscription_status: "active", subscription_seats: 50 });
+  });
+  test.afterAll(async () => {
+    const firm = await db("firms").where({ slug: "tarnbrook-sill" }).first("id");
+    await db("firm_billing").where({ firm_id: firm.id }).delete();
+    if (before) await db("firm_billing").insert(before);
+    await db.destroy();
+  });
+
+  test("a CSV import runs its progress bar to the end and adds the rows", async ({ page }) => {
+    await openDemoSchedule(page);
+    await expect(page.getByRole("tab", { name: /Surfaces/ })).toContainText("42");
+    await page.getByRole("button", { name: "Import…" }).click();
+    const csv = [
+      "Label,Zone,Build-up,Area (m²),Tilt (°),Azimuth (°),Centroid height (m),Length along the wind (m),Panel height (m),Method",
+      "Imported north panel,Study gallery,Copper-clad gallery wall,9.5,90,0,6,4,3.6,",
+      "Imported roof light kerb,Reading room,Warm-deck flat roof,2.4,30,180,5,2,1,McAdams wind formula",
+    ].join("\n");
+    await page.getByLabel("File").setInputFiles({ name: "gallery-additions.csv", mimeType: "text/csv", buffer: Buffer.from(csv) });
+    await page.getByRole("button", { name: "Import", exact: true }).click();
+    await expect(page.getByRole("progressbar", { name: "Import progress" })).toHaveAttribute("aria-valuenow", "100");
+    await expect(page.getByText("Imported 2 rows into Surfaces").first()).toBeVisible();
+    await expect(page.getByRole("tab", { name: /Surfaces/ })).toContainText("44");
+    // Saved, with the named method: read back from the API in the same session.
+    const projectId = page.url().split("/").pop();
+    const saved = await page.evaluate(async (id) => (await (await fetch(`/api/projects/${id}/surfaces`)).json()).items, projectId);
+    expect(saved.find((r: { label: string }) => r.label === "Imported roof light kerb")).toMatchObject({ area_m2: 2.4, tilt_deg: 30, method: "mcadams" });
+  });
 });
 
 test("switching the project to IP units shows °F and Btu/h", async ({ page }) => {
