@@ -1,16 +1,12 @@
 // The calculation report as a reader gets it: text extracted from the PDF with pdfjs-dist must
 // carry the cover, every zone total and every row label, with the engine's own numbers.
-import { fileURLToPath } from "node:url";
-import { getDocument } from "pdfjs-dist/legacy/build/pdf.mjs";
 import { describe, expect, test } from "vitest";
 import { scheduleResults } from "../../src/calc/index";
 import { buildReport } from "../../src/report/build-report";
 import { num } from "../../src/report/format";
 import type { ReportMeta } from "../../src/report/types";
+import { pdfPages } from "../support/pdf-text";
 import { SAMPLE_CASES, sampleSchedule } from "../support/sample-schedule";
-
-// pdfjs needs the metrics of the 14 standard fonts the report uses; they ship with pdfjs-dist.
-const FONTS = fileURLToPath(new URL("../../node_modules/pdfjs-dist/standard_fonts/", import.meta.url));
 
 const meta: ReportMeta = {
   projectName: "Larchfield Community Library extension", projectReference: "TS-2417", siteDescription: "Larchfield; suburban; 85 m",
@@ -18,16 +14,7 @@ const meta: ReportMeta = {
   status: "draft", revision: null, unitSystem: "SI", watermark: true,
 };
 
-async function pages(pdf: Uint8Array): Promise<string[]> {
-  const doc = await getDocument({ data: pdf.slice(), isEvalSupported: false, standardFontDataUrl: FONTS }).promise;
-  const out: string[] = [];
-  for (let i = 1; i <= doc.numPages; i++) {
-    const page = await doc.getPage(i);
-    const content = await page.getTextContent();
-    out.push(content.items.map((it) => ("str" in it ? it.str : "")).join(" ").replace(/\s+/g, " "));
-  }
-  return out;
-}
+const pages = pdfPages;
 
 describe("calculation report", () => {
   const schedule = sampleSchedule(24, 4);

@@ -69,6 +69,8 @@ export const SCHEDULE_ENTRIES: MatrixEntry[] = [
   { file: "projects/[projectId]/route.ts", method: "DELETE", request: async () => ({ path: `/api/projects/${await newProject()}?version=1` }), expect: write(200) },
   { file: "projects/[projectId]/schedule/route.ts", method: "GET", request: async () => ({ path: `${await base()}/schedule` }), expect: read },
   { file: "projects/[projectId]/results/route.ts", method: "GET", request: async () => ({ path: `${await base()}/results?case=${(await demoIds()).caseId}` }), expect: read },
+  // The draft report: people who work on the schedule; viewers read issued revisions only.
+  { file: "projects/[projectId]/report/route.ts", method: "GET", request: async () => ({ path: `${await base()}/report` }), expect: { ...read, viewer: 403 } },
   { file: "projects/[projectId]/export/route.ts", method: "GET", request: async () => ({ path: `${await base()}/export?format=csv&sheet=surfaces` }), expect: read },
   {
     file: "projects/[projectId]/bulk/route.ts",

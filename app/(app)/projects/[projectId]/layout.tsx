@@ -21,7 +21,7 @@ export default async function ProjectLayout({ children, params }: { children: Re
   return (
     <ScheduleProvider initial={schedule} canEdit={hasAnyRole(actor, ["consultant"])}>
       <div className="fs-project grid gap-5">
-        <ProjectHeader />
+        <ProjectHeader canReport={hasAnyRole(actor, ["admin", "consultant", "checker"])} />
         {children}
       </div>
     </ScheduleProvider>

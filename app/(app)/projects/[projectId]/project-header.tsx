@@ -16,7 +16,7 @@ const TABS = [
 ];
 
 /** The project's name and site in one line, and its sections. */
-export function ProjectHeader() {
+export function ProjectHeader({ canReport }: { canReport: boolean }) {
   const s = useSchedule();
   const { system, canEdit } = useProject();
   const path = usePathname();
@@ -38,6 +38,16 @@ export function ProjectHeader() {
             {canEdit ? "" : " · read only"}
           </p>
         </div>
+        {canReport && (
+          // A plain link: the browser downloads the PDF the server builds from the stored schedule.
+          <a
+            href={`/api/projects/${p.id}/report`}
+            download
+            className="rounded-chip border border-line bg-surface px-3 py-1.5 text-small font-semibold hover:bg-sunken"
+          >
+            Draft report (PDF)
+          </a>
+        )}
       </div>
       <nav aria-label="Project" className="flex gap-1 overflow-x-auto border-b border-line">
         {TABS.map((t) => {

@@ -1,0 +1,31 @@
+// The consultant downloads the demo project's draft calculation report from the project page.
+import { expect, test } from "@playwright/test";
+
+const PASSWORD = process.env.DEMO_PASSWORD || "filmsheet-demo";
+test.describe.configure({ timeout: 90_000 });
+
+test("the consultant downloads the draft report as a PDF", async ({ page }) => {
+  await page.goto("/sign-in?callbackUrl=%2Fprojects");
+  await page.getByLabel("E-mail", { exact: true }).fill("consultant@demo.filmsheet.test");
+  await page.getByLabel("Password").fill(PASSWORD);
+  await page.getByRole("button", { name: "Sign in", exact: true }).click();
+  await page.getByRole("link", { name: "TS-2417" }).click();
+  const [download] = await Promise.all([page.waitForEvent("download", { timeout: 60_000 }), page.getByRole("link", { name: "Draft report (PDF)" }).click()]);
+  expect(download.suggestedFilename()).toBe("TS-2417-draft-report.pdf");
+  const stream = await download.createReadStream();
+  const chunks: Buffer[] = [];
+  for await (const c of stream) chunks.push(c as Buffer);
+  const pdf = Buffer.concat(chunks);
+  expect(pdf.subarray(0, 5).toString("latin1")).toBe("%PDF-");
+  expect(pdf.length).toBeGreaterThan(50_000);
+});
+
+test("the viewer is not offered the draft report", async ({ page }) => {
+  await page.goto("/sign-in?callbackUrl=%2Fprojects");
+  await page.getByLabel("E-mail", { exact: true }).fill("viewer@demo.filmsheet.test");
+  await page.getByLabel("Password").fill(PASSWORD);
+  await page.getByRole("button", { name: "Sign in", exact: true }).click();
+  await page.getByRole("link", { name: "TS-2417" }).click();
+  await expect(page.getByRole("heading", { level: 1 })).toBeVisible();
+  await expect(page.getByRole("link", { name: "Draft report (PDF)" })).toHaveCount(0);
+});
