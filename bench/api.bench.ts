@@ -1,0 +1,183 @@
+// Benchmark of the schedule API (npm run bench:api) with autocannon against the production
+// build on loopback, on a private PostgreSQL cluster of its own (.data/pg-bench, fsync on):
+//   1. GET /api/projects/:id/results for a 5,000-row project (4,000 surfaces, 1,000 duct runs),
+//      one client after another: median and p95 (goal: median ≤ 300 ms);
+//   2. PATCH of one surface at 20 concurrent clients, each on a different row with its current
+//      version: median and p95 (goal: p95 ≤ 50 ms);
+//   3. POST /import of a 10,000-row CSV into an empty project, three times (goal: ≤ 10 s).
+// It prints figures against the goals; it asserts nothing.
+import autocannon from "autocannon";
+import { createHash, randomBytes } from "node:crypto";
+import { performance } from "node:perf_hooks";
+import knexFactory from "knex";
+import { clusterDir, databaseUrl, ensureBuild, ensureDatabase, ensureNodeModules, ensurePostgres, knex, startCluster, stopCluster } from "../scripts/lib/bootstrap.mjs";
+import { assertPortFree, stopService } from "../scripts/lib/proc.mjs";
+import { DEFAULT_DEMO_PASSWORD, portFromEnv, startApp } from "../scripts/lib/services.mjs";
+
+const PG_PORT = portFromEnv("BENCH_PG_PORT", 54369);
+const APP_PORT = portFromEnv("BENCH_APP_PORT", 3400);
+const SECONDS = Number(process.env.BENCH_SECONDS ?? 15);
+const BASE = `http://127.0.0.1:${APP_PORT}`;
+const GOALS = { resultsMedianMs: 300, updateP95Ms: 50, importSeconds: 10 };
+
+/** Small deterministic generator (mulberry32), so every run sends the same schedule. */
+function rng(seed: number): () => number {
+  let a = seed >>> 0;
+  return () => {
+    a = (a + 0x6d2b79f5) >>> 0;
+    let t = Math.imul(a ^ (a >>> 15), a | 1);
+    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
+    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
+  };
+}
+const r = rng(2417);
+const pick = <T>(xs: readonly T[]): T => xs[Math.floor(r() * xs.length)]!;
+const between = (lo: number, hi: number, d = 2) => (lo + (hi - lo) * r()).toFixed(d);
+
+const ZONES = ["Hall", "Offices north", "Offices south", "Plant deck"];
+const BUILDUPS = [
+  { name: "Rainscreen wall", layers: [{ material: "Mineral wool", thickness_m: 0.2, k_W_mK: 0.038 }], R_direct_m2K_W: null, absorptance: 0.55, emissivity: 0.9 },
+  { name: "Flat roof", layers: [{ material: "PIR", thickness_m: 0.16, k_W_mK: 0.022 }], R_direct_m2K_W: null, absorptance: 0.85, emissivity: 0.9 },
+  { name: "Spandrel", layers: [], R_direct_m2K_W: 2.2, absorptance: 0.8, emissivity: 0.84 },
+];
+const CASES = [
+  { name: "Winter, windy", kind: "heating", T_outdoor_C: -5, RH_outdoor_pct: 90, V_met_m_s: 11, wind_from_deg: 240, solar_W_m2: {} },
+  { name: "Summer, sunny", kind: "cooling", T_outdoor_C: 28, RH_outdoor_pct: 45, V_met_m_s: 4, wind_from_deg: 200, solar_W_m2: { S: 350, W: 470, horizontal: 850 } },
+  { name: "Summer, still", kind: "cooling", T_outdoor_C: 29, RH_outdoor_pct: 50, V_met_m_s: 0.5, wind_from_deg: 90, solar_W_m2: { W: 590, horizontal: 720 } },
+];
+
+function surfacesCsv(n: number): string {
+  const head = "Label,Zone,Build-up,Area (m²),Tilt (°),Azimuth (°),Centroid height (m),Length along the wind (m),Panel height (m),Method";
+  const rows = Array.from({ length: n }, (_, i) => {
+    const roof = r() < 0.2;
+    return [`Panel ${i + 1}`, pick(ZONES), roof ? "Flat roof" : pick(["Rainscreen wall", "Spandrel"]), between(2, 60), roof ? 0 : pick([90, 90, 90, 70]), pick([0, 45, 90, 135, 180, 225, 270, 315]), between(0.5, 30, 1), between(1, 12, 1), between(0.8, 4, 1), pick(["", "", "", "ISO 6946 linear", "McAdams wind formula"])].join(",");
+  });
+  return [head, ...rows].join("\n");
+}
+
+function ductsCsv(n: number): string {
+  const head = "Label,Zone,Shape,Diameter (mm),Width (mm),Height (mm),Length (m),Airflow (m³/s),Entering air heating (°C),Entering air cooling (°C),Location,Surrounding air (°C),Elevation (m),Insulation (mm),Insulation conductivity (W/(m·K)),Jacket emissivity,Condensation margin (K)";
+  const rows = Array.from({ length: n }, (_, i) => {
+    const round = r() < 0.5;
+    const outdoor = r() < 0.5;
+    return [`Duct ${i + 1}`, pick(ZONES), round ? "Round" : "Rectangular", round ? pick([250, 315, 400, 500]) : "", round ? "" : pick([400, 600, 800]), round ? "" : pick([250, 300, 400]), between(4, 40, 1), between(0.2, 1.6), 32, 13, outdoor ? "Outdoors" : "Indoors", outdoor ? "" : between(16, 24, 1), outdoor ? between(4, 12, 1) : "", pick([0, 25, 50]), 0.035, pick([0.1, 0.9]), 1].join(",");
+  });
+  return [head, ...rows].join("\n");
+}
+
+const median = (xs: number[]) => quantile(xs, 0.5);
+function quantile(xs: number[], q: number): number {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.min(s.length - 1, Math.max(0, Math.ceil(q * s.length) - 1))]!;
+}
+
+async function main() {
+  ensureNodeModules();
+  ensurePostgres();
+  await assertPortFree(APP_PORT, "bench app; set BENCH_APP_PORT");
+  const dir = clusterDir("pg-bench");
+  await startCluster({ dir, port: PG_PORT });
+  const url = databaseUrl(PG_PORT, "filmsheet_bench");
+  await ensureDatabase(url, { fresh: true });
+  const env = { DATABASE_URL: url, NODE_ENV: "test", DEMO_PASSWORD: process.env.DEMO_PASSWORD ?? DEFAULT_DEMO_PASSWORD };
+  knex(["migrate:latest"], env);
+  knex(["seed:run"], env);
+  ensureBuild();
+  const db = knexFactory({ client: "pg", connection: url, pool: { min: 0, max: 2 } });
+  const app = startApp(APP_PORT, { DATABASE_URL: url, APP_URL: `http://localhost:${APP_PORT}`, AUTH_SECRET: randomBytes(32).toString("base64url"), SMTP_URL: "smtp://127.0.0.1:1?ignoreTLS=true", JOBS_WORKER: "off" });
+  try {
+    await app.ready();
+    // A consultant's API token and a paid plan (the free plan stops at 40 rows) for the demo firm.
+    const firm = await db("firms").where({ slug: "tarnbrook-sill" }).first("id");
+    await db("firm_billing").insert({ firm_id: firm.id, subscription_status: "active", subscription_seats: 50 }).onConflict("firm_id").merge();
+    const secret = `fst_${randomBytes(32).toString("base64url")}`;
+    await db("api_tokens").insert({ firm_id: firm.id, name: "bench", role: "consultant", token_hash: createHash("sha256").update(secret).digest("hex"), prefix: secret.slice(0, 10), expires_at: new Date(Date.now() + 86_400_000) });
+    const auth = { authorization: `Bearer ${secret}` };
+    const call = async (method: string, path: string, body?: unknown, type = "application/json") => {
+      const res = await fetch(`${BASE}${path}`, { method, headers: { ...auth, "content-type": type }, body: body === undefined ? undefined : typeof body === "string" ? body : JSON.stringify(body) });
+      const json = await res.json();
+      if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${JSON.stringify(json).slice(0, 400)}`);
+      return json;
+    };
+    const newProject = async (ref: string) => {
+      const p = await call("POST", "/api/projects", { name: `Bench ${ref}`, reference: ref, altitude_m: 80, terrain: "suburban" });
+      for (const c of CASES) await call("POST", `/api/projects/${p.id}/design-cases`, c);
+      for (const z of ZONES) await call("POST", `/api/projects/${p.id}/zones`, { name: z, floor_area_m2: 400, T_heating_C: 21, T_cooling_C: 24, RH_inside_pct: 50 });
+      for (const b of BUILDUPS) await call("POST", `/api/projects/${p.id}/buildups`, b);
+      return p.id as string;
+    };
+
+    console.log(`\nschedule API benchmark, node ${process.version}, app on ${BASE}, ${SECONDS} s per load test`);
+    const big = await newProject("BENCH-5000");
+    const t0 = performance.now();
+    await call("POST", `/api/projects/${big}/import?sheet=surfaces`, surfacesCsv(4000), "text/csv");
+    await call("POST", `/api/projects/${big}/import?sheet=duct_runs`, ductsCsv(1000), "text/csv");
+    console.log(`set-up: 5,000 rows imported in ${((performance.now() - t0) / 1000).toFixed(1)} s`);
+    const caseId = (await call("GET", `/api/projects/${big}/design-cases`)).items.find((c: { kind: string }) => c.kind === "cooling").id;
+    for (let i = 0; i < 3; i++) await call("GET", `/api/projects/${big}/results?case=${caseId}`); // warm-up
+
+    const results = await load({ title: "GET results, 5,000 rows, 1 client", connections: 1, headers: auth, requests: [{ method: "GET", path: `/api/projects/${big}/results?case=${caseId}` }] });
+    console.log(`  median ${results.median.toFixed(0)} ms, p95 ${results.p95.toFixed(0)} ms, ${results.count} requests, ${results.non2xx} not 2xx — goal: median ≤ ${GOALS.resultsMedianMs} ms`);
+    const results4 = await load({ title: "GET results, 5,000 rows, 4 clients", connections: 4, headers: auth, requests: [{ method: "GET", path: `/api/projects/${big}/results?case=${caseId}` }] });
+    console.log(`  median ${results4.median.toFixed(0)} ms, p95 ${results4.p95.toFixed(0)} ms, ${results4.count} requests, ${results4.non2xx} not 2xx`);
+
+    // One row per request, never two requests on one row at once; each sends the version it last saw.
+    const rows: { id: string; version: number }[] = (await db("surfaces").where({ project_id: big }).select("id", "version")).map((x) => ({ ...x }));
+    let next = 0;
+    const update = await load({
+      title: "PATCH one surface, 20 clients",
+      connections: 20,
+      headers: auth,
+      requests: [
+        {
+          method: "PATCH",
+          headers: { ...auth, "content-type": "application/json" },
+          setupRequest: (req: Record<string, unknown>, ctx: Record<string, unknown>) => {
+            const row = rows[next++ % rows.length]!;
+            ctx.row = row;
+            return { ...req, path: `/api/projects/${big}/surfaces/${row.id}`, body: JSON.stringify({ version: row.version, area_m2: Number(between(2, 60)) }) };
+          },
+          onResponse: (status: number, body: string, ctx: Record<string, unknown>) => {
+            if (status === 200) (ctx.row as { version: number }).version = JSON.parse(body).version;
+          },
+        },
+      ],
+    });
+    console.log(`  median ${update.median.toFixed(1)} ms, p95 ${update.p95.toFixed(1)} ms, ${update.count} requests (${(update.count / SECONDS).toFixed(0)}/s), ${update.non2xx} not 2xx — goal: p95 ≤ ${GOALS.updateP95Ms} ms`);
+
+    console.log("POST import, 10,000-row CSV into an empty project (3 runs)");
+    const csv = surfacesCsv(10_000);
+    const times: number[] = [];
+    for (let i = 1; i <= 3; i++) {
+      const p = await newProject(`BENCH-IMPORT-${i}`);
+      const t = performance.now();
+      const out = await call("POST", `/api/projects/${p}/import?sheet=surfaces`, csv, "text/csv");
+      times.push((performance.now() - t) / 1000);
+      if (out.imported.surfaces !== 10_000) throw new Error(`imported ${JSON.stringify(out.imported)}`);
+    }
+    console.log(`  ${times.map((t) => `${t.toFixed(2)} s`).join(", ")}; median ${median(times).toFixed(2)} s (${(csv.length / 1e6).toFixed(1)} MB) — goal: ≤ ${GOALS.importSeconds} s`);
+  } finally {
+    await db.destroy();
+    await stopService(app.service);
+    stopCluster(dir);
+  }
+}
+
+/** One autocannon run; latencies of every response are kept, for an exact median and p95. */
+async function load(opts: { title: string; connections: number; headers: Record<string, string>; requests: object[] }) {
+  console.log(opts.title);
+  const latencies: number[] = [];
+  let non2xx = 0;
+  const instance = autocannon({ url: BASE, connections: opts.connections, duration: SECONDS, headers: opts.headers, requests: opts.requests as never });
+  instance.on("response", (_c: unknown, status: number, _b: number, ms: number) => {
+    latencies.push(ms);
+    if (status < 200 || status > 299) non2xx++;
+  });
+  await instance;
+  return { median: median(latencies), p95: quantile(latencies, 0.95), count: latencies.length, non2xx };
+}
+
+main().catch((error) => {
+  console.error(error);
+  process.exit(1);
+});

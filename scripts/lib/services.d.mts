@@ -1,0 +1,5 @@
+// Types for the parts of services.mjs the TypeScript benchmarks use.
+import type { Service } from "./proc.mjs";
+export const DEFAULT_DEMO_PASSWORD: string;
+export function portFromEnv(name: string, fallback: number): number;
+export function startApp(port: number, env: Record<string, string>): { service: Service; ready: () => Promise<unknown> };
