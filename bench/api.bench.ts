@@ -8,6 +8,8 @@
 // It prints figures against the goals; it asserts nothing.
 import autocannon from "autocannon";
 import { createHash, randomBytes } from "node:crypto";
+import { readFileSync, readdirSync } from "node:fs";
+import { cpus, loadavg } from "node:os";
 import { performance } from "node:perf_hooks";
 import knexFactory from "knex";
 import { clusterDir, databaseUrl, ensureBuild, ensureDatabase, ensureNodeModules, ensurePostgres, knex, startCluster, stopCluster } from "../scripts/lib/bootstrap.mjs";
@@ -19,6 +21,7 @@ const APP_PORT = portFromEnv("BENCH_APP_PORT", 3400);
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 15);
 const BASE = `http://127.0.0.1:${APP_PORT}`;
 const GOALS = { resultsMedianMs: 300, updateP95Ms: 50, importSeconds: 10 };
+let appGroup = 0;
 
 /** Small deterministic generator (mulberry32), so every run sends the same schedule. */
 function rng(seed: number): () => number {
@@ -65,6 +68,24 @@ function ductsCsv(n: number): string {
   return [head, ...rows].join("\n");
 }
 
+/**
+ * CPU seconds used so far by the app's processes (its process group, from /proc): load tests
+ * divide it by requests served, a figure that other work on a shared machine does not inflate.
+ */
+function groupCpuSeconds(pgid: number): number {
+  let ticks = 0;
+  for (const pid of readdirSync("/proc").filter((d) => /^\d+$/.test(d))) {
+    try {
+      const stat = readFileSync(`/proc/${pid}/stat`, "utf8");
+      const f = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+      if (Number(f[2]) === pgid) ticks += Number(f[11]) + Number(f[12]);
+    } catch {
+      // the process ended while we looked
+    }
+  }
+  return ticks / 100; // USER_HZ is 100 on Linux
+}
+
 const median = (xs: number[]) => quantile(xs, 0.5);
 function quantile(xs: number[], q: number): number {
   const s = [...xs].sort((a, b) => a - b);
@@ -87,6 +108,7 @@ async function main() {
   const app = startApp(APP_PORT, { DATABASE_URL: url, APP_URL: `http://localhost:${APP_PORT}`, AUTH_SECRET: randomBytes(32).toString("base64url"), SMTP_URL: "smtp://127.0.0.1:1?ignoreTLS=true", JOBS_WORKER: "off" });
   try {
     await app.ready();
+    appGroup = (app.service as unknown as { child: { pid: number } }).child.pid;
     // A consultant's API token and a paid plan (the free plan stops at 40 rows) for the demo firm.
     const firm = await db("firms").where({ slug: "tarnbrook-sill" }).first("id");
     await db("firm_billing").insert({ firm_id: firm.id, subscription_status: "active", subscription_seats: 50 }).onConflict("firm_id").merge();
@@ -121,6 +143,10 @@ async function main() {
     const results4 = await load({ title: "GET results, 5,000 rows, 4 clients", connections: 4, headers: auth, requests: [{ method: "GET", path: `/api/projects/${big}/results?case=${caseId}` }] });
     console.log(`  median ${results4.median.toFixed(0)} ms, p95 ${results4.p95.toFixed(0)} ms, ${results4.count} requests, ${results4.non2xx} not 2xx`);
 
+    // What any authenticated request costs here (token lookup, Next's handling), for comparison.
+    const me = await load({ title: "reference: GET /api/me (the token check alone), 20 clients", connections: 20, headers: auth, requests: [{ method: "GET", path: "/api/me" }] });
+    console.log(`  median ${me.median.toFixed(1)} ms, p95 ${me.p95.toFixed(1)} ms, ${me.count} requests (${(me.count / SECONDS).toFixed(0)}/s)`);
+
     // One row per request, never two requests on one row at once; each sends the version it last saw.
     const rows: { id: string; version: number }[] = (await db("surfaces").where({ project_id: big }).select("id", "version")).map((x) => ({ ...x }));
     let next = 0;
@@ -148,14 +174,17 @@ async function main() {
     console.log("POST import, 10,000-row CSV into an empty project (3 runs)");
     const csv = surfacesCsv(10_000);
     const times: number[] = [];
+    const cpuTimes: number[] = [];
     for (let i = 1; i <= 3; i++) {
       const p = await newProject(`BENCH-IMPORT-${i}`);
       const t = performance.now();
+      const c = groupCpuSeconds(appGroup);
       const out = await call("POST", `/api/projects/${p}/import?sheet=surfaces`, csv, "text/csv");
       times.push((performance.now() - t) / 1000);
+      cpuTimes.push(groupCpuSeconds(appGroup) - c);
       if (out.imported.surfaces !== 10_000) throw new Error(`imported ${JSON.stringify(out.imported)}`);
     }
-    console.log(`  ${times.map((t) => `${t.toFixed(2)} s`).join(", ")}; median ${median(times).toFixed(2)} s (${(csv.length / 1e6).toFixed(1)} MB) — goal: ≤ ${GOALS.importSeconds} s`);
+    console.log(`  ${times.map((t) => `${t.toFixed(2)} s`).join(", ")}; median ${median(times).toFixed(2)} s (${(csv.length / 1e6).toFixed(1)} MB; app CPU ${median(cpuTimes).toFixed(2)} s) — goal: ≤ ${GOALS.importSeconds} s`);
   } finally {
     await db.destroy();
     await stopService(app.service);
@@ -168,13 +197,17 @@ async function load(opts: { title: string; connections: number; headers: Record<
   console.log(opts.title);
   const latencies: number[] = [];
   let non2xx = 0;
+  const cpu0 = groupCpuSeconds(appGroup);
   const instance = autocannon({ url: BASE, connections: opts.connections, duration: SECONDS, headers: opts.headers, requests: opts.requests as never });
   instance.on("response", (_c: unknown, status: number, _b: number, ms: number) => {
     latencies.push(ms);
     if (status < 200 || status > 299) non2xx++;
   });
   await instance;
-  return { median: median(latencies), p95: quantile(latencies, 0.95), count: latencies.length, non2xx };
+  const cpuMs = ((groupCpuSeconds(appGroup) - cpu0) * 1000) / Math.max(1, latencies.length);
+  const out = { median: median(latencies), p95: quantile(latencies, 0.95), count: latencies.length, non2xx };
+  console.log(`  app CPU ${cpuMs.toFixed(1)} ms per request; machine load ${loadavg()[0]!.toFixed(1)} on ${cpus().length} cores`);
+  return out;
 }
 
 main().catch((error) => {

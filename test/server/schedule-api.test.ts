@@ -7,6 +7,7 @@ import { startAppWithSessions, type BuiltApp } from "../support/app-with-session
 import { closeTestDb, testDb } from "../support/db";
 import { makeProject, snapshot, SURFACE_VALUES, DUCT_VALUES, type FixtureProject } from "../support/schedule-fixtures";
 import { bearer, makeToken } from "../support/tokens";
+import { clearPlan } from "../support/billing";
 
 let app: BuiltApp;
 let consultant: Record<string, string>;
@@ -144,6 +145,26 @@ describe("bulk changes", () => {
     expect(res.status, res.text).toBe(200);
     expect(res.body.updated[0].row).toMatchObject({ area_m2: 20, version: 2 });
     expect(res.body.created[0].row).toMatchObject({ label: "South wall 2", position: 3, version: 1 });
+  });
+});
+
+describe("the free plan's 40 rows", () => {
+  test("a row that would be the 41st is refused with 402 (bulk and import alike) and nothing is saved", async () => {
+    // Expected limit: FREE_PLAN.rowsPerProject = 40 (src/schemas/billing.ts, the product's free plan).
+    const p = await makeProject("tarnbrook-sill");
+    await clearPlan(p.firmId);
+    const extra = Array.from({ length: 35 }, (_, i) => ({ ...SURFACE_VALUES, label: `Filler ${i}`, position: 10 + i, firm_id: p.firmId, project_id: p.projectId, zone_id: p.zoneIds[0], buildup_id: p.buildupIds.layered }));
+    await testDb()("surfaces").insert(extra);
+    const before = await snapshot(p.projectId);
+    const res = await as("post", `/api/projects/${p.projectId}/bulk`, { changes: [{ op: "create", sheet: "surfaces", values: { ...SURFACE_VALUES, zone_id: p.zoneIds[0], buildup_id: p.buildupIds.layered } }] });
+    expect(res.status).toBe(402);
+    expect(res.body.error).toMatchObject({ code: "plan_limit", details: { limit: "rows", allowed: 40, requested: 41 } });
+    const csv = "Label,Zone,Build-up,Area (m²),Tilt (°),Azimuth (°),Centroid height (m),Length along the wind (m),Panel height (m)\nX,Hall,Insulated wall,1,90,0,1,1,1";
+    const imported = await request(app.server).post(`/api/projects/${p.projectId}/import?sheet=surfaces`).set(consultant).set("content-type", "text/csv").send(csv);
+    expect(imported.status).toBe(402);
+    expect(await snapshot(p.projectId)).toEqual(before);
+    // Edits of the rows already there stay possible.
+    expect((await as("patch", `/api/projects/${p.projectId}/surfaces/${p.surfaceIds[0]}`, { version: 1, area_m2: 3 })).status).toBe(200);
   });
 });
 

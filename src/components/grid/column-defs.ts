@@ -60,7 +60,10 @@ function inputColumn(col: SheetColumn, s: TSchedule, system: UnitSystem): ColDef
           if (p.value === null || p.value === undefined) {
             if (!p.data || isTotals(p)) return "";
             const from = inherited(col, p.data, p.context);
-            return from === null ? (col.spec!.blank ? `(${col.spec!.blank})` : "") : formatShown(from, d);
+            if (from !== null) return formatShown(from, d);
+            // A section size the shape does not use is a dash; other blanks say what they mean.
+            const blank = col.spec!.blank;
+            return blank === undefined ? "" : blank.startsWith("not ") ? "—" : `(${blank})`;
           }
           return formatShown(p.value as number, d);
         },

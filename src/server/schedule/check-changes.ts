@@ -53,7 +53,7 @@ function issuesToProblems(error: z.ZodError, base: Omit<RowProblem, "field" | "m
  * build-ups named exist in this project. Returns the checked changes and everything wrong.
  */
 export async function checkChanges(
-  trx: Knex.Transaction,
+  trx: Knex.Transaction | Knex,
   firmId: string,
   projectId: string,
   changes: ItemChange[],
@@ -63,12 +63,20 @@ export async function checkChanges(
   const current = new Map<string, Record<string, unknown>>();
   for (const name of new Set(changes.filter((c) => c.op !== "create").map((c) => c.entity))) {
     const ids = changes.filter((c) => c.entity === name && c.op !== "create").map((c) => c.id as string);
-    for (const row of await loadItems(trx, name, firmId, projectId, { ids, lock: true })) current.set(row.id as string, row);
+    const lock = (trx as Knex.Transaction).isTransaction === true;
+    for (const row of await loadItems(trx, name, firmId, projectId, { ids, lock })) current.set(row.id as string, row);
   }
-  const refTables = new Set(changes.flatMap((c) => ENTITIES[c.entity].references.map((r) => r.table)));
+  // Only the zones and build-ups the changes name are looked up (an edit of an area names none).
+  const named = new Map<string, Set<string>>();
+  for (const c of changes) {
+    for (const ref of ENTITIES[c.entity].references) {
+      const v = c.values?.[ref.field];
+      if (typeof v === "string" && zId.safeParse(v).success) named.set(ref.table, (named.get(ref.table) ?? new Set()).add(v));
+    }
+  }
   const refIds = new Map<string, Set<string>>();
-  for (const table of refTables) {
-    const rows = await trx(table).where({ firm_id: firmId, project_id: projectId }).select("id");
+  for (const [table, ids] of named) {
+    const rows = await trx(table).where({ firm_id: firmId, project_id: projectId }).whereIn("id", [...ids]).select("id");
     refIds.set(table, new Set(rows.map((r) => r.id)));
   }
 
@@ -110,7 +118,7 @@ export async function checkChanges(
     if (!parsed.success) problems.push(...issuesToProblems(parsed.error, base, e.noun));
     // References are checked even when other fields failed, so one answer lists every problem.
     for (const ref of e.references) {
-      const value = merged[ref.field];
+      const value = change.values?.[ref.field];
       if (typeof value === "string" && zId.safeParse(value).success && !refIds.get(ref.table)?.has(value)) {
         problems.push({ ...base, field: ref.field, message: `${ref.noun} ${value} is not in this project` });
       }

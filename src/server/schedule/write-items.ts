@@ -28,7 +28,7 @@ function refuseConflicts(conflicts: RowConflict[]): never {
   throw new AppError("conflict", `${plural(conflicts.length, "row")} changed since you read ${conflicts.length === 1 ? "it" : "them"}; nothing was saved`, conflicts);
 }
 
-async function countRows(trx: Knex.Transaction, projectId: string): Promise<number> {
+async function countRows(trx: Knex.Transaction | Knex, projectId: string): Promise<number> {
   const { rows } = await trx.raw<{ rows: { n: string }[] }>("select (select count(*) from surfaces where project_id = ?) + (select count(*) from duct_runs where project_id = ?) as n", [projectId, projectId]);
   return Number(rows[0]!.n);
 }
@@ -40,14 +40,14 @@ function columnsOf(parsed: Record<string, unknown>, name: EntityName): Record<st
   return cols;
 }
 
-async function writeLayers(trx: Knex.Transaction, firmId: string, buildupId: string, layers: unknown): Promise<void> {
+async function writeLayers(trx: Knex.Transaction | Knex, firmId: string, buildupId: string, layers: unknown): Promise<void> {
   await trx("buildup_layers").where({ buildup_id: buildupId }).del();
   const list = layers as { material: string; thickness_m: number; k_W_mK: number }[];
   if (list.length > 0) await trx("buildup_layers").insert(list.map((l, i) => ({ ...l, buildup_id: buildupId, firm_id: firmId, position: i })));
 }
 
 /** Refuses to delete zones or build-ups that rows still use, naming how many. */
-async function assertUnused(trx: Knex.Transaction, deletes: CheckedChange[]): Promise<void> {
+async function assertUnused(trx: Knex.Transaction | Knex, deletes: CheckedChange[]): Promise<void> {
   const conflicts: RowConflict[] = [];
   for (const d of deletes) {
     for (const use of ENTITIES[d.entity].usedBy) {
@@ -61,7 +61,7 @@ async function assertUnused(trx: Knex.Transaction, deletes: CheckedChange[]): Pr
   if (conflicts.length) refuseConflicts(conflicts);
 }
 
-async function insertAll(trx: Knex.Transaction, actor: Actor, projectId: string, name: EntityName, creates: CheckedChange[]): Promise<Record<string, unknown>[]> {
+async function insertAll(trx: Knex.Transaction | Knex, actor: Actor, projectId: string, name: EntityName, creates: CheckedChange[]): Promise<Record<string, unknown>[]> {
   const e = ENTITIES[name];
   let next = 0;
   if (e.positioned) {
@@ -88,11 +88,16 @@ async function insertAll(trx: Knex.Transaction, actor: Actor, projectId: string,
 
 /**
  * Applies creates, updates and deletes of one project's items in the caller's transaction, all
- * or nothing: every change is checked first (stale versions → 409 naming each row with its
+ * or nothing (a lone update or delete of one row may run outside one: it is a single guarded
+ * statement): every change is checked first (stale versions → 409 naming each row with its
  * current state; bad values → 422 naming row and field), and only a clean set is written.
  */
-export async function writeItems(trx: Knex.Transaction, actor: Actor, projectId: string, changes: ItemChange[]): Promise<WriteResult> {
+export async function writeItems(trx: Knex.Transaction | Knex, actor: Actor, projectId: string, changes: ItemChange[], opts: { missing?: "conflict" | "not_found" } = {}): Promise<WriteResult> {
   const { checked, problems, conflicts } = await checkChanges(trx, actor.firm.id, projectId, changes);
+  // A single-item route names one row by its URL: a row that is not there (or is another
+  // firm's) is 404 there; in a bulk change it is a conflict (someone deleted it meanwhile).
+  const gone = conflicts.find((c) => c.current === null);
+  if (gone && opts.missing === "not_found") throw new AppError("not_found", `No ${ENTITIES[gone.sheet].noun} with that id in this project`);
   if (conflicts.length) refuseConflicts(conflicts);
   if (problems.length) refuseProblems(problems);
 
@@ -101,7 +106,11 @@ export async function writeItems(trx: Knex.Transaction, actor: Actor, projectId:
   await assertUnused(trx, deletes);
   for (const name of new Set(deletes.map((d) => d.entity))) {
     const ids = deletes.filter((d) => d.entity === name).map((d) => d.id as string);
-    await trx(ENTITIES[name].table).where({ firm_id: actor.firm.id, project_id: projectId }).whereIn("id", ids).del();
+    const gone = await trx(ENTITIES[name].table)
+      .where({ firm_id: actor.firm.id, project_id: projectId })
+      .where((q) => deletes.filter((d) => d.entity === name).forEach((d) => q.orWhere({ id: d.id, version: d.current!.version })))
+      .del();
+    if (gone !== ids.length) refuseConflicts(deletes.filter((d) => d.entity === name).map((d) => ({ row: d.row, sheet: name, id: d.id as string, field: "version", message: "Changed or deleted by someone else meanwhile; nothing was saved", current: null })));
     result.deleted.push(...ids.map((id) => ({ sheet: name, id })));
   }
 
@@ -114,14 +123,20 @@ export async function writeItems(trx: Knex.Transaction, actor: Actor, projectId:
     // The free plan's row limit, counted after the inserts (and deletes) of this transaction:
     // a refusal (402) rolls all of it back.
     if (creates.some((c) => c.entity === "surfaces" || c.entity === "duct_runs")) {
-      await assertPlanAllows(trx, actor.firm.id, { rows: () => countRows(trx, projectId) });
+      await assertPlanAllows(trx as Knex.Transaction, actor.firm.id, { rows: () => countRows(trx, projectId) });
     }
     for (const u of checked.filter((c) => c.op === "update")) {
       const e = ENTITIES[u.entity];
+      // Guarded by the version read: outside a transaction (a single-row edit) a write that
+      // lands between the read and this update makes it match nothing, and the caller gets 409.
       const [row] = await trx(e.table)
-        .where({ id: u.id, firm_id: actor.firm.id })
+        .where({ id: u.id, firm_id: actor.firm.id, version: u.current!.version })
         .update({ ...columnsOf(u.parsed as Record<string, unknown>, u.entity), version: trx.raw("version + 1"), updated_at: trx.fn.now() })
         .returning(readColumns(e));
+      if (!row) {
+        const [now] = await trx(e.table).where({ id: u.id, firm_id: actor.firm.id }).select(readColumns(e));
+        refuseConflicts([{ row: u.row, sheet: u.entity, id: u.id as string, field: "version", message: `This ${e.noun} was changed by someone else meanwhile; nothing was saved`, current: now ?? null }]);
+      }
       if (u.entity === "buildups" && u.values?.layers !== undefined) await writeLayers(trx, actor.firm.id, u.id as string, u.parsed!.layers);
       result.updated.push({ sheet: u.entity, row: u.entity === "buildups" ? (await attachLayers(trx, [row]))[0]! : row });
     }
