@@ -19,7 +19,8 @@ export default async function ProjectLayout({ children, params }: { children: Re
     throw error;
   });
   return (
-    <ScheduleProvider initial={schedule} canEdit={hasAnyRole(actor, ["consultant"])}>
+    // Keyed by project: moving from one project to another starts a fresh cache seeded with its schedule.
+    <ScheduleProvider key={projectId} initial={schedule} canEdit={hasAnyRole(actor, ["consultant"])}>
       <div className="fs-project grid gap-5">
         <ProjectHeader canReport={hasAnyRole(actor, ["admin", "consultant", "checker"])} />
         {children}
