@@ -16,7 +16,8 @@ const meta: ReportMeta = {
 
 const pages = pdfPages;
 
-describe("calculation report", () => {
+// Building several reports takes seconds on a busy two-core machine: more than the default 5 s.
+describe("calculation report", { timeout: 60_000 }, () => {
   const schedule = sampleSchedule(24, 4);
   const draft = buildReport({ meta, schedule, designCases: SAMPLE_CASES });
 
