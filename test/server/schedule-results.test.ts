@@ -9,13 +9,14 @@ import { closeTestDb, testDb } from "../support/db";
 import { makeProject, type FixtureProject } from "../support/schedule-fixtures";
 
 let app: BuiltApp;
-let viewer: Record<string, string>;
+// A checker reads results (viewers see issued revisions only; see the access matrix).
+let checker: Record<string, string>;
 let fx: FixtureProject;
 
 beforeAll(async () => {
-  const started = await startAppWithSessions(["viewer@demo.filmsheet.test"]);
+  const started = await startAppWithSessions(["checker@demo.filmsheet.test"]);
   app = started.app;
-  viewer = started.as["viewer@demo.filmsheet.test"];
+  checker = started.as["checker@demo.filmsheet.test"];
   fx = await makeProject("tarnbrook-sill");
 });
 afterAll(async () => {
@@ -27,7 +28,8 @@ afterAll(async () => {
 async function storedSchedule(projectId: string): Promise<{ schedule: Schedule; cases: DesignCase[] }> {
   const db = testDb();
   const p = await db("projects").where({ id: projectId }).first();
-  const rows = (t: string) => db(t).where({ project_id: projectId }).orderBy(t === "surfaces" || t === "duct_runs" ? "position" : "name");
+  // The schedule's own order: position, then age (rows added at the same position keep theirs).
+  const rows = (t: string) => db(t).where({ project_id: projectId }).orderBy(t === "surfaces" || t === "duct_runs" ? [{ column: "position" }, { column: "created_at" }] : [{ column: "name" }]);
   const layers = await db("buildup_layers").whereIn("buildup_id", db("buildups").where({ project_id: projectId }).select("id")).orderBy(["buildup_id", "position"]);
   const buildups: Buildup[] = (await rows("buildups")).map((b) => ({
     ...b,
@@ -55,7 +57,7 @@ describe("server results equal the engine's on the stored rows", () => {
     const { schedule, cases } = await storedSchedule(id);
     expect(cases.length).toBeGreaterThan(1);
     for (const dc of cases) {
-      const res = await request(app.server).get(`/api/projects/${id}/results?case=${dc.id}`).set(viewer);
+      const res = await request(app.server).get(`/api/projects/${id}/results?case=${dc.id}`).set(checker);
       expect(res.status, res.text).toBe(200);
       // Expected: src/calc scheduleResults on the same inputs, through JSON as the API sends it.
       const expected = JSON.parse(JSON.stringify(scheduleResults(schedule, dc)));
@@ -66,7 +68,7 @@ describe("server results equal the engine's on the stored rows", () => {
   });
 
   test("a layered build-up reaches the engine as Σ t/k: U = 1/(R_si + R + 1/h_o) with R from the layers", async () => {
-    const res = await request(app.server).get(`/api/projects/${fx.projectId}/results?case=${fx.caseIds.heating}`).set(viewer);
+    const res = await request(app.server).get(`/api/projects/${fx.projectId}/results?case=${fx.caseIds.heating}`).set(checker);
     const wall = res.body.surfaces.find((s: { row_id: string }) => s.row_id === fx.surfaceIds[0]).result;
     // R by hand from the fixture's layers: 0.1/0.77 + 0.15/0.035 = 4.41558 m²K/W; R_si 0.13 (contract default).
     const R = 0.1 / 0.77 + 0.15 / 0.035;
@@ -77,9 +79,9 @@ describe("server results equal the engine's on the stored rows", () => {
   });
 
   test("an unknown design case is not found; a missing one is refused naming the parameter", async () => {
-    const unknown = await request(app.server).get(`/api/projects/${fx.projectId}/results?case=00000000-0000-4000-8000-000000000000`).set(viewer);
+    const unknown = await request(app.server).get(`/api/projects/${fx.projectId}/results?case=00000000-0000-4000-8000-000000000000`).set(checker);
     expect(unknown.status).toBe(404);
-    const missing = await request(app.server).get(`/api/projects/${fx.projectId}/results`).set(viewer);
+    const missing = await request(app.server).get(`/api/projects/${fx.projectId}/results`).set(checker);
     expect(missing.status).toBe(422);
     expect(missing.body.error.details[0].field).toBe("query.case");
   });

@@ -2,6 +2,7 @@ import "server-only";
 import { z } from "zod";
 import { ZProjectParams } from "@/schemas/project";
 import { ZDeleteQuery, ZItemParams, ZVersion } from "@/schemas/schedule";
+import { DRAFT_READERS } from "@/server/checking/roles";
 import { route } from "@/server/http/route";
 import { createScheduleItem } from "@/server/services/create-schedule-item";
 import { deleteScheduleItem } from "@/server/services/delete-schedule-item";
@@ -11,14 +12,14 @@ import { updateScheduleItem } from "@/server/services/update-schedule-item";
 import type { EntityName } from "./entities";
 
 // The five item tables of a schedule share one set of handlers; the route files under
-// app/api/projects/[projectId]/<table>/ stay one line per method. Anyone in the firm reads;
-// consultants write (admins, checkers and viewers read only).
+// app/api/projects/[projectId]/<table>/ stay one line per method. Consultants, checkers and
+// admins read (viewers see issued revisions only); consultants write.
 const EDITORS = ["consultant"] as const;
 const ZValues = z.record(z.string(), z.unknown(), { error: "The body must be an object of fields" });
 const ZPatch = z.looseObject({ version: ZVersion });
 
 export const listItemsRoute = (name: EntityName) =>
-  route({ params: ZProjectParams }, async ({ actor, params }) => ({ items: await listScheduleItems(actor, params.projectId, name) }));
+  route({ roles: DRAFT_READERS, params: ZProjectParams }, async ({ actor, params }) => ({ items: await listScheduleItems(actor, params.projectId, name) }));
 
 export const createItemRoute = (name: EntityName) =>
   route({ roles: EDITORS, params: ZProjectParams, body: ZValues }, async ({ actor, params, body }) =>
@@ -26,7 +27,7 @@ export const createItemRoute = (name: EntityName) =>
   );
 
 export const getItemRoute = (name: EntityName) =>
-  route({ params: ZItemParams }, ({ actor, params }) => getScheduleItemOrThrow(actor, params.projectId, name, params.itemId));
+  route({ roles: DRAFT_READERS, params: ZItemParams }, ({ actor, params }) => getScheduleItemOrThrow(actor, params.projectId, name, params.itemId));
 
 export const updateItemRoute = (name: EntityName) =>
   route({ roles: EDITORS, params: ZItemParams, body: ZPatch }, ({ actor, params, body }) => {

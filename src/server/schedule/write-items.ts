@@ -7,6 +7,7 @@ import { attachLayers } from "@/server/repositories/schedule";
 import { assertPlanAllows } from "@/server/services/assert-plan-allows";
 import { checkChanges, type CheckedChange, type ItemChange, type RowConflict, type RowProblem } from "./check-changes";
 import { ENTITIES, readColumns, type EntityName } from "./entities";
+import { noteScheduleChanges, type ScheduleChange } from "@/server/services/note-schedule-changes";
 
 export interface WriteResult {
   created: { sheet: EntityName; row: Record<string, unknown> }[];
@@ -88,8 +89,8 @@ async function insertAll(trx: Knex.Transaction | Knex, actor: Actor, projectId: 
 
 /**
  * Applies creates, updates and deletes of one project's items in the caller's transaction, all
- * or nothing (a lone update or delete of one row may run outside one: it is a single guarded
- * statement): every change is checked first (stale versions → 409 naming each row with its
+ * or nothing (a lone update of one row may be checked outside one; its write then opens its own):
+ * every change is checked first (stale versions → 409 naming each row with its
  * current state; bad values → 422 naming row and field), and only a clean set is written.
  */
 export async function writeItems(trx: Knex.Transaction | Knex, actor: Actor, projectId: string, changes: ItemChange[], opts: { missing?: "conflict" | "not_found" } = {}): Promise<WriteResult> {
@@ -100,8 +101,17 @@ export async function writeItems(trx: Knex.Transaction | Knex, actor: Actor, pro
   if (gone && opts.missing === "not_found") throw new AppError("not_found", `No ${ENTITIES[gone.sheet].noun} with that id in this project`);
   if (conflicts.length) refuseConflicts(conflicts);
   if (problems.length) refuseProblems(problems);
+  // A lone edit is checked outside a transaction (no lock: its UPDATE is guarded by the version
+  // read), but the write, its audit row and its check reset still commit together or not at all.
+  const write = (w: Knex.Transaction) => writeChecked(w, actor, projectId, changes, checked);
+  return (trx as Knex.Transaction).isTransaction === true ? write(trx as Knex.Transaction) : (trx as Knex).transaction(write);
+}
 
+/** Writes changes that passed every check, with their audit rows and check resets, in `trx`. */
+async function writeChecked(trx: Knex.Transaction, actor: Actor, projectId: string, changes: ItemChange[], checked: CheckedChange[]): Promise<WriteResult> {
   const result: WriteResult = { created: [], updated: [], deleted: [] };
+  // For the audit trail and the check states, written in this same transaction.
+  const noted: ScheduleChange[] = [];
   const deletes = checked.filter((c) => c.op === "delete");
   await assertUnused(trx, deletes);
   for (const name of new Set(deletes.map((d) => d.entity))) {
@@ -113,17 +123,19 @@ export async function writeItems(trx: Knex.Transaction | Knex, actor: Actor, pro
     if (gone !== ids.length) refuseConflicts(deletes.filter((d) => d.entity === name).map((d) => ({ row: d.row, sheet: name, id: d.id as string, field: "version", message: "Changed or deleted by someone else meanwhile; nothing was saved", current: null })));
     result.deleted.push(...ids.map((id) => ({ sheet: name, id })));
   }
+  for (const d of deletes) noted.push({ entity: d.entity, op: "delete", id: d.id as string, before: d.current ?? null, after: null });
 
   const creates = checked.filter((c) => c.op === "create");
   try {
     for (const name of new Set(creates.map((c) => c.entity))) {
       const rows = await insertAll(trx, actor, projectId, name, creates.filter((c) => c.entity === name));
       result.created.push(...rows.map((row) => ({ sheet: name, row })));
+      noted.push(...rows.map((row) => ({ entity: name, op: "create" as const, id: row.id as string, before: null, after: row })));
     }
     // The free plan's row limit, counted after the inserts (and deletes) of this transaction:
     // a refusal (402) rolls all of it back.
     if (creates.some((c) => c.entity === "surfaces" || c.entity === "duct_runs")) {
-      await assertPlanAllows(trx as Knex.Transaction, actor.firm.id, { rows: () => countRows(trx, projectId) });
+      await assertPlanAllows(trx, actor.firm.id, { rows: () => countRows(trx, projectId) });
     }
     for (const u of checked.filter((c) => c.op === "update")) {
       const e = ENTITIES[u.entity];
@@ -138,7 +150,9 @@ export async function writeItems(trx: Knex.Transaction | Knex, actor: Actor, pro
         refuseConflicts([{ row: u.row, sheet: u.entity, id: u.id as string, field: "version", message: `This ${e.noun} was changed by someone else meanwhile; nothing was saved`, current: now ?? null }]);
       }
       if (u.entity === "buildups" && u.values?.layers !== undefined) await writeLayers(trx, actor.firm.id, u.id as string, u.parsed!.layers);
-      result.updated.push({ sheet: u.entity, row: u.entity === "buildups" ? (await attachLayers(trx, [row]))[0]! : row });
+      const after = u.entity === "buildups" ? (await attachLayers(trx, [row]))[0]! : row;
+      result.updated.push({ sheet: u.entity, row: after });
+      noted.push({ entity: u.entity, op: "update", id: u.id as string, before: u.current ?? null, after });
     }
   } catch (error) {
     if (isUniqueViolation(error)) {
@@ -147,5 +161,6 @@ export async function writeItems(trx: Knex.Transaction | Knex, actor: Actor, pro
     }
     throw error;
   }
+  await noteScheduleChanges(trx, actor, projectId, noted);
   return result;
 }

@@ -6,6 +6,7 @@ import { isUniqueViolation } from "@/server/db/unique-violation";
 import { AppError } from "@/server/http/app-error";
 import { assertPlanAllows } from "./assert-plan-allows";
 import { PROJECT_COLUMNS } from "./list-projects";
+import { recordAudit } from "./record-audit";
 
 /** Creates a project in the current firm; references are unique within a firm. */
 export async function createProject(actor: Actor, input: TProjectCreate): Promise<TProject> {
@@ -15,6 +16,7 @@ export async function createProject(actor: Actor, input: TProjectCreate): Promis
       const projects = async () => Number((await trx("projects").where({ firm_id: actor.firm.id }).count({ n: "*" }))[0]!.n) + 1;
       await assertPlanAllows(trx, actor.firm.id, { projects });
       const [project] = await trx("projects").insert({ ...input, firm_id: actor.firm.id }).returning([...PROJECT_COLUMNS]);
+      await recordAudit(trx, actor, [{ projectId: project.id, entity: "project", entityId: project.id, action: "create", after: project }]);
       return project;
     });
   } catch (error) {

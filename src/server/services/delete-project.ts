@@ -2,6 +2,7 @@ import "server-only";
 import type { Actor } from "@/server/auth/actor";
 import { db } from "@/server/db/knex";
 import { AppError } from "@/server/http/app-error";
+import { recordAudit } from "./record-audit";
 
 /** Deletes a project and its whole schedule, at the version the caller read. */
 export async function deleteProject(actor: Actor, projectId: string, version: number): Promise<{ deleted: string }> {
@@ -10,6 +11,8 @@ export async function deleteProject(actor: Actor, projectId: string, version: nu
     if (!current) throw new AppError("not_found", "No project with that id in this firm");
     if (current.version !== version) throw new AppError("conflict", `This project was changed by someone else (now version ${current.version}); nothing was deleted`, [{ row: 1, sheet: "projects", id: projectId, field: "version", message: "Stale version", current }]);
     await trx("projects").where({ id: projectId }).del();
+    // The audit trail keeps no foreign key to projects, so this record outlives the project.
+    await recordAudit(trx, actor, [{ projectId, entity: "project", entityId: projectId, action: "delete", before: current }]);
     return { deleted: projectId };
   });
 }

@@ -7,9 +7,10 @@ import { db } from "@/server/db/knex";
 import { AppError } from "@/server/http/app-error";
 import { loadSchedule } from "@/server/repositories/schedule";
 import type { ItemChange, RowProblem } from "@/server/schedule/check-changes";
-import { ENTITIES } from "@/server/schedule/entities";
+import { ENTITIES, readColumns } from "@/server/schedule/entities";
 import { detectFormat, readCsv, readXlsx, type Table, type UploadFormat } from "@/server/schedule/read-upload";
 import { writeItems } from "@/server/schedule/write-items";
+import { noteScheduleChanges } from "./note-schedule-changes";
 
 export interface ImportOptions {
   bytes: Uint8Array;
@@ -64,7 +65,9 @@ export async function importSchedule(actor: Actor, projectId: string, opts: Impo
       summary.imported[sheet] = parsed.rows.length;
       for (const col of SHEET_COLUMNS[sheet]) headers.set(`${sheet}:${col.field}`, columnHeader(col, system));
       if (opts.mode === "replace") {
-        summary.replaced[sheet] = await trx(ENTITIES[sheet].table).where({ firm_id: actor.firm.id, project_id: projectId }).del();
+        const gone = await trx(ENTITIES[sheet].table).where({ firm_id: actor.firm.id, project_id: projectId }).del().returning(readColumns(ENTITIES[sheet]));
+        summary.replaced[sheet] = gone.length;
+        await noteScheduleChanges(trx, actor, projectId, gone.map((row) => ({ entity: sheet, op: "delete" as const, id: row.id as string, before: row, after: null })));
       }
     }
 

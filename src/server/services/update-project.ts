@@ -5,6 +5,7 @@ import { db } from "@/server/db/knex";
 import { isUniqueViolation } from "@/server/db/unique-violation";
 import { AppError } from "@/server/http/app-error";
 import { PROJECT_COLUMNS } from "./list-projects";
+import { noteScheduleChanges } from "./note-schedule-changes";
 
 /** Changes a project's name, reference, site, units or default method at the version read. */
 export async function updateProject(actor: Actor, projectId: string, input: TProjectUpdate): Promise<TProject> {
@@ -20,6 +21,7 @@ export async function updateProject(actor: Actor, projectId: string, input: TPro
         .where({ id: projectId })
         .update({ ...values, version: trx.raw("version + 1"), updated_at: trx.fn.now() })
         .returning([...PROJECT_COLUMNS]);
+      await noteScheduleChanges(trx, actor, projectId, [{ entity: "project", op: "update", id: projectId, before: current, after: row }]);
       return row;
     });
   } catch (error) {

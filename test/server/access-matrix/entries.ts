@@ -2,6 +2,7 @@
 // checks this list against the route files on disk: a new route (or method) without an entry
 // here fails, as does an entry whose route is gone.
 import { demoProjectId, freeDemoFirm, newInvitation, newMember, newPasswordReset, newToken, paidDemoFirm, uniqueEmail } from "./fixtures";
+import { CHECKING_ENTRIES } from "./checking-entries";
 import { SCHEDULE_ENTRIES } from "./schedule-entries";
 
 export const PRINCIPALS = ["anonymous", "admin", "consultant", "checker", "viewer", "other_firm", "admin_token", "revoked_token", "expired_token"] as const;
@@ -101,4 +102,5 @@ export const ENTRIES: MatrixEntry[] = [
     expect: same(200),
   },
   ...SCHEDULE_ENTRIES,
+  ...CHECKING_ENTRIES,
 ];

@@ -1,5 +1,6 @@
-// Access-matrix rows of the project and schedule routes: anyone in the firm reads (the other
-// firm gets 404 for the demo firm's ids); only consultants write (everyone else 403, decided
+// Access-matrix rows of the project and schedule routes: consultants, checkers and admins read
+// the draft (viewers see issued revisions only; the other firm gets 404 for the demo firm's ids);
+// only consultants write (everyone else 403, decided
 // before any lookup, so the other firm's admin gets 403 too). The demo schedule is beyond the
 // free plan's 40 rows, so entries that add rows put the demo firm on the paid plan first.
 import { randomUUID } from "node:crypto";
@@ -11,7 +12,8 @@ import type { MatrixEntry, Principal } from "./entries";
 type Status = Record<Principal, number>;
 const PRINCIPALS: Principal[] = ["anonymous", "admin", "consultant", "checker", "viewer", "other_firm", "admin_token", "revoked_token", "expired_token"];
 const refused = { anonymous: 401, revoked_token: 401, expired_token: 401 };
-const read: Status = { ...(Object.fromEntries(PRINCIPALS.map((p) => [p, 200])) as Status), ...refused, other_firm: 404 };
+// Viewers read issued revisions only, never the draft schedule.
+const read: Status = { ...(Object.fromEntries(PRINCIPALS.map((p) => [p, 200])) as Status), ...refused, viewer: 403, other_firm: 404 };
 const write = (ok: number): Status => ({ ...(Object.fromEntries(PRINCIPALS.map((p) => [p, 403])) as Status), ...refused, consultant: ok });
 
 async function demoIds() {

@@ -1,0 +1,51 @@
+/**
+ * What an issued revision holds, frozen as JSON: every input of the schedule, the engine's results
+ * for every design case, each row's check state and comment thread. Format 1; a later format
+ * must still read these (issued revisions are never rewritten).
+ */
+import type { Buildup, DesignCase, DuctRunRow, ScheduleResults, SurfaceRow, Zone } from "@/calc/index";
+import type { TCheckSheet, TCheckState } from "./check-machine";
+
+export interface SnapshotProject {
+  id: string;
+  name: string;
+  reference: string;
+  altitude_m: number;
+  terrain: string;
+  wind_law: string;
+  unit_system: string;
+  default_method: string;
+}
+
+type Versioned = { version: number };
+
+export interface SnapshotCheck {
+  sheet: TCheckSheet;
+  row_id: string;
+  state: TCheckState;
+  checked_by_name: string | null;
+  checked_at: string | null;
+}
+
+export interface SnapshotComment {
+  sheet: TCheckSheet;
+  row_id: string;
+  author_name: string;
+  kind: string;
+  body: string;
+  created_at: string;
+}
+
+export interface RevisionSnapshot {
+  format: 1;
+  project: SnapshotProject;
+  design_cases: (DesignCase & Versioned)[];
+  zones: (Zone & Versioned)[];
+  buildups: (Buildup & Versioned)[];
+  surfaces: (SurfaceRow & Versioned & { position: number })[];
+  duct_runs: (DuctRunRow & Versioned & { position: number })[];
+  /** One entry per design case, in the order of design_cases. */
+  results: ScheduleResults[];
+  checks: SnapshotCheck[];
+  comments: SnapshotComment[];
+}
