@@ -19,6 +19,7 @@ import {
   startCluster,
   stopCluster,
 } from "./lib/bootstrap.mjs";
+import { startMailSink } from "./lib/mail-sink.mjs";
 import { assertPortFree, runAsync, step, stopService } from "./lib/proc.mjs";
 import { closingLine, countPlaywright, countVitest, readSuite, total } from "./lib/reports.mjs";
 import { DEFAULT_DEMO_PASSWORD, LOCAL_WEBHOOK_SECRET, authSecret, portFromEnv, startApp, startStripeStandIn } from "./lib/services.mjs";
@@ -34,8 +35,12 @@ const services = [];
 let cluster;
 let finished = false;
 
+let mailSink;
+
 async function cleanUp() {
   for (const s of [...services].reverse()) await stopService(s);
+  await mailSink?.stop();
+  mailSink = undefined;
   services.length = 0;
   if (cluster) stopCluster(cluster);
   cluster = undefined;
@@ -100,12 +105,13 @@ async function runPlaywright(dbEnv) {
   const stripe = startStripeStandIn(ports.stripe, { appPort: ports.app });
   services.push(stripe.service);
   await stripe.ready();
+  // The app's e-mail goes to a sink that writes each message into a folder the browser tests read.
+  mailSink = await startMailSink(join(ROOT, ".data", "e2e-mail"));
   const app = startApp(ports.app, {
     ...dbEnv,
     NODE_ENV: "production",
     APP_URL: `http://localhost:${ports.app}`,
-    // No mail server during the browser tests (port 1 refuses at once); e-mail is tested with a sink.
-    SMTP_URL: "smtp://127.0.0.1:1?ignoreTLS=true",
+    SMTP_URL: `smtp://127.0.0.1:${mailSink.port}?ignoreTLS=true`,
     AUTH_SECRET: authSecret(),
     STRIPE_API_URL: `http://127.0.0.1:${ports.stripe}`,
     STRIPE_WEBHOOK_SECRET: LOCAL_WEBHOOK_SECRET,
@@ -115,7 +121,7 @@ async function runPlaywright(dbEnv) {
   const code = await runAsync(join(ROOT, "node_modules/.bin/playwright"), ["test", "--config", join(ROOT, "playwright.config.ts")], {
     cwd: ROOT,
     // The database URL lets a browser test put the demo firm back on the free plan before it starts.
-    env: baseEnv({ E2E_BASE_URL: `http://localhost:${ports.app}`, E2E_JSON_REPORT: report, CHROMIUM_PATH: CHROMIUM, E2E_DATABASE_URL: dbEnv.DATABASE_URL }),
+    env: baseEnv({ E2E_BASE_URL: `http://localhost:${ports.app}`, E2E_JSON_REPORT: report, CHROMIUM_PATH: CHROMIUM, E2E_DATABASE_URL: dbEnv.DATABASE_URL, E2E_MAIL_DIR: mailSink.dir }),
   });
   return readSuite(report, countPlaywright, code);
 }

@@ -1,6 +1,6 @@
 "use client";
 
-import type { InputHTMLAttributes, ReactNode } from "react";
+import type { InputHTMLAttributes, ReactNode, TextareaHTMLAttributes } from "react";
 import { useFormStatus } from "react-dom";
 
 export type FormState =
@@ -13,29 +13,14 @@ export function fieldError(state: FormState, name: string): string | undefined {
   return state && !state.ok ? state.fields?.[name] : undefined;
 }
 
-/**
- * A labelled input with its hint and its error underneath, wired for screen readers. Given the
- * form's state, it shows that field's error and keeps what was typed after a refusal.
- */
-export function Field({ label, name, hint, state, ...input }: { label: string; name: string; hint?: ReactNode; state?: FormState } & InputHTMLAttributes<HTMLInputElement>) {
-  const id = input.id ?? `f-${name}`;
-  const error = fieldError(state ?? null, name);
-  const typed = state && !state.ok ? state.values?.[name] : undefined;
-  const described = [hint ? `${id}-hint` : "", error ? `${id}-error` : ""].filter(Boolean).join(" ") || undefined;
+/** Label, control, hint and error of one field, wired for screen readers. */
+function FieldFrame({ id, label, hint, error, children }: { id: string; label: string; hint?: ReactNode; error?: string; children: ReactNode }) {
   return (
     <div className="grid gap-1">
       <label htmlFor={id} className="text-small font-medium">
         {label}
       </label>
-      <input
-        id={id}
-        name={name}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={described}
-        className="rounded-chip border border-line bg-canvas px-3 py-2 text-body outline-none focus:border-accent aria-[invalid=true]:border-danger"
-        {...(typed !== undefined && input.type !== "password" ? { defaultValue: typed } : {})}
-        {...input}
-      />
+      {children}
       {hint ? (
         <p id={`${id}-hint`} className="text-micro text-muted">
           {hint}
@@ -47,6 +32,41 @@ export function Field({ label, name, hint, state, ...input }: { label: string; n
         </p>
       ) : null}
     </div>
+  );
+}
+
+/** What a field shows from the form's state: its error, what was typed, and its aria wiring. */
+function fieldWiring(id: string, name: string, hint: ReactNode, state: FormState | undefined) {
+  const error = fieldError(state ?? null, name);
+  const typed = state && !state.ok ? state.values?.[name] : undefined;
+  const described = [hint ? `${id}-hint` : "", error ? `${id}-error` : ""].filter(Boolean).join(" ") || undefined;
+  return { error, typed, aria: { "aria-invalid": error ? true : undefined, "aria-describedby": described } };
+}
+
+const CONTROL = "rounded-chip border border-line bg-canvas px-3 py-2 text-body outline-none focus:border-accent aria-[invalid=true]:border-danger";
+
+/**
+ * A labelled input with its hint and its error underneath, wired for screen readers. Given the
+ * form's state, it shows that field's error and keeps what was typed after a refusal.
+ */
+export function Field({ label, name, hint, state, ...input }: { label: string; name: string; hint?: ReactNode; state?: FormState } & InputHTMLAttributes<HTMLInputElement>) {
+  const id = input.id ?? `f-${name}`;
+  const { error, typed, aria } = fieldWiring(id, name, hint, state);
+  return (
+    <FieldFrame id={id} label={label} hint={hint} error={error}>
+      <input id={id} name={name} {...aria} className={CONTROL} {...(typed !== undefined && input.type !== "password" ? { defaultValue: typed } : {})} {...input} />
+    </FieldFrame>
+  );
+}
+
+/** A labelled multi-line text field, like Field. */
+export function TextAreaField({ label, name, hint, state, ...area }: { label: string; name: string; hint?: ReactNode; state?: FormState } & TextareaHTMLAttributes<HTMLTextAreaElement>) {
+  const id = area.id ?? `f-${name}`;
+  const { error, typed, aria } = fieldWiring(id, name, hint, state);
+  return (
+    <FieldFrame id={id} label={label} hint={hint} error={error}>
+      <textarea id={id} name={name} rows={3} {...aria} className={CONTROL} {...(typed !== undefined ? { defaultValue: typed } : {})} {...area} />
+    </FieldFrame>
   );
 }
 
@@ -87,3 +107,4 @@ export function FormMessage({ state }: { state: FormState }) {
     </p>
   ) : null;
 }
+

@@ -3,7 +3,9 @@
  * person's units, with typed editors) and the result list (computed in the browser), plus a
  * notes column for warnings and errors.
  */
-import type { ColDef, ValueFormatterParams, ValueGetterParams } from "ag-grid-community";
+import type { ColDef, ICellRendererParams, ValueFormatterParams, ValueGetterParams } from "ag-grid-community";
+import { createElement } from "react";
+import { rowPath } from "@/checking/paths";
 import { labelOf } from "@/schemas/schedule-fields";
 import type { TSchedule, TSheet } from "@/schemas/schedule";
 import { RESULT_COLUMNS, resultHeader, resultValue, type ResultColumn } from "@/schedule/result-columns";
@@ -140,6 +142,22 @@ const notesColumn: ColDef<Row> = {
   cellClassRules: { "fs-note-error": (p) => typeof p.value === "string" && p.value.startsWith("error"), "fs-note-warn": (p) => typeof p.value === "string" && !p.value.startsWith("error") },
 };
 
+/** A link to the row's working and check, on its own page. */
+const workingColumn: ColDef<Row> = {
+  colId: "working",
+  headerName: "Working",
+  editable: false,
+  sortable: false,
+  filter: false,
+  width: 96,
+  pinned: "right",
+  // ag-grid-react renders a function cell renderer as a React component.
+  cellRenderer: (p: ICellRendererParams<Row> & { context: GridContext }) =>
+    !p.data || isTotals(p)
+      ? null
+      : createElement("a", { href: rowPath(p.context.projectId, p.context.sheet, p.data.id), className: "fs-working-link", "aria-label": `Working of ${String(p.data.label)}` }, "Working ›"),
+};
+
 export function sheetColumnDefs(sheet: TSheet, s: TSchedule, system: UnitSystem): ColDef<Row>[] {
-  return [...SHEET_COLUMNS[sheet].map((c) => inputColumn(c, s, system)), ...RESULT_COLUMNS[sheet].map((c) => resultColumn(c, system)), notesColumn];
+  return [...SHEET_COLUMNS[sheet].map((c) => inputColumn(c, s, system)), ...RESULT_COLUMNS[sheet].map((c) => resultColumn(c, system)), notesColumn, workingColumn];
 }

@@ -8,6 +8,7 @@ import type { UnitSystem } from "@/units/units";
  * the cells whose values changed.
  */
 export interface GridContext {
+  projectId: string;
   sheet: TSheet;
   system: UnitSystem;
   canEdit: boolean;

@@ -46,8 +46,8 @@ export function ScheduleGrid(props: ScheduleGridProps) {
   const { sheet, schedule, results, totals, system, canEdit, cellErrors } = props;
   const [api, setApi] = useState<GridApi<Row> | null>(null);
   const rows = (sheet === "surfaces" ? schedule.surfaces : schedule.duct_runs) as unknown as Row[];
-  const context = useRef<GridContext>({ sheet, system, canEdit, results, cellErrors, totals, rowCount: rows.length, buildups: new Map() }).current;
-  Object.assign(context, { sheet, system, canEdit, results, cellErrors, totals, rowCount: rows.length, buildups: new Map(schedule.buildups.map((b) => [b.id, b])) });
+  const context = useRef<GridContext>({ projectId: schedule.project.id, sheet, system, canEdit, results, cellErrors, totals, rowCount: rows.length, buildups: new Map() }).current;
+  Object.assign(context, { projectId: schedule.project.id, sheet, system, canEdit, results, cellErrors, totals, rowCount: rows.length, buildups: new Map(schedule.buildups.map((b) => [b.id, b])) });
 
   const { zones, buildups, project } = schedule;
   const columnDefs = useMemo(

@@ -4,8 +4,11 @@ import { ZProjectParams } from "@/schemas/project";
 import { hasAnyRole } from "@/server/auth/actor";
 import { requirePageActor } from "@/server/auth/get-viewer";
 import { AppError } from "@/server/http/app-error";
+import { DRAFT_READERS } from "@/server/checking/roles";
+import { getProjectOrThrow } from "@/server/services/get-project";
 import { getScheduleOrThrow } from "@/server/services/get-schedule";
 import { ScheduleProvider } from "@/components/schedule/schedule-context";
+import { IssuedProjectHeader } from "./_checking/issued-project-header";
 import { ProjectHeader } from "./project-header";
 import "@/components/schedule/project-wide.css";
 
@@ -14,6 +17,19 @@ export default async function ProjectLayout({ children, params }: { children: Re
   const { projectId } = await params;
   const actor = await requirePageActor(`/projects/${projectId}`);
   if (!ZProjectParams.safeParse({ projectId }).success) notFound();
+  // Viewers read issued revisions only: their pages get the project's name, never the draft.
+  if (!hasAnyRole(actor, DRAFT_READERS)) {
+    const project = await getProjectOrThrow(actor, projectId).catch((error) => {
+      if (error instanceof AppError && error.code === "not_found") notFound();
+      throw error;
+    });
+    return (
+      <div className="grid gap-5">
+        <IssuedProjectHeader project={project} />
+        {children}
+      </div>
+    );
+  }
   const schedule = await getScheduleOrThrow(actor, projectId).catch((error) => {
     if (error instanceof AppError && error.code === "not_found") notFound();
     throw error;

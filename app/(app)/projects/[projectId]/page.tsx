@@ -1,8 +1,10 @@
 import type { Metadata } from "next";
+import { draftOnly, type DraftPageProps } from "./_checking/draft-only";
 import { ScheduleView } from "./schedule-view";
 
 export const metadata: Metadata = { title: "Schedule" };
 
-export default function SchedulePage() {
+export default async function SchedulePage({ params }: DraftPageProps) {
+  await draftOnly(params);
   return <ScheduleView />;
 }

@@ -13,6 +13,9 @@ const TABS = [
   { href: "/zones", label: "Zones" },
   { href: "/buildups", label: "Build-ups" },
   { href: "/settings", label: "Site and units" },
+  { href: "/check", label: "Check" },
+  { href: "/revisions", label: "Revisions" },
+  { href: "/history", label: "History" },
 ];
 
 /** The project's name and site in one line, and its sections. */
@@ -52,7 +55,9 @@ export function ProjectHeader({ canReport }: { canReport: boolean }) {
       <nav aria-label="Project" className="flex gap-1 overflow-x-auto border-b border-line">
         {TABS.map((t) => {
           const href = `${base}${t.href}`;
-          const current = t.href === "" ? path === base : path.startsWith(href);
+          // A row's working page (…/surfaces/<id>, …/duct-runs/<id>) is part of the check.
+          const inCheck = t.href === "/check" && /\/(surfaces|duct-runs)\//.test(path);
+          const current = t.href === "" ? path === base : inCheck || path.startsWith(href);
           return (
             <Link key={t.href} href={href} aria-current={current ? "page" : undefined} className="-mb-px border-b-2 border-transparent px-3 py-2 text-small font-medium text-muted hover:text-ink aria-[current=page]:border-accent aria-[current=page]:text-ink">
               {t.label}
