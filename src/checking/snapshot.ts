@@ -48,4 +48,6 @@ export interface RevisionSnapshot {
   results: ScheduleResults[];
   checks: SnapshotCheck[];
   comments: SnapshotComment[];
+  /** Who last edited the rows issued (the report's authors); absent in the first revisions made. */
+  authors?: string[];
 }

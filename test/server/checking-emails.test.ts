@@ -6,7 +6,7 @@ import request from "supertest";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { grantPaidPlan } from "../support/billing";
 import { startBuiltApp } from "../support/built-app";
-import { acceptAll, makeMember } from "../support/checking";
+import { acceptAll, dropLeftoverEmailJobs, makeMember } from "../support/checking";
 import { closeTestDb, testDb } from "../support/db";
 import { makeProject, type FixtureProject } from "../support/schedule-fixtures";
 import { sessionCookie } from "../support/sessions";
@@ -21,7 +21,7 @@ let fx: FixtureProject;
 const people = {} as Record<Who, { id: number; email: string; headers: Record<string, string> }>;
 
 /** Every e-mail queued for these people has been sent: none is left in the queue. */
-async function queueDrained(timeoutMs = 20_000): Promise<void> {
+async function queueDrained(timeoutMs = 60_000): Promise<void> {
   const deadline = Date.now() + timeoutMs;
   // Other test files leave undeliverable jobs of their own in the shared queue: count only ours.
   const ours = Object.values(people).map((p) => p.email);
@@ -38,6 +38,7 @@ async function queueDrained(timeoutMs = 20_000): Promise<void> {
 const mailTo = (who: Who, kind: string): ParsedMail[] => sink.messages.filter((m) => m.headers.get("x-filmsheet-kind") === kind && JSON.stringify(m.to).includes(people[who].email));
 
 beforeAll(async () => {
+  await dropLeftoverEmailJobs(testDb());
   sink = await startSmtpSink();
   process.env.SMTP_URL = sink.url; // this file's worker process only
   app = await startBuiltApp();
@@ -77,7 +78,7 @@ describe("checking e-mails, each to the right people", () => {
     const res = await api("consultant", "post", `/api/projects/${fx.projectId}/check-requests`, { message: "Schedule complete for stage 3" });
     expect(res.status, res.text).toBe(201);
     expect(res.body).toEqual({ counts: { rows: 5, unchecked: 5, accepted: 0, queried: 0 }, notified: 1 });
-    const mail = await sink.waitFor(people.checker.email);
+    const mail = await sink.waitFor(people.checker.email, 60_000);
     expect(mail.subject).toBe(`Check requested: ${await reference()} Fixture pavilion`);
     expect(mail.text).toContain("“Schedule complete for stage 3”");
     expect(mail.text).toContain("5 rows, of which 5 unchecked and 0 queried");
@@ -87,7 +88,7 @@ describe("checking e-mails, each to the right people", () => {
   test("row queried → the row's last editor, with the query and a link to the row", async () => {
     const res = await api("checker", "post", `/api/projects/${fx.projectId}/surfaces/${fx.surfaceIds[0]}/check`, { move: "query", row_version: 2, comment: "Centroid height 3 m on a 6 m wall?" });
     expect(res.status, res.text).toBe(200);
-    const mail = await sink.waitFor(people.consultant.email);
+    const mail = await sink.waitFor(people.consultant.email, 60_000);
     expect(mail.headers.get("x-filmsheet-kind")).toBe("row_queried");
     expect(mail.subject).toMatch(/^Query on Surface South wall/);
     expect(mail.text).toContain("“Centroid height 3 m on a 6 m wall?”");
@@ -141,7 +142,7 @@ async function reference(): Promise<string> {
   return (await testDb()("projects").where({ id: fx.projectId }).first("reference")).reference;
 }
 
-async function waitUntil(ok: () => boolean, timeoutMs = 20_000): Promise<void> {
+async function waitUntil(ok: () => boolean, timeoutMs = 60_000): Promise<void> {
   const deadline = Date.now() + timeoutMs;
   while (!ok()) {
     if (Date.now() > deadline) throw new Error(`Timed out; e-mails so far: ${sink.messages.map((m) => m.subject).join(" | ")}`);

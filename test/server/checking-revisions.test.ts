@@ -7,6 +7,7 @@ import { startAppWithSessions, type BuiltApp } from "../support/app-with-session
 import { clearPlan, grantPaidPlan } from "../support/billing";
 import { acceptAll, auditOf } from "../support/checking";
 import { closeTestDb, testDb } from "../support/db";
+import { pdfPages } from "../support/pdf-text";
 import { makeProject, SURFACE_VALUES, type FixtureProject } from "../support/schedule-fixtures";
 
 const EMAILS = ["consultant@demo.filmsheet.test", "checker@demo.filmsheet.test", "viewer@demo.filmsheet.test", "admin@demo.filmsheet.test", "admin@other.filmsheet.test"] as const;
@@ -208,5 +209,54 @@ describe("comparing two revisions", () => {
     const bad = await request(app.server).get(`${base}?from=a&to=B`).set(checker());
     expect(bad.status).toBe(422);
     expect(bad.body.error.details[0].field).toBe("query.from");
+  });
+});
+
+describe("an issued revision's report", () => {
+  const binary = (res: request.Response, cb: (err: Error | null, body: Buffer) => void) => {
+    const chunks: Buffer[] = [];
+    res.on("data", (c: Buffer) => chunks.push(c));
+    res.on("end", () => cb(null, Buffer.concat(chunks)));
+  };
+  const report = (fx: FixtureProject, who: Record<string, string>) => request(app.server).get(`/api/projects/${fx.projectId}/revisions/A/report`).set(who).buffer(true).parse(binary);
+
+  test("a viewer downloads it: issued, revision A, its checker, every row's label; clean on the paid plan", async () => {
+    const fx = await makeProject("tarnbrook-sill");
+    await acceptAll(fx.projectId, checkerId);
+    expect((await issue(fx)).status).toBe(201);
+    const res = await report(fx, as["viewer@demo.filmsheet.test"]);
+    expect(res.status, String(res.body)).toBe(200);
+    expect(res.headers["content-disposition"]).toMatch(/FX-.*-revision-A-report\.pdf/);
+    const pages = await pdfPages(new Uint8Array(res.body as Buffer));
+    expect(pages[0]).toContain("Revision");
+    expect(pages[0]).toMatch(/\bA\b/);
+    expect(pages[0]).toContain("Solveig Prynne");
+    const text = pages.join(" ");
+    for (const label of ["South wall", "West wall", "Roof", "Roof supply", "Void extract"]) expect(text).toContain(label);
+    expect(text).not.toContain("NOT FOR ISSUE");
+  });
+
+  test("reads from the frozen snapshot: editing the draft afterwards does not change it", async () => {
+    const fx = await makeProject("tarnbrook-sill");
+    await acceptAll(fx.projectId, checkerId);
+    expect((await issue(fx)).status).toBe(201);
+    const before = (await pdfPages(new Uint8Array((await report(fx, checker())).body as Buffer))).slice(1).join(" ");
+    expect((await request(app.server).patch(`/api/projects/${fx.projectId}/surfaces/${fx.surfaceIds[0]}`).set(consultant()).send({ version: 1, label: "South wall (moved)", area_m2: 40 })).status).toBe(200);
+    const after = (await pdfPages(new Uint8Array((await report(fx, checker())).body as Buffer))).slice(1).join(" ");
+    expect(after).toBe(before);
+    expect(after).not.toContain("South wall (moved)");
+  });
+
+  test("a free-plan firm's revision report carries the “not for issue” mark", async () => {
+    const fx = await makeProject("tarnbrook-sill");
+    await acceptAll(fx.projectId, checkerId);
+    expect((await issue(fx)).status).toBe(201);
+    await clearPlan(firmId);
+    try {
+      const pages = await pdfPages(new Uint8Array((await report(fx, checker())).body as Buffer));
+      expect(pages.every((p) => p.includes("NOT FOR ISSUE"))).toBe(true);
+    } finally {
+      await grantPaidPlan(firmId);
+    }
   });
 });

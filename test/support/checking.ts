@@ -1,6 +1,7 @@
 // People and helpers for the checking tests: extra members with chosen roles (signed in with the
 // demo password), actors for calling services directly, and the audit rows of a project.
 import bcrypt from "bcryptjs";
+import type { Knex } from "knex";
 import type { Actor } from "../../src/server/auth/actor";
 import { testDb } from "./db";
 
@@ -49,4 +50,20 @@ export async function acceptAll(projectId: string, checkerId: number): Promise<v
       .onConflict(["project_id", "sheet", "row_id"])
       .merge(["state", "checked_by", "checked_at", "checked_row_version"]);
   }
+}
+
+/**
+ * E-mail jobs that earlier test files queued for a closed port are retried for hours; a test that
+ * reads its own e-mail would wait behind them. They are marked failed for good, through the
+ * queue's own admin function.
+ */
+export async function dropLeftoverEmailJobs(db: Knex): Promise<void> {
+  const { rows } = await db.raw("SELECT to_regclass('graphile_worker._private_jobs') IS NOT NULL AS ready");
+  if (!rows[0].ready) return; // no queue yet: nothing to drop
+  await db.raw(
+    `SELECT graphile_worker.permanently_fail_jobs(array_agg(j.id), 'left over by an earlier test file')
+       FROM graphile_worker._private_jobs j JOIN graphile_worker._private_tasks t ON t.id = j.task_id
+      WHERE t.identifier = 'send_email'
+     HAVING count(*) > 0`,
+  );
 }

@@ -99,3 +99,9 @@ export async function checkCounts(q: Q, firmId: string, projectId: string): Prom
   }
   return counts;
 }
+
+/** Every stored check state of a project by row id (rows without one are unchecked). */
+export async function checkStatesOf(q: Q, firmId: string, projectId: string): Promise<Record<string, TCheckState>> {
+  const rows = await q("row_checks").where({ firm_id: firmId, project_id: projectId }).select<{ row_id: string; state: TCheckState }[]>("row_id", "state");
+  return Object.fromEntries(rows.map((r) => [r.row_id, r.state]));
+}

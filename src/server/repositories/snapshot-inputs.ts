@@ -19,7 +19,7 @@ export async function loadSnapshotInputs(q: Knex | Knex.Transaction, firmId: str
     .where({ firm_id: firmId, project_id: projectId })
     .orderBy("id")
     .select("sheet", "row_id", "author_name", "kind", "body", "created_at");
-  const names = await userNames(q, stored.map((c) => c.checked_by));
+  const names = await userNames(q, stored.flatMap((c) => [c.checked_by, c.last_edited_by]));
   const byKey = new Map(stored.map((c) => [`${c.sheet} ${c.row_id}`, c]));
   const checks: SnapshotCheck[] = [...s.surfaces.map((r) => ["surfaces", r.id] as const), ...s.duct_runs.map((r) => ["duct_runs", r.id] as const)].map(([sheet, id]) => {
     const c = byKey.get(`${sheet} ${id}`);
@@ -35,6 +35,7 @@ export async function loadSnapshotInputs(q: Knex | Knex.Transaction, firmId: str
     surfaces: s.surfaces,
     duct_runs: s.duct_runs,
     checks,
+    authors: [...new Set(stored.map((c) => (c.last_edited_by === null ? undefined : names.get(c.last_edited_by))).filter((n): n is string => n !== undefined))].sort(),
     // Threads of rows deleted since are history, not part of what is issued.
     comments: comments.filter((c) => rows.has(`${c.sheet} ${c.row_id}`)).map((c) => ({ ...c, created_at: iso(c.created_at)! })),
   };

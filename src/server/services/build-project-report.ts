@@ -3,6 +3,9 @@ import { buildReport, type BuiltReport } from "@/report/build-report";
 import { reportUnits } from "@/report/units-adapter";
 import { engineDesignCase, engineSchedule } from "@/schedule/engine-schedule";
 import type { Actor } from "@/server/auth/actor";
+import { describeReportProject } from "./describe-report-project";
+import { db } from "@/server/db/knex";
+import { checkStatesOf } from "@/server/repositories/row-checks";
 import { getScheduleOrThrow } from "./get-schedule";
 
 /**
@@ -12,12 +15,15 @@ import { getScheduleOrThrow } from "./get-schedule";
  */
 export async function buildProjectReport(actor: Actor, projectId: string): Promise<BuiltReport & { filename: string }> {
   const s = await getScheduleOrThrow(actor, projectId);
+  // Each row's check state as it stands, for the row tables.
+  const checks = await checkStatesOf(db(), actor.firm.id, projectId);
   const p = s.project;
+  const site = describeReportProject(p);
   const built = buildReport({
     meta: {
-      projectName: p.name,
-      projectReference: p.reference,
-      siteDescription: `${p.terrain} terrain, ${p.altitude_m} m above sea level, ${p.wind_law}-law wind profile`,
+      projectName: site.projectName,
+      projectReference: site.projectReference,
+      siteDescription: site.siteDescription,
       firmName: actor.firm.name,
       author: actor.name ?? actor.email ?? "API token",
       checker: null,
@@ -29,8 +35,8 @@ export async function buildProjectReport(actor: Actor, projectId: string): Promi
     },
     schedule: engineSchedule(s),
     designCases: s.design_cases.map(engineDesignCase),
+    checks,
     convert: reportUnits(p.unit_system),
   });
-  const safe = p.reference.replace(/[^A-Za-z0-9._-]+/g, "-");
-  return { ...built, filename: `${safe}-draft-report.pdf` };
+  return { ...built, filename: `${site.fileStem}-draft-report.pdf` };
 }

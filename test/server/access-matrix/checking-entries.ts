@@ -2,6 +2,8 @@
 // read by consultants, checkers and admins, not viewers; issued revisions by everyone in the firm.
 // Checkers alone accept, query and issue; consultants ask for a check; both write in threads.
 // Each entry works on a fixture project of its own, so the demo project is left as seeded.
+import { buildSnapshot } from "@/checking/build-snapshot";
+import { loadSnapshotInputs } from "@/server/repositories/snapshot-inputs";
 import { testDb } from "../../support/db";
 import { acceptAll } from "../../support/checking";
 import { makeProject, type FixtureProject } from "../../support/schedule-fixtures";
@@ -24,7 +26,9 @@ function readProject(): Promise<FixtureProject> {
   shared ??= (async () => {
     const fx = await makeProject("tarnbrook-sill");
     const checker = await testDb()("users").where({ email: "checker@demo.filmsheet.test" }).first("id");
-    const snapshot = JSON.stringify({ format: 1, project: {}, design_cases: [], zones: [], buildups: [], surfaces: [], duct_runs: [], results: [], checks: [], comments: [] });
+    await acceptAll(fx.projectId, checker.id);
+    // The project frozen as the issuing service freezes it (twice: A and B are the same here).
+    const snapshot = JSON.stringify(buildSnapshot((await loadSnapshotInputs(testDb(), fx.firmId, fx.projectId))!));
     await testDb()("revisions").insert(["A", "B"].map((letter, i) => ({ firm_id: fx.firmId, project_id: fx.projectId, sequence: i + 1, letter, issued_by: checker.id, issued_by_name: "Solveig Prynne", snapshot })));
     return fx;
   })();
@@ -67,6 +71,7 @@ export const CHECKING_ENTRIES: MatrixEntry[] = [
     expect: only(201, "checker"),
   },
   { file: "projects/[projectId]/revisions/[letter]/route.ts", method: "GET", request: async () => ({ path: `/api/projects/${(await readProject()).projectId}/revisions/A` }), expect: anyone(200) },
+  { file: "projects/[projectId]/revisions/[letter]/report/route.ts", method: "GET", request: async () => ({ path: `/api/projects/${(await readProject()).projectId}/revisions/A/report` }), expect: anyone(200) },
   { file: "projects/[projectId]/revisions/compare/route.ts", method: "GET", request: async () => ({ path: `/api/projects/${(await readProject()).projectId}/revisions/compare?from=A&to=B` }), expect: anyone(200) },
   { file: "projects/[projectId]/notifications/route.ts", method: "GET", request: async () => ({ path: `/api/projects/${(await readProject()).projectId}/notifications` }), expect: anyone(200) },
   // E-mail settings belong to a person: an API token is refused.

@@ -36,7 +36,13 @@ export function RevisionView({ revision, caseId }: { revision: TRevision; caseId
           </Link>{" "}
           / {s.project.reference}
         </p>
-        <h2 className="text-title font-semibold">Revision {revision.letter}</h2>
+        <div className="flex flex-wrap items-end justify-between gap-3">
+          <h2 className="text-title font-semibold">Revision {revision.letter}</h2>
+          {/* A plain link: the browser downloads the PDF the server builds from the frozen snapshot. */}
+          <a href={`/api/projects/${pid}/revisions/${revision.letter}/report`} download className="rounded-chip border border-line bg-surface px-3 py-1.5 text-small font-semibold hover:bg-sunken">
+            Report of revision {revision.letter} (PDF)
+          </a>
+        </div>
         <p className="text-small text-muted">
           {s.project.name} · issued by {revision.issued_by_name}, {when(revision.issued_at)} · {revision.rows} rows, all accepted{checkers ? ` (checked by ${checkers})` : ""}
         </p>
