@@ -23,7 +23,8 @@ function caseTitle(w: Writer, input: ReportInput, r: ScheduleResults): void {
   w.y += 5;
 }
 
-export function surfaceTables(w: Writer, input: ReportInput, results: ScheduleResults[]): void {
+/** Section 5, one table per design case; yields after each (a large table takes a while). */
+export function* surfaceTables(w: Writer, input: ReportInput, results: ScheduleResults[]): Generator<void, void> {
   const c = input.convert;
   const zones = new Map(input.schedule.zones.map((z) => [z.id, z.name]));
   w.heading("5  External surfaces");
@@ -46,10 +47,12 @@ export function surfaceTables(w: Writer, input: ReportInput, results: ScheduleRe
       }),
     });
     w.afterTable();
+    yield;
   }
 }
 
-export function ductTables(w: Writer, input: ReportInput, results: ScheduleResults[]): void {
+/** Section 6, one table per design case; yields after each. */
+export function* ductTables(w: Writer, input: ReportInput, results: ScheduleResults[]): Generator<void, void> {
   const c = input.convert;
   const zones = new Map(input.schedule.zones.map((z) => [z.id, z.name]));
   w.heading("6  Duct runs");
@@ -73,6 +76,7 @@ export function ductTables(w: Writer, input: ReportInput, results: ScheduleResul
       }),
     });
     w.afterTable();
+    yield;
   }
 }
 
@@ -97,8 +101,12 @@ export function warningsList(w: Writer, input: ReportInput, results: ScheduleRes
   return rows.length;
 }
 
-/** Appendix: the working of every row in every design case, two columns of compact lines. */
-export function workingsAppendix(w: Writer, input: ReportInput, items: { label: string; dc: DesignCase; working: Working }[]): void {
+/**
+ * Appendix: the working of every row in every design case, two columns of compact lines. A
+ * generator: it yields the number of workings written after every `every` of them, so a caller
+ * can report progress (and let other work run) while a large appendix is written.
+ */
+export function* workingsAppendix(w: Writer, input: ReportInput, items: { label: string; dc: DesignCase; working: Working }[], every = 25): Generator<number, void> {
   w.newPage();
   w.heading("Appendix A  Workings");
   w.paragraph("Each row's derivation for each design case, in calculation order, as the engine computed it (inputs are in sections 5 and 6).", 8, MUTED);
@@ -145,6 +153,7 @@ export function workingsAppendix(w: Writer, input: ReportInput, items: { label: 
     else for (const part of doc.splitTextToSize(text, colW) as string[]) line(part);
   };
   doc.setFontSize(6.3);
+  let written = 0;
   for (const it of items) {
     if (w.y + lh * 6 > w.bottom) w.y = w.bottom; // start a block at the top of the next column
     line(pdfText(`${it.label} - ${it.dc.name}`), true, ACCENT[0]);
@@ -163,6 +172,7 @@ export function workingsAppendix(w: Writer, input: ReportInput, items: { label: 
       flush();
       runY = w.y;
     }
+    if (++written % every === 0) yield written;
   }
   flush();
 }

@@ -1,12 +1,13 @@
-// The demo firm upgrades in a real browser: the free plan stops the consultant at one project,
-// the admin buys seats on the Stripe stand-in's Checkout page, the signed webhook makes the firm
-// paid, and the consultant's second project is then saved. (The free plan's 40-row limit is
-// checked by the same service once the schedule exists; here the project limit stands for it.)
+// The demo firm upgrades in a real browser: the free plan stops the consultant at 40 rows in the
+// demo project (its seeded schedule already holds 50) and at one project; the admin buys seats on
+// the Stripe stand-in's Checkout page, the signed webhook makes the firm paid, and the row and the
+// consultant's second project are then saved.
 import { expect, test, type Browser, type Page } from "@playwright/test";
 import knexFactory, { type Knex } from "knex";
 
 const PASSWORD = process.env.DEMO_PASSWORD || "filmsheet-demo";
 let db: Knex;
+const started = new Date();
 
 async function signedIn(browser: Browser, email: string): Promise<Page> {
   const page = await (await browser.newContext()).newPage();
@@ -37,12 +38,24 @@ test.beforeAll(async () => {
   await demoFirmFree();
 });
 test.afterAll(async () => {
+  // The row this test added to the demo project goes again, so later suites see the seeded schedule.
+  const added = await db("surfaces").where("label", "like", "% (new)").where("created_at", ">=", started).pluck("id");
+  await db("row_checks").whereIn("row_id", added).delete();
+  await db("surfaces").whereIn("id", added).delete();
   await demoFirmFree();
   await db.destroy();
 });
 
-test("the demo admin upgrades through Checkout, and the consultant's second project becomes possible", async ({ browser }) => {
-  test.setTimeout(60_000);
+/** The demo project's rows (surfaces and duct runs) as stored. */
+async function demoRows(): Promise<number> {
+  const p = await db("projects").where({ reference: "TS-2417" }).first("id");
+  const [{ s }] = await db("surfaces").where({ project_id: p.id }).count({ s: "*" });
+  const [{ d }] = await db("duct_runs").where({ project_id: p.id }).count({ d: "*" });
+  return Number(s) + Number(d);
+}
+
+test("the demo admin upgrades through Checkout; a row beyond the free 40 and the consultant's second project become possible", async ({ browser }) => {
+  test.setTimeout(90_000);
   const reference = `TS-E2E-${Date.now().toString(36).toUpperCase()}`;
 
   // On the free plan the consultant sees the limits and is refused a second project.
@@ -52,6 +65,14 @@ test("the demo admin upgrades through Checkout, and the consultant's second proj
   await createProject(consultant, reference);
   await expect(consultant.getByRole("main").getByRole("alert")).toContainText("The free plan holds 1 project");
   await expect(consultant.getByRole("cell", { name: reference })).toHaveCount(0);
+
+  // Nor may the demo project (50 rows as seeded) take another row: the free plan holds 40.
+  const rowsBefore = await demoRows();
+  expect(rowsBefore).toBeGreaterThan(40);
+  await consultant.getByRole("link", { name: "TS-2417" }).click();
+  await consultant.getByRole("button", { name: "Add row" }).click();
+  await expect(consultant.getByRole("alert").filter({ hasText: "The free plan holds 40 rows per project" })).toContainText(`this change would make ${rowsBefore + 1}`);
+  expect(await demoRows()).toBe(rowsBefore);
 
   // The admin follows the upgrade path to the billing page and on to Checkout.
   const admin = await signedIn(browser, "admin@demo.filmsheet.test");
@@ -80,8 +101,13 @@ test("the demo admin upgrades through Checkout, and the consultant's second proj
   await expect(admin.getByRole("region", { name: "Invoices" })).toContainText("paid");
   await expect(admin.getByRole("button", { name: "Change seats" })).toBeVisible();
 
-  // The consultant's projects page no longer shows the limits, and the project is saved.
-  await consultant.reload();
+  // The consultant's row is now saved …
+  await consultant.getByRole("button", { name: "Add row" }).click();
+  await expect.poll(demoRows).toBe(rowsBefore + 1);
+  await expect(consultant.getByRole("alert").filter({ hasText: "The free plan holds 40 rows" })).toHaveCount(0);
+
+  // … the projects page no longer shows the limits, and the second project is saved.
+  await consultant.goto("/projects");
   await expect(consultant.getByRole("complementary", { name: "Plan" })).toHaveCount(0);
   await createProject(consultant, reference);
   await expect(consultant.getByRole("status")).toHaveText(`Project ${reference} created`);

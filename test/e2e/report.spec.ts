@@ -1,16 +1,24 @@
-// The consultant downloads the demo project's draft calculation report from the project page.
+// The consultant asks for the demo project's draft calculation report on the project page, follows
+// the report job's progress bar and downloads the PDF.
 import { expect, test } from "@playwright/test";
 
 const PASSWORD = process.env.DEMO_PASSWORD || "filmsheet-demo";
 test.describe.configure({ timeout: 90_000 });
 
-test("the consultant downloads the draft report as a PDF", async ({ page }) => {
+test("the consultant follows the draft report's progress and downloads the PDF", async ({ page }) => {
   await page.goto("/sign-in?callbackUrl=%2Fprojects");
   await page.getByLabel("E-mail", { exact: true }).fill("consultant@demo.filmsheet.test");
   await page.getByLabel("Password").fill(PASSWORD);
   await page.getByRole("button", { name: "Sign in", exact: true }).click();
   await page.getByRole("link", { name: "TS-2417" }).click();
-  const [download] = await Promise.all([page.waitForEvent("download", { timeout: 60_000 }), page.getByRole("link", { name: "Draft report (PDF)" }).click()]);
+  await page.getByRole("button", { name: "Draft report (PDF)" }).click();
+  // The job's progress, shown until it is done (the page polls twice a second).
+  await expect(page.getByRole("progressbar", { name: "Draft report progress" })).toBeVisible();
+  const link = page.getByRole("link", { name: "Download draft report (PDF)" });
+  await expect(link).toBeVisible({ timeout: 60_000 });
+  await expect(page.getByText(/\d+ pages, marked “not for issue”/)).toBeVisible();
+  await expect(page.getByRole("progressbar", { name: "Draft report progress" })).toHaveCount(0);
+  const [download] = await Promise.all([page.waitForEvent("download", { timeout: 60_000 }), link.click()]);
   expect(download.suggestedFilename()).toBe("TS-2417-draft-report.pdf");
   const stream = await download.createReadStream();
   const chunks: Buffer[] = [];
@@ -27,5 +35,5 @@ test("the viewer is not offered the draft report", async ({ page }) => {
   await page.getByRole("button", { name: "Sign in", exact: true }).click();
   await page.getByRole("link", { name: "TS-2417" }).click();
   await expect(page.getByRole("heading", { level: 1 })).toBeVisible();
-  await expect(page.getByRole("link", { name: "Draft report (PDF)" })).toHaveCount(0);
+  await expect(page.getByRole("button", { name: "Draft report (PDF)" })).toHaveCount(0);
 });

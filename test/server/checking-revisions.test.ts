@@ -247,14 +247,16 @@ describe("an issued revision's report", () => {
     expect(after).not.toContain("South wall (moved)");
   });
 
-  test("a free-plan firm's revision report carries the “not for issue” mark", async () => {
+  test("is stored as first built: the same bytes every time, even after the firm's plan lapses", async () => {
     const fx = await makeProject("tarnbrook-sill");
     await acceptAll(fx.projectId, checkerId);
     expect((await issue(fx)).status).toBe(201);
+    const first = (await report(fx, checker())).body as Buffer;
     await clearPlan(firmId);
     try {
-      const pages = await pdfPages(new Uint8Array((await report(fx, checker())).body as Buffer));
-      expect(pages.every((p) => p.includes("NOT FOR ISSUE"))).toBe(true);
+      const again = (await report(fx, as["viewer@demo.filmsheet.test"])).body as Buffer;
+      expect(again.equals(first)).toBe(true);
+      expect((await pdfPages(new Uint8Array(again))).join(" ")).not.toContain("NOT FOR ISSUE");
     } finally {
       await grantPaidPlan(firmId);
     }

@@ -22,6 +22,8 @@ const TABLES = [
   "notification_mutes",
   "password_resets",
   "projects",
+  "report_builds",
+  "revision_reports",
   "revisions",
   "row_checks",
   "row_comments",

@@ -2,7 +2,7 @@
 // carry the cover, every zone total and every row label, with the engine's own numbers.
 import { describe, expect, test } from "vitest";
 import { scheduleResults } from "../../src/calc/index";
-import { buildReport } from "../../src/report/build-report";
+import { buildReport, buildReportAsync, type ReportProgress } from "../../src/report/build-report";
 import { num } from "../../src/report/format";
 import type { ReportMeta } from "../../src/report/types";
 import { pdfPages } from "../support/pdf-text";
@@ -62,5 +62,19 @@ describe("calculation report", { timeout: 60_000 }, () => {
   test("the page count grows with the rows", () => {
     const bigger = buildReport({ meta, schedule: sampleSchedule(96, 12), designCases: SAMPLE_CASES });
     expect(bigger.pages).toBeGreaterThan(draft.pages);
+  });
+
+  test("built in steps, it reports progress that only grows from 0 to 1, and makes the same report", async () => {
+    const seen: ReportProgress[] = [];
+    const stepped = await buildReportAsync({ meta, schedule, designCases: SAMPLE_CASES }, (p) => void seen.push(p));
+    expect(stepped.pages).toBe(draft.pages);
+    expect(stepped.warnings).toBe(draft.warnings);
+    expect((await pages(stepped.pdf)).slice(1)).toEqual((await pages(draft.pdf)).slice(1));
+    // 28 rows × 3 cases = 84 workings: a step every 25 while working through them and writing the appendix.
+    expect(seen.length).toBeGreaterThan(8);
+    for (let i = 1; i < seen.length; i++) expect(seen[i]!.fraction).toBeGreaterThanOrEqual(seen[i - 1]!.fraction);
+    expect(seen[0]!.fraction).toBeLessThan(0.2);
+    expect(seen.at(-1)).toEqual({ fraction: 1, stage: "Done" });
+    expect(new Set(seen.map((p) => p.stage))).toEqual(new Set(["Working through every row", "Writing the sections and row tables", "Writing the appendix of workings", "Numbering the pages", "Done"]));
   });
 });

@@ -4,6 +4,8 @@ import { db } from "@/server/db/knex";
 import { env } from "@/server/env";
 import { ZEmailMessage } from "@/server/email/message";
 import { sendEmail } from "@/server/email/send-email";
+import { BUILD_REPORT_TASK } from "@/server/reports/report-builds";
+import { runReportBuild } from "@/server/reports/run-report-build";
 import { ensureJobSchema } from "./job-schema";
 
 type Holder = { __filmsheetWorker?: Promise<Runner>; __filmsheetStopWorker?: () => Promise<void> };
@@ -31,12 +33,17 @@ export function startJobWorker(): Promise<Runner> {
       logger,
       taskList: {
         send_email: async (payload) => sendEmail(ZEmailMessage.parse(payload)),
+        [BUILD_REPORT_TASK]: async (payload) => runReportBuild(String((payload as { buildId?: unknown }).buildId)),
         // Attempts older than a day no longer count toward any limit.
         prune_sign_in_attempts: async () => {
           await db()("sign_in_attempts").where("created_at", "<", db().raw("now() - interval '1 day'")).delete();
         },
+        // Draft reports are kept a day (an issued revision's report is kept for good).
+        prune_draft_reports: async () => {
+          await db()("report_builds").where({ kind: "draft" }).where("created_at", "<", db().raw("now() - interval '1 day'")).delete();
+        },
       },
-      crontab: "17 * * * * prune_sign_in_attempts",
+      crontab: "17 * * * * prune_sign_in_attempts\n23 * * * * prune_draft_reports",
     });
     holder.__filmsheetStopWorker = () => runner.stop();
     return runner;

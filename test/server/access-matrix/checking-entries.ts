@@ -35,6 +35,19 @@ function readProject(): Promise<FixtureProject> {
   return shared;
 }
 
+let finished: Promise<string> | undefined;
+/** A finished draft report build of the read-only project (its PDF a stand-in: only access is tested). */
+function draftBuild(): Promise<string> {
+  finished ??= (async () => {
+    const fx = await readProject();
+    const [b] = await testDb()("report_builds")
+      .insert({ firm_id: fx.firmId, project_id: fx.projectId, kind: "draft", status: "done", progress: 1, stage: "Done", watermark: true, requested_by_name: "Matrix", filename: "matrix.pdf", pages: 1, pdf: Buffer.from("%PDF-1.4\n%%EOF\n"), byte_size: 15, finished_at: new Date() })
+      .returning("id");
+    return `/api/projects/${fx.projectId}/reports/${b.id}`;
+  })();
+  return finished;
+}
+
 const SHEETS: [string, "surfaceIds" | "ductRunIds"][] = [
   ["surfaces", "surfaceIds"],
   ["duct-runs", "ductRunIds"],
@@ -72,6 +85,10 @@ export const CHECKING_ENTRIES: MatrixEntry[] = [
   },
   { file: "projects/[projectId]/revisions/[letter]/route.ts", method: "GET", request: async () => ({ path: `/api/projects/${(await readProject()).projectId}/revisions/A` }), expect: anyone(200) },
   { file: "projects/[projectId]/revisions/[letter]/report/route.ts", method: "GET", request: async () => ({ path: `/api/projects/${(await readProject()).projectId}/revisions/A/report` }), expect: anyone(200) },
+  // Report builds: drafts are asked for and read by the people who work on the schedule.
+  { file: "projects/[projectId]/reports/route.ts", method: "POST", request: async () => ({ path: `/api/projects/${(await readProject()).projectId}/reports`, body: { kind: "draft" } }), expect: draftReaders(202) },
+  { file: "projects/[projectId]/reports/[buildId]/route.ts", method: "GET", request: async () => ({ path: await draftBuild() }), expect: draftReaders(200) },
+  { file: "projects/[projectId]/reports/[buildId]/pdf/route.ts", method: "GET", request: async () => ({ path: `${await draftBuild()}/pdf` }), expect: draftReaders(200) },
   { file: "projects/[projectId]/revisions/compare/route.ts", method: "GET", request: async () => ({ path: `/api/projects/${(await readProject()).projectId}/revisions/compare?from=A&to=B` }), expect: anyone(200) },
   { file: "projects/[projectId]/notifications/route.ts", method: "GET", request: async () => ({ path: `/api/projects/${(await readProject()).projectId}/notifications` }), expect: anyone(200) },
   // E-mail settings belong to a person: an API token is refused.

@@ -3,6 +3,7 @@
 import Link from "next/link";
 import { usePathname } from "next/navigation";
 import { labelOf, METHOD_OPTIONS, TERRAIN_OPTIONS } from "@/schemas/schedule-fields";
+import { DraftReportButton } from "@/components/reports/report-build";
 import { useProject, useSchedule } from "@/components/schedule/schedule-context";
 import { formatQuantity } from "@/units/format";
 import { unitLabel } from "@/units/units";
@@ -41,16 +42,7 @@ export function ProjectHeader({ canReport }: { canReport: boolean }) {
             {canEdit ? "" : " · read only"}
           </p>
         </div>
-        {canReport && (
-          // A plain link: the browser downloads the PDF the server builds from the stored schedule.
-          <a
-            href={`/api/projects/${p.id}/report`}
-            download
-            className="rounded-chip border border-line bg-surface px-3 py-1.5 text-small font-semibold hover:bg-sunken"
-          >
-            Draft report (PDF)
-          </a>
-        )}
+        {canReport && <DraftReportButton projectId={p.id} />}
       </div>
       <nav aria-label="Project" className="flex gap-1 overflow-x-auto border-b border-line">
         {TABS.map((t) => {

@@ -4,11 +4,13 @@ import { revisionPath, revisionsPath } from "@/checking/paths";
 import { when } from "@/components/checking/when";
 import { EngineeringCaution } from "@/components/engineering-caution";
 import { Panel } from "@/components/panel";
+import { RevisionReportLink } from "@/components/reports/report-build";
+import type { TReportBuild } from "@/schemas/reports";
 import type { TRevision } from "@/server/services/get-revision";
 import { DUCT_COLS, RevisionRows, SURFACE_COLS, num, type FrozenRow } from "./revision-rows";
 
 /** An issued revision as it was frozen: zone totals and every row's results for one design case. */
-export function RevisionView({ revision, caseId }: { revision: TRevision; caseId?: string }) {
+export function RevisionView({ revision, caseId, reportBuild }: { revision: TRevision; caseId?: string; reportBuild: TReportBuild | null }) {
   const s = revision.snapshot;
   const pid = s.project.id;
   const dc = s.design_cases.find((d) => d.id === caseId) ?? s.design_cases[0];
@@ -38,10 +40,7 @@ export function RevisionView({ revision, caseId }: { revision: TRevision; caseId
         </p>
         <div className="flex flex-wrap items-end justify-between gap-3">
           <h2 className="text-title font-semibold">Revision {revision.letter}</h2>
-          {/* A plain link: the browser downloads the PDF the server builds from the frozen snapshot. */}
-          <a href={`/api/projects/${pid}/revisions/${revision.letter}/report`} download className="rounded-chip border border-line bg-surface px-3 py-1.5 text-small font-semibold hover:bg-sunken">
-            Report of revision {revision.letter} (PDF)
-          </a>
+          <RevisionReportLink projectId={pid} letter={revision.letter} initial={reportBuild} />
         </div>
         <p className="text-small text-muted">
           {s.project.name} · issued by {revision.issued_by_name}, {when(revision.issued_at)} · {revision.rows} rows, all accepted{checkers ? ` (checked by ${checkers})` : ""}
