@@ -71,8 +71,11 @@ test("the demo admin upgrades through Checkout; a row beyond the free 40 and the
   expect(rowsBefore).toBeGreaterThan(40);
   await consultant.getByRole("link", { name: "TS-2417" }).click();
   await consultant.getByRole("button", { name: "Add row" }).click();
-  await expect(consultant.getByRole("alert").filter({ hasText: "The free plan holds 40 rows per project" })).toContainText(`this change would make ${rowsBefore + 1}`);
+  const refusal = consultant.getByRole("alert").filter({ hasText: "The free plan holds 40 rows per project" });
+  await expect(refusal).toContainText(`this change would make ${rowsBefore + 1}`);
   expect(await demoRows()).toBe(rowsBefore);
+  await refusal.getByRole("button", { name: "Dismiss" }).click();
+  await expect(refusal).toHaveCount(0);
 
   // The admin follows the upgrade path to the billing page and on to Checkout.
   const admin = await signedIn(browser, "admin@demo.filmsheet.test");

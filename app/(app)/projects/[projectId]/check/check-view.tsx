@@ -5,6 +5,7 @@ import { StateBadge } from "@/components/checking/state-badge";
 import { SectionHeader } from "@/components/checking/section-header";
 import { Panel } from "@/components/panel";
 import type { CheckBoard } from "@/server/services/get-check-board";
+import { PaidOnlyNote } from "@/components/billing/paid-only-note";
 import { AcceptListedForm, IssueRevisionForm, RequestCheckForm } from "../_checking/check-forms";
 import { MuteForm } from "../_checking/mute-form";
 
@@ -25,7 +26,7 @@ function FilterLink({ projectId, filter, to, children }: { projectId: string; fi
 }
 
 /** The check view: counts, filters, every row with its state, and the moves open to this person. */
-export function CheckView({ board, filter, muted, canCheck, canRequest, userId }: { board: CheckBoard; filter: Filter; muted: boolean; canCheck: boolean; canRequest: boolean; userId: number | null }) {
+export function CheckView({ board, filter, muted, canCheck, canRequest, userId, freePlan }: { board: CheckBoard; filter: Filter; muted: boolean; canCheck: boolean; canRequest: boolean; userId: number | null; freePlan: { isAdmin: boolean } | null }) {
   const { project, counts, rows } = board;
   const pid = project.id;
   const accepted = counts.rows === 0 ? 0 : Math.round((100 * counts.accepted) / counts.rows);
@@ -63,7 +64,7 @@ export function CheckView({ board, filter, muted, canCheck, canRequest, userId }
         ) : null}
         {canCheck ? (
           <Panel title={`Revision ${board.next_revision}`} lead={ready ? "Every row is accepted: the schedule can be issued." : `Issuing needs every row accepted: ${counts.rows - counts.accepted} to go.`}>
-            <IssueRevisionForm projectId={pid} letter={board.next_revision} open={counts.rows === 0 ? 1 : counts.rows - counts.accepted} />
+            {freePlan ? <PaidOnlyNote what="Issuing a revision" isAdmin={freePlan.isAdmin} /> : <IssueRevisionForm projectId={pid} letter={board.next_revision} open={counts.rows === 0 ? 1 : counts.rows - counts.accepted} />}
           </Panel>
         ) : null}
       </div>

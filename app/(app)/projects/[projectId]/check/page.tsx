@@ -9,6 +9,7 @@ import { DRAFT_READERS } from "@/server/checking/roles";
 import { AppError } from "@/server/http/app-error";
 import { getCheckBoard } from "@/server/services/get-check-board";
 import { getNotificationMute } from "@/server/services/get-notification-mute";
+import { getPlan } from "@/server/services/get-plan";
 import { CheckView } from "./check-view";
 
 export const metadata: Metadata = { title: "Check" };
@@ -20,7 +21,7 @@ export default async function CheckPage({ params, searchParams }: { params: Prom
   // Viewers read what was issued, never the draft.
   if (!hasAnyRole(actor, DRAFT_READERS)) redirect(revisionsPath(projectId));
   const filter = ZBoardQuery.safeParse(await searchParams);
-  const [board, mute] = await Promise.all([getCheckBoard(actor, projectId, filter.success ? filter.data : {}), getNotificationMute(actor, projectId)]).catch((error: unknown) => {
+  const [board, mute, plan] = await Promise.all([getCheckBoard(actor, projectId, filter.success ? filter.data : {}), getNotificationMute(actor, projectId), getPlan(actor.firm.id)]).catch((error: unknown) => {
     if (error instanceof AppError && error.code === "not_found") notFound();
     throw error;
   });
@@ -32,6 +33,7 @@ export default async function CheckPage({ params, searchParams }: { params: Prom
       canCheck={hasAnyRole(actor, ["checker"]) && actor.userId !== null}
       canRequest={hasAnyRole(actor, ["consultant"])}
       userId={actor.userId}
+      freePlan={plan.limits.revisions ? null : { isAdmin: hasAnyRole(actor, ["admin"]) }}
     />
   );
 }

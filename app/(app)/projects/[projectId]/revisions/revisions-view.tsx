@@ -2,13 +2,14 @@ import Link from "next/link";
 import { checkPath, revisionPath } from "@/checking/paths";
 import { when } from "@/components/checking/when";
 import { SectionHeader } from "@/components/checking/section-header";
+import { PaidOnlyNote } from "@/components/billing/paid-only-note";
 import { Panel } from "@/components/panel";
 import type { TProject } from "@/schemas/project";
 import type { TRevisionSummary } from "@/server/services/issue-revision";
 import { MuteForm } from "../_checking/mute-form";
 
 /** A project's issued revisions, latest first, and a form to compare two of them. */
-export function RevisionsView({ project, revisions, muted, readsDraft }: { project: TProject; revisions: TRevisionSummary[]; muted: boolean; readsDraft: boolean }) {
+export function RevisionsView({ project, revisions, muted, readsDraft, freePlan }: { project: TProject; revisions: TRevisionSummary[]; muted: boolean; readsDraft: boolean; freePlan: { isAdmin: boolean } | null }) {
   return (
     <div className="grid gap-6">
       <SectionHeader title="Revisions" lead={<>Issued copies of the schedule of {project.reference} {project.name}: each is frozen as it was issued, with its results, checks and comments.</>}>
@@ -18,6 +19,7 @@ export function RevisionsView({ project, revisions, muted, readsDraft }: { proje
           </Link>
         ) : null}
       </SectionHeader>
+      {freePlan ? <PaidOnlyNote what="Issuing revisions" isAdmin={freePlan.isAdmin} /> : null}
       <Panel title="Issued" lead={revisions.length === 0 ? "Nothing has been issued yet" : `${revisions.length} ${revisions.length === 1 ? "revision" : "revisions"}`}>
         {revisions.length === 0 ? (
           <p className="text-small text-muted">A checker issues revision A once every row of the schedule is accepted.</p>
