@@ -11,6 +11,9 @@ export { airProperties } from "./properties/air";
 export { zoneTotals } from "./zone";
 export { KIND_NAMES } from "./kinds";
 export { calculate, calculateCase } from "./calculate";
+export { EXTERIOR_METHODS, type ExteriorMethod } from "./surface";
+export type { Terrain } from "./wind/wind-profile";
+export type { WindLaw } from "./kinds/wind";
 
 export * from "./schedule/types";
 export { buildupResistance, ductRunCase, insideTemperature, solarOnSurface, surfaceCase } from "./schedule/cases";

@@ -3,10 +3,8 @@
  * every design case (so a revision shows what was issued even if the engine later improves), and
  * the check states and comments of its rows.
  */
-import { scheduleResults, type Schedule } from "@/calc/index";
+import { scheduleResults, type ExteriorMethod, type Schedule, type Terrain, type WindLaw } from "@/calc/index";
 import type { RevisionSnapshot } from "./snapshot";
-
-type Site = Schedule["site"];
 
 type Inputs = Omit<RevisionSnapshot, "format" | "results">;
 
@@ -14,7 +12,7 @@ type Inputs = Omit<RevisionSnapshot, "format" | "results">;
 export function snapshotSchedule(s: Pick<RevisionSnapshot, "project" | "zones" | "buildups" | "surfaces" | "duct_runs">): Schedule {
   const p = s.project;
   return {
-    site: { altitude_m: p.altitude_m, terrain: p.terrain as Site["terrain"], wind_law: p.wind_law as Site["wind_law"], method: p.default_method as Site["method"] },
+    site: { altitude_m: p.altitude_m, terrain: p.terrain as Terrain, wind_law: p.wind_law as WindLaw, method: p.default_method as ExteriorMethod },
     zones: s.zones,
     buildups: s.buildups,
     surfaces: s.surfaces,
