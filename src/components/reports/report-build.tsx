@@ -48,16 +48,13 @@ function BuildProgress({ build, label }: { build: TReportBuild; label: string })
 
 function Finished({ build, name }: { build: TReportBuild; name: string }) {
   return (
-    <span className="flex flex-wrap items-center gap-2">
-      <a href={build.download!} download className={LINK}>
-        {name}
-      </a>
-      <span className="text-small text-muted">
-        {build.pages} pages{build.watermark ? ", marked “not for issue”" : ""}
-      </span>
-    </span>
+    <a href={build.download!} download className={LINK}>
+      {name}
+    </a>
   );
 }
+
+const pagesNote = (build: TReportBuild) => `${build.pages} pages${build.watermark ? ", marked “not for issue”" : ""}`;
 
 /**
  * The draft report on the project page: asks the server's report job for it, shows the job's
@@ -85,6 +82,7 @@ export function DraftReportButton({ projectId }: { projectId: string }) {
           </button>
         </span>
       )}
+      {build?.status === "done" ? <p className="text-small text-muted">{pagesNote(build)}</p> : null}
       {build?.status === "failed" ? <p role="alert" className="text-small text-danger">The report could not be built: {build.error}</p> : null}
       {error ? <p role="alert" className="text-small text-danger">{error}</p> : null}
     </div>
