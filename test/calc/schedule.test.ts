@@ -93,6 +93,28 @@ describe("duct-run case", () => {
     expect(c.V_wind_m_s).toBeCloseTo(3 * Math.pow(27, 0.14) * Math.pow(12 / 370, 0.22), 9);
     expect(ductRunCase(site, winter, zone, duct).T_entering_C).toBe(35);
   });
+  test("outdoor run: radiates to half sky (Swinbank) and half ground at the outdoor air temperature", () => {
+    // Swinbank (1963), T_sky = 0.0552 T_air^1.5 (K); F_sky of a horizontal cylinder ½ (common
+    // practice, as a vertical plane: Duffie & Beckman §3.16); T_r⁴ = ½ T_sky⁴ + ½ T_ground⁴.
+    const T = -4 + 273.15;
+    const Tsky = 0.0552 * Math.pow(T, 1.5); // 243.7 K
+    const expected = Math.pow(0.5 * Tsky ** 4 + 0.5 * T ** 4, 0.25) - 273.15; // about −15.8 °C
+    const c = ductRunCase(site, winter, zone, duct);
+    expect(c.T_surround_C).toBeCloseTo(expected, 9);
+    expect(c.T_surround_C).toBeLessThan(-14);
+    expect(c.T_surround_C).toBeGreaterThan(-18);
+    // The cold sky takes the jacket below what air alone would leave it at.
+    const withSky = calculateCase(c);
+    const airOnly = calculateCase({ ...c, T_surround_C: c.T_ambient_C });
+    expect(withSky.ok && airOnly.ok).toBe(true);
+    if (withSky.ok && airOnly.ok) {
+      expect(withSky.T_surface_leaving_C as number).toBeLessThan(airOnly.T_surface_leaving_C as number);
+      expect(withSky.h_o_rad_W_m2K as number).toBeGreaterThan(0);
+    }
+    // Indoors, or in a space of its own temperature, no sky.
+    expect("T_surround_C" in ductRunCase(site, winter, zone, { ...duct, location: "indoor" })).toBe(false);
+    expect("T_surround_C" in ductRunCase(site, winter, zone, { ...duct, T_surround_C: 5 })).toBe(false);
+  });
   test("run in a ceiling void: the void's temperature, the zone's RH, no wind", () => {
     const c = ductRunCase(site, summer, zone, { ...duct, location: "indoor", T_surround_C: 28, shape: "rect", diameter_m: null, width_m: 0.6, height_m: 0.3 });
     expect(c).toMatchObject({ T_ambient_C: 28, RH_ambient_pct: 50, V_wind_m_s: 0, width_m: 0.6, height_m: 0.3 });

@@ -4,6 +4,7 @@
  * are plain contract requests, so the browser, the server and `npm run calc` compute them alike.
  */
 import { pressureAtAltitude } from "../properties/atmosphere";
+import { radiantTemperature, skyTemperatureSwinbank, skyViewFactor } from "../radiation/radiation";
 import { windSpeedLogLaw, windSpeedPowerLaw } from "../wind/wind-profile";
 import { ORIENTATIONS, type Buildup, type DesignCase, type DuctRunRow, type Site, type SolarTable, type SurfaceRow, type Zone } from "./types";
 
@@ -76,8 +77,22 @@ export const DEFAULT_DUCT_ELEVATION_M = 10;
  * outdoor temperature, the zone's inside RH otherwise, unless the row gives one; an outdoor run
  * sees the site wind at its elevation.
  */
+/**
+ * Radiant surround of a duct run out of doors, °C: a horizontal run sees the sky over its upper
+ * half and the ground below (view factor ½ each, as a vertical plane: common practice), the sky at
+ * Swinbank's clear-sky temperature and the ground at the outdoor air temperature. On a clear night
+ * this cools the jacket below the air around it, which is when outdoor ducts condense.
+ */
+export function outdoorDuctSurroundC(T_outdoor_C: number): number {
+  const T = T_outdoor_C + 273.15;
+  return radiantTemperature(skyViewFactor(90), skyTemperatureSwinbank(T), T) - 273.15;
+}
+
 export function ductRunCase(site: Site, dc: DesignCase, zone: Zone, row: DuctRunRow) {
   const outdoorAir = row.T_surround_C === null;
+  // Out of doors in the outdoor air: radiation to sky and ground (a run in a space of its own,
+  // T_surround_C given, radiates to that space).
+  const skyward = row.location === "outdoor" && outdoorAir;
   const T_ambient_C = outdoorAir ? dc.T_outdoor_C : (row.T_surround_C as number);
   const RH = row.RH_surround_pct ?? (row.location === "outdoor" || outdoorAir ? dc.RH_outdoor_pct : zone.RH_inside_pct);
   const z = row.elevation_m ?? DEFAULT_DUCT_ELEVATION_M;
@@ -105,5 +120,6 @@ export function ductRunCase(site: Site, dc: DesignCase, zone: Zone, row: DuctRun
     V_wind_m_s: wind,
     margin_K: row.margin_K,
     pressure_Pa: pressureAtAltitude(site.altitude_m),
+    ...(skyward ? { T_surround_C: outdoorDuctSurroundC(dc.T_outdoor_C) } : {}),
   };
 }
