@@ -31,7 +31,8 @@ export function RevisionsView({ project, revisions, muted, readsDraft, freePlan 
                 <th className="py-2 pr-3">Issued</th>
                 <th className="py-2 pr-3">By</th>
                 <th className="py-2 pr-3 text-right">Rows</th>
-                <th className="py-2">Note</th>
+                <th className="py-2 pr-3">Note</th>
+                <th className="py-2">Report</th>
               </tr>
             </thead>
             <tbody>
@@ -45,7 +46,13 @@ export function RevisionsView({ project, revisions, muted, readsDraft, freePlan 
                   <td className="py-1.5 pr-3">{when(r.issued_at)}</td>
                   <td className="py-1.5 pr-3">{r.issued_by_name}</td>
                   <td className="py-1.5 pr-3 text-right tabular-nums">{r.rows}</td>
-                  <td className="py-1.5 text-muted">{r.note || "—"}</td>
+                  <td className="py-1.5 pr-3 text-muted">{r.note || "—"}</td>
+                  <td className="py-1.5">
+                    {/* The PDF stored with the revision as it was issued. */}
+                    <a href={`/api/projects/${project.id}/revisions/${r.letter}/report`} download aria-label={`Report of revision ${r.letter} (PDF)`} className="text-accent underline-offset-2 hover:underline">
+                      PDF
+                    </a>
+                  </td>
                 </tr>
               ))}
             </tbody>
