@@ -139,7 +139,7 @@ test("a consultant and a checker take the demo project from draft to revision A,
   await issue.getByRole("button", { name: "Issue revision A" }).click();
   await expect(status(checker, "Revision A issued")).toBeVisible({ timeout: 60_000 });
   await tab(checker, "Revisions").click();
-  await checker.getByRole("link", { name: "Revision A" }).click();
+  await checker.getByRole("link", { name: "Revision A", exact: true }).click();
   await expect(checker.getByRole("heading", { level: 2, name: "Revision A" })).toBeVisible();
   await expect(checker.getByRole("note").filter({ hasText: "This revision is frozen" })).toBeVisible();
   await expect(checker.getByText("For tender")).toBeVisible();
@@ -148,10 +148,12 @@ test("a consultant and a checker take the demo project from draft to revision A,
   const viewer = await signedIn(browser, "viewer@demo.filmsheet.test");
   await viewer.getByRole("link", { name: "TS-2417" }).click();
   await expect(viewer).toHaveURL(/\/revisions$/);
-  await expect(viewer.getByRole("link", { name: "Revision A" })).toBeVisible();
+  await expect(viewer.getByRole("link", { name: "Revision A", exact: true })).toBeVisible();
   await expect(tab(viewer, "Schedule")).toHaveCount(0);
   await expect(tab(viewer, "Check")).toHaveCount(0);
-  await viewer.getByRole("link", { name: "Revision A" }).click();
+  // The revisions list offers the same stored PDF as the revision's own page.
+  await expect(viewer.getByRole("link", { name: "Report of revision A (PDF)" })).toHaveAttribute("href", /\/revisions\/A\/report$/);
+  await viewer.getByRole("link", { name: "Revision A", exact: true }).click();
   const [download] = await Promise.all([viewer.waitForEvent("download", { timeout: 60_000 }), viewer.getByRole("link", { name: "Report of revision A (PDF)" }).click()]);
   expect(download.suggestedFilename()).toBe("TS-2417-revision-A-report.pdf");
   await viewer.goto(rowUrl);
