@@ -6,6 +6,7 @@ import {
   buildupResistance,
   calculateCase,
   ductRunCase,
+  insideSurfaceResistance,
   pressureAtAltitude,
   scheduleResults,
   solarOnSurface,
@@ -56,6 +57,31 @@ describe("solar on a surface", () => {
   });
   test("an absent orientation counts as no sun", () => {
     expect(solarOnSurface({}, 90, 180)).toBe(0);
+  });
+});
+
+describe("inside surface resistance by the direction of heat flow", () => {
+  // ISO 6946:2017 Table 7 (from memory): R_si 0.10 upwards, 0.13 horizontal, 0.17 downwards;
+  // "horizontal" covers heat flow within ±30° of the horizontal plane.
+  test.each([
+    ["wall, heating", 90, 21, -4, 0.13],
+    ["wall, summer", 90, 24, 31, 0.13],
+    ["flat roof, heating (heat flows up)", 0, 21, -4, 0.1],
+    ["flat roof, summer (heat flows down)", 0, 24, 31, 0.17],
+    ["35° pitched roof, heating", 35, 21, -4, 0.1],
+    ["60° slope: 30° from the horizontal plane, still horizontal", 60, 21, -4, 0.13],
+    ["soffit over outside air, heating (heat flows down)", 180, 21, -4, 0.17],
+    ["soffit over outside air, summer (heat flows up)", 180, 24, 31, 0.1],
+  ] as const)("%s → %f", (_what, tilt, Tin, Tout, R) => {
+    expect(insideSurfaceResistance(tilt, Tin, Tout)).toBe(R);
+  });
+  test("the surface case carries it, and the roof's U follows", () => {
+    const roof = { ...row, tilt_deg: 0 };
+    expect(surfaceCase(site, winter, zone, wall, roof).R_si_m2K_W).toBe(0.1);
+    expect(surfaceCase(site, summer, zone, wall, roof).R_si_m2K_W).toBe(0.17);
+    const r = calculateCase(surfaceCase(site, winter, zone, wall, roof));
+    expect(r.ok).toBe(true);
+    if (r.ok) expect(1 / (r.U_W_m2K as number)).toBeCloseTo(0.1 + buildupResistance(wall) + 1 / (r.h_o_W_m2K as number), 9);
   });
 });
 

@@ -42,8 +42,24 @@ export function insideTemperature(zone: Zone, dc: DesignCase): number {
   return dc.kind === "heating" ? zone.T_heating_C : zone.T_cooling_C;
 }
 
+/**
+ * Inside surface resistance R_si, m²K/W, by the direction of heat flow (ISO 6946:2017, Table 7):
+ * 0.10 upwards, 0.13 horizontal (within ±30° of the horizontal plane), 0.17 downwards. Heat flows
+ * outward through the surface when the inside is the warmer side (the outward normal of a face
+ * at tilt t rises 90 − t degrees above the horizontal), inward otherwise: a roof is 0.10 in
+ * heating and 0.17 in summer, a soffit over outside air the other way round, a wall 0.13.
+ */
+export function insideSurfaceResistance(tiltDeg: number, T_inside_C: number, T_outside_C: number): number {
+  const outward = 90 - tiltDeg;
+  const flow = T_inside_C >= T_outside_C ? outward : -outward;
+  if (flow > 30) return 0.1;
+  if (flow < -30) return 0.17;
+  return 0.13;
+}
+
 /** The `surface` case of a row in a design case. */
 export function surfaceCase(site: Site, dc: DesignCase, zone: Zone, buildup: Buildup, row: SurfaceRow) {
+  const T_inside_C = insideTemperature(zone, dc);
   return {
     id: row.id,
     kind: "surface" as const,
@@ -54,7 +70,8 @@ export function surfaceCase(site: Site, dc: DesignCase, zone: Zone, buildup: Bui
     length_m: row.length_m,
     panel_height_m: row.panel_height_m,
     R_construction_m2K_W: buildupResistance(buildup),
-    T_inside_C: insideTemperature(zone, dc),
+    R_si_m2K_W: insideSurfaceResistance(row.tilt_deg, T_inside_C, dc.T_outdoor_C),
+    T_inside_C,
     T_outside_C: dc.T_outdoor_C,
     V_met_m_s: dc.V_met_m_s,
     wind_from_deg: dc.wind_from_deg,
