@@ -16,7 +16,7 @@ export type { Terrain } from "./wind/wind-profile";
 export type { WindLaw } from "./kinds/wind";
 
 export * from "./schedule/types";
-export { buildupResistance, ductRunCase, insideSurfaceResistance, insideTemperature, outdoorDuctSurroundC, solarOnSurface, surfaceCase } from "./schedule/cases";
+export { buildupResistance, ductRunCase, ductSurroundC, insideSurfaceResistance, insideTemperature, outdoorDuctSurroundC, solarOnSurface, surfaceCase } from "./schedule/cases";
 export { scheduleResults, type Schedule, type ScheduleResults, type RowResult } from "./schedule/results";
 export { working } from "./working/index";
 export type { Working, WorkingLine, MethodUsed, WorkingCharts, LocalHPoint, WindPoint } from "./working/index";

@@ -148,6 +148,70 @@ describe("duct-run case", () => {
   });
 });
 
+describe("duct-run surround by the design case's kind", () => {
+  // Expected values are the row's own inputs, picked by the rule stated in the task and in
+  // src/calc/schedule/types.ts (definition): heating takes T_surround_C; cooling takes
+  // T_surround_cooling_C, or T_surround_C when that is blank; both blank = the outdoor air.
+  const voidRun: DuctRunRow = { ...duct, location: "indoor", elevation_m: null, T_surround_C: 19, T_surround_cooling_C: 28 };
+  const swinbank = (T_C: number) => {
+    // Swinbank (1963) T_sky = 0.0552 T^1.5 K, half sky and half ground (as in the test above).
+    const T = T_C + 273.15;
+    return Math.pow(0.5 * (0.0552 * Math.pow(T, 1.5)) ** 4 + 0.5 * T ** 4, 0.25) - 273.15;
+  };
+
+  test.each([
+    ["cooling, both given: the cooling surround", summer, { T_surround_C: 19, T_surround_cooling_C: 28 }, 28],
+    ["heating, both given: the heating surround", winter, { T_surround_C: 19, T_surround_cooling_C: 28 }, 19],
+    ["cooling, cooling surround blank: the heating one", summer, { T_surround_C: 19, T_surround_cooling_C: null }, 19],
+    ["cooling, cooling surround absent (a revision issued before it existed): the heating one", summer, { T_surround_C: 19, T_surround_cooling_C: undefined }, 19],
+    ["heating, only a cooling surround: the outdoor air (−4 °C)", winter, { T_surround_C: null, T_surround_cooling_C: 28 }, -4],
+    ["cooling, only a cooling surround: that surround", summer, { T_surround_C: null, T_surround_cooling_C: 0 }, 0],
+  ] as const)("indoor run, %s", (_label, dc, surround, expected) => {
+    const c = ductRunCase(site, dc, zone, { ...voidRun, ...surround });
+    expect(c.T_ambient_C).toBe(expected);
+    expect(c.V_wind_m_s).toBe(0);
+    expect("T_surround_C" in c).toBe(false);
+  });
+
+  test("humidity follows the surround of the case: the zone's RH in a space, the outdoor RH in the outdoor air", () => {
+    // Zone RH 50 %, winter outdoor 85 % (fixtures above).
+    const onlyCooling = { ...voidRun, T_surround_C: null, T_surround_cooling_C: 28 };
+    expect(ductRunCase(site, summer, zone, onlyCooling).RH_ambient_pct).toBe(50);
+    expect(ductRunCase(site, winter, zone, onlyCooling).RH_ambient_pct).toBe(85);
+  });
+
+  test("both blank: an outdoor run sees the outdoor air and radiates to sky and ground in either kind of case", () => {
+    const open = { ...duct, T_surround_C: null, T_surround_cooling_C: null };
+    for (const dc of [summer, winter]) {
+      const c = ductRunCase(site, dc, zone, open);
+      expect(c.T_ambient_C).toBe(dc.T_outdoor_C);
+      expect(c.RH_ambient_pct).toBe(dc.RH_outdoor_pct);
+      expect(c.T_surround_C).toBeCloseTo(swinbank(dc.T_outdoor_C), 9);
+    }
+  });
+
+  test("an outdoor run given a cooling surround only (say a summer enclosure) sees no sky in cooling, the sky in heating", () => {
+    const enclosed = { ...duct, T_surround_C: null, T_surround_cooling_C: 35 };
+    const cool = ductRunCase(site, summer, zone, enclosed);
+    expect(cool.T_ambient_C).toBe(35);
+    expect("T_surround_C" in cool).toBe(false);
+    const heat = ductRunCase(site, winter, zone, enclosed);
+    expect(heat.T_ambient_C).toBe(-4);
+    expect(heat.T_surround_C).toBeCloseTo(swinbank(-4), 9);
+  });
+
+  test("a warmer cooling surround gains more heat into cold supply air (direction only)", () => {
+    // Q_W is the heat gained by the air (contract sign); 13 °C supply in a 28 °C void against 19 °C.
+    const warm = calculateCase(ductRunCase(site, summer, zone, voidRun));
+    const cool = calculateCase(ductRunCase(site, summer, zone, { ...voidRun, T_surround_cooling_C: null }));
+    expect(warm.ok && cool.ok).toBe(true);
+    if (warm.ok && cool.ok) {
+      expect(cool.Q_W as number).toBeGreaterThan(0);
+      expect(warm.Q_W as number).toBeGreaterThan(cool.Q_W as number);
+    }
+  });
+});
+
 describe("schedule results", () => {
   test("every row is computed and the zone total is the sum of its rows by sign", () => {
     const second: SurfaceRow = { ...row, id: "s2", label: "North wall", azimuth_deg: 0, area_m2: 20 };

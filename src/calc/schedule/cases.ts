@@ -89,12 +89,6 @@ export function surfaceCase(site: Site, dc: DesignCase, zone: Zone, buildup: Bui
 export const DEFAULT_DUCT_ELEVATION_M = 10;
 
 /**
- * The `duct_run` case of a row in a design case. The run crosses the space at T_surround (the
- * outdoor air when none is given); its humidity is the outdoor RH outdoors or in a space at the
- * outdoor temperature, the zone's inside RH otherwise, unless the row gives one; an outdoor run
- * sees the site wind at its elevation.
- */
-/**
  * Radiant surround of a duct run out of doors, °C: a horizontal run sees the sky over its upper
  * half and the ground below (view factor ½ each, as a vertical plane: common practice), the sky at
  * Swinbank's clear-sky temperature and the ground at the outdoor air temperature. On a clear night
@@ -105,12 +99,28 @@ export function outdoorDuctSurroundC(T_outdoor_C: number): number {
   return radiantTemperature(skyViewFactor(90), skyTemperatureSwinbank(T), T) - 273.15;
 }
 
+/**
+ * Temperature of the space a duct run crosses in a design case, °C, or null for the outdoor air:
+ * a cooling case takes the row's cooling surround when it gives one, else (as a heating case
+ * always does) its `T_surround_C`.
+ */
+export function ductSurroundC(dc: Pick<DesignCase, "kind">, row: Pick<DuctRunRow, "T_surround_C" | "T_surround_cooling_C">): number | null {
+  return dc.kind === "cooling" ? (row.T_surround_cooling_C ?? row.T_surround_C) : row.T_surround_C;
+}
+
+/**
+ * The `duct_run` case of a row in a design case. The run crosses the space at the case's surround
+ * (`ductSurroundC`; the outdoor air when there is none); its humidity is the outdoor RH outdoors
+ * or in the outdoor air, the zone's inside RH otherwise, unless the row gives one; an outdoor run
+ * sees the site wind at its elevation.
+ */
 export function ductRunCase(site: Site, dc: DesignCase, zone: Zone, row: DuctRunRow) {
-  const outdoorAir = row.T_surround_C === null;
+  const surround = ductSurroundC(dc, row);
+  const outdoorAir = surround === null;
   // Out of doors in the outdoor air: radiation to sky and ground (a run in a space of its own,
-  // T_surround_C given, radiates to that space).
+  // a surround given for this case, radiates to that space).
   const skyward = row.location === "outdoor" && outdoorAir;
-  const T_ambient_C = outdoorAir ? dc.T_outdoor_C : (row.T_surround_C as number);
+  const T_ambient_C = surround === null ? dc.T_outdoor_C : surround;
   const RH = row.RH_surround_pct ?? (row.location === "outdoor" || outdoorAir ? dc.RH_outdoor_pct : zone.RH_inside_pct);
   const z = row.elevation_m ?? DEFAULT_DUCT_ELEVATION_M;
   const wind =

@@ -87,8 +87,16 @@ export interface DuctRunRow {
   T_entering_heating_C: number;
   T_entering_cooling_C: number;
   location: "indoor" | "outdoor";
-  /** Temperature of the space the run crosses; null = the outdoor air of the design case. */
+  /**
+   * Temperature of the space the run crosses in heating cases, and in cooling cases when
+   * `T_surround_cooling_C` is null; null = the outdoor air of the design case.
+   */
   T_surround_C: number | null;
+  /**
+   * Temperature of that space in cooling cases; null (or absent, as in revisions issued before
+   * the field existed) = as `T_surround_C`. Both null = the outdoor air.
+   */
+  T_surround_cooling_C?: number | null;
   /** Relative humidity of that space; null = outdoor RH (outdoors) or the zone's inside RH. */
   RH_surround_pct: number | null;
   /** Height above ground of an outdoor run, for the wind at the duct; null = 10 m. */
