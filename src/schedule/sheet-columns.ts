@@ -48,7 +48,7 @@ export const DUCT_RUN_COLUMNS: readonly SheetColumn[] = [
   { field: "shape", title: "Shape", kind: "choice", options: SHAPE_OPTIONS, optional: false },
   ...(["diameter_m", "width_m", "height_m", "length_m", "flow_m3_s", "T_entering_heating_C", "T_entering_cooling_C"] as const).map((f) => num(f, DUCT_RUN_NUMBERS[f])),
   { field: "location", title: "Location", kind: "choice", options: LOCATION_OPTIONS, optional: false },
-  ...(["T_surround_C", "RH_surround_pct", "elevation_m", "insulation_thickness_m", "insulation_k_W_mK", "jacket_emissivity", "margin_K"] as const).map((f) =>
+  ...(["T_surround_C", "T_surround_cooling_C", "RH_surround_pct", "elevation_m", "insulation_thickness_m", "insulation_k_W_mK", "jacket_emissivity", "margin_K"] as const).map((f) =>
     num(f, DUCT_RUN_NUMBERS[f]),
   ),
 ];

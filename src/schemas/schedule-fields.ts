@@ -112,6 +112,8 @@ export const DUCT_RUN_NUMBERS = {
   T_entering_heating_C: { ...TEMP, label: "Entering air, heating" },
   T_entering_cooling_C: { ...TEMP, label: "Entering air, cooling" },
   T_surround_C: { ...TEMP, label: "Surrounding air", blank: "outdoor air" },
+  // A void or plant room is warmer in summer: cooling cases take this one when it is given.
+  T_surround_cooling_C: { ...TEMP, label: "Surrounding air, cooling", blank: "as heating" },
   RH_surround_pct: { ...RH, label: "Surrounding RH", blank: "outdoor or zone RH" },
   elevation_m: { label: "Elevation", quantity: "length", min: 0, max: 500, blank: "10 m", digits: 1 },
   insulation_thickness_m: { label: "Insulation", quantity: "thickness", min: 0, max: 0.5, digits: 0 },

@@ -101,6 +101,50 @@ describe("bad input names the field and saves nothing", () => {
   });
 });
 
+describe("a duct run's cooling surround", () => {
+  // Fixture "Void extract": 13 °C cooling supply through an 18 °C void (schedule-fixtures.ts).
+  // Direction only, from the sign convention (Q_W = heat gained by the air): a warmer void in the
+  // cooling case gains more heat into the cold air; the heating case does not read the field.
+  test("is saved through PATCH, read back, and moves the cooling results only; a bad value is refused naming it", async () => {
+    const p = await makeProject("tarnbrook-sill");
+    const id = p.ductRunIds[1]!;
+    const item = `/api/projects/${p.projectId}/duct-runs/${id}`;
+    const flow = async (caseId: string) => {
+      const res = await as("get", `/api/projects/${p.projectId}/results?case=${caseId}`);
+      expect(res.status, res.text).toBe(200);
+      const r = res.body.duct_runs.find((d: { row_id: string }) => d.row_id === id).result;
+      expect(r.ok, JSON.stringify(r)).toBe(true);
+      return r.Q_W as number;
+    };
+    expect((await as("get", item)).body).toMatchObject({ T_surround_C: 18, T_surround_cooling_C: null });
+    const before = { cooling: await flow(p.caseIds.cooling), heating: await flow(p.caseIds.heating) };
+    expect(before.cooling).toBeGreaterThan(0);
+
+    const patched = await as("patch", item, { version: 1, T_surround_cooling_C: 29 });
+    expect(patched.status, patched.text).toBe(200);
+    expect(patched.body).toMatchObject({ T_surround_C: 18, T_surround_cooling_C: 29, version: 2 });
+    expect((await as("get", item)).body).toEqual(patched.body);
+    expect(await testDb()("duct_runs").where({ id }).first("T_surround_cooling_C")).toEqual({ T_surround_cooling_C: 29 });
+    expect(await flow(p.caseIds.cooling)).toBeGreaterThan(before.cooling);
+    expect(await flow(p.caseIds.heating)).toBe(before.heating);
+
+    const stored = await snapshot(p.projectId);
+    for (const bad of ["warm", 160]) {
+      const res = await as("patch", item, { version: 2, T_surround_cooling_C: bad });
+      expect(res.status).toBe(422);
+      expect(res.body.error.details).toEqual([
+        expect.objectContaining({ field: "T_surround_cooling_C", message: bad === "warm" ? "Surrounding air, cooling must be a number" : "Surrounding air, cooling must be between -50 °C and 150 °C" }),
+      ]);
+    }
+    expect(await snapshot(p.projectId)).toEqual(stored);
+
+    // Blank again: cooling is as heating once more, so the results are those of the start.
+    const cleared = await as("patch", item, { version: 2, T_surround_cooling_C: null });
+    expect(cleared.status, cleared.text).toBe(200);
+    expect(await flow(p.caseIds.cooling)).toBe(before.cooling);
+  });
+});
+
 describe("bulk changes", () => {
   const surface = (i: number) => fx.surfaceIds[i]!;
 

@@ -96,20 +96,22 @@ describe("XLSX import, export and templates", () => {
     const wb = new ExcelJS.Workbook();
     wb.addWorksheet("Surfaces").addRows([SI_HEAD.split(","), ["Gable", "Office", "Insulated wall", 18, 90, 270, 4, 6, 5, null, null, null]]);
     wb.addWorksheet("Duct runs").addRows([
-      ["Label", "Zone", "Shape", "Diameter (mm)", "Width (mm)", "Height (mm)", "Length (m)", "Airflow (m³/s)", "Entering air, heating (°C)", "Entering air, cooling (°C)", "Location", "Surrounding air (°C)", "Insulation (mm)", "Insulation conductivity (W/(m·K))", "Jacket emissivity", "Condensation margin (K)"],
-      ["Plant drop", "Hall", "Round", 315, null, null, 6, 0.3, 30, 14, "Indoors", 18, 25, 0.035, 0.9, 1],
+      ["Label", "Zone", "Shape", "Diameter (mm)", "Width (mm)", "Height (mm)", "Length (m)", "Airflow (m³/s)", "Entering air, heating (°C)", "Entering air, cooling (°C)", "Location", "Surrounding air (°C)", "Surrounding air, cooling (°C)", "Insulation (mm)", "Insulation conductivity (W/(m·K))", "Jacket emissivity", "Condensation margin (K)"],
+      ["Plant drop", "Hall", "Round", 315, null, null, 6, 0.3, 30, 14, "Indoors", 18, 27, 25, 0.035, 0.9, 1],
     ]);
     const res = await upload(p.projectId, "mode=replace", Buffer.from(await wb.xlsx.writeBuffer()), "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet");
     expect(res.status, res.text).toBe(200);
     expect(res.body.imported).toEqual({ surfaces: 1, duct_runs: 1 });
     const duct = await testDb()("duct_runs").where({ project_id: p.projectId }).first();
     // Millimetres in the heading → metres stored.
-    expect(duct).toMatchObject({ label: "Plant drop", shape: "round", diameter_m: 0.315, insulation_thickness_m: 0.025, location: "indoor", T_surround_C: 18, elevation_m: null });
+    expect(duct).toMatchObject({ label: "Plant drop", shape: "round", diameter_m: 0.315, insulation_thickness_m: 0.025, location: "indoor", T_surround_C: 18, T_surround_cooling_C: 27, elevation_m: null });
   });
 
   test("CSV export, edited nowhere, imports back (replace) to the same rows", async () => {
     const p = await makeProject("tarnbrook-sill");
     await testDb()("projects").where({ id: p.projectId }).update({ unit_system: "IP" });
+    // One void with a summer temperature of its own, so the column makes the trip in °F (80.6 °F).
+    await testDb()("duct_runs").where({ id: p.ductRunIds[1] }).update({ T_surround_cooling_C: 27 });
     const strip = (rows: Record<string, unknown>[]) => rows.map(({ id: _i, created_at: _c, updated_at: _u, version: _v, ...r }) => r);
     const before = strip(await testDb()("duct_runs").where({ project_id: p.projectId }).orderBy("position"));
     const csv = await request(app.server).get(`/api/projects/${p.projectId}/export?format=csv&sheet=duct_runs`).set(consultant).buffer(true).parse((res, cb) => {
@@ -120,6 +122,7 @@ describe("XLSX import, export and templates", () => {
     expect(csv.status).toBe(200);
     expect(csv.headers["content-disposition"]).toMatch(/attachment; filename=".*-schedule-duct_runs\.csv"/);
     expect(String(csv.body)).toContain("Airflow (cfm)");
+    expect(String(csv.body)).toContain("Surrounding air, cooling (°F)");
     const res = await upload(p.projectId, "sheet=duct_runs&mode=replace", String(csv.body));
     expect(res.status, res.text).toBe(200);
     const after = strip(await testDb()("duct_runs").where({ project_id: p.projectId }).orderBy("position"));
@@ -146,6 +149,9 @@ describe("XLSX import, export and templates", () => {
     expect(wb.worksheets.map((w) => w.name)).toEqual(["Surfaces", "Duct runs", "Read me"]);
     expect(wb.getWorksheet("Surfaces")!.rowCount).toBe(1);
     expect(wb.getWorksheet("Surfaces")!.getRow(1).getCell(4).value).toBe("Area (m²)");
+    expect((wb.getWorksheet("Duct runs")!.getRow(1).values as string[]).slice(1)).toContain("Surrounding air, cooling (°C)");
+    const readMe = wb.getWorksheet("Read me")!.getSheetValues().map((r) => (Array.isArray(r) ? r.slice(1) : []));
+    expect(readMe).toContainEqual(["Duct runs: Surrounding air, cooling (°C)", "blank = as heating"]);
 
     const full = await get(`format=xlsx&case=${fx.caseIds.heating}`);
     const wb2 = new ExcelJS.Workbook();

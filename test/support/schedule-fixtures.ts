@@ -30,6 +30,7 @@ export const DUCT_VALUES = {
   T_entering_cooling_C: 13,
   location: "outdoor",
   T_surround_C: null,
+  T_surround_cooling_C: null,
   RH_surround_pct: null,
   elevation_m: 8,
   insulation_thickness_m: 0.05,
