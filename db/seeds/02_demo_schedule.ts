@@ -63,7 +63,8 @@ const SURFACE_GROUPS: S[] = [
   ["EL roof", "Entrance lobby", "Warm-deck flat roof", 1, 30, 0, 0, 3.6, 6, 1.3],
 ];
 
-const ROOF = { location: "outdoor", T_surround_C: null, RH_surround_pct: null, insulation_k_W_mK: 0.035, jacket_emissivity: 0.1, margin_K: 1 } as const;
+const ROOF = { location: "outdoor", T_surround_C: null, T_surround_cooling_C: null, RH_surround_pct: null, insulation_k_W_mK: 0.035, jacket_emissivity: 0.1, margin_K: 1 } as const;
+// Ceiling voids sit near the rooms in winter and warm up under the roof in summer (27–29 °C).
 const VOID = { location: "indoor", elevation_m: null, insulation_k_W_mK: 0.037, margin_K: 1 } as const;
 const round = (d: number) => ({ shape: "round", diameter_m: d, width_m: null, height_m: null }) as const;
 const rect = (w: number, h: number) => ({ shape: "rect", diameter_m: null, width_m: w, height_m: h }) as const;
@@ -72,10 +73,10 @@ export const DEMO_DUCT_RUNS = [
   { label: "AHU-1 supply, roof run to reading room", zone: "Reading room", ...rect(0.8, 0.4), ...ROOF, length_m: 22, flow_m3_s: 1.6, T_entering_heating_C: 32, T_entering_cooling_C: 13, elevation_m: 8.6, insulation_thickness_m: 0.05 },
   { label: "AHU-1 extract, roof run", zone: "Reading room", ...rect(0.7, 0.4), ...ROOF, length_m: 18, flow_m3_s: 1.4, T_entering_heating_C: 21, T_entering_cooling_C: 24, elevation_m: 8.6, insulation_thickness_m: 0.025 },
   { label: "Community room supply, low-roof run", zone: "Community room", ...round(0.315), ...ROOF, length_m: 9, flow_m3_s: 0.45, T_entering_heating_C: 30, T_entering_cooling_C: 14, elevation_m: 4.6, insulation_thickness_m: 0.05, jacket_emissivity: 0.9 },
-  { label: "Reading room supply, ceiling void", zone: "Reading room", ...rect(0.6, 0.3), ...VOID, length_m: 26, flow_m3_s: 1.2, T_entering_heating_C: 32, T_entering_cooling_C: 13, T_surround_C: 19, RH_surround_pct: null, insulation_thickness_m: 0.025, jacket_emissivity: 0.1 },
-  { label: "Gallery supply, ceiling void", zone: "Study gallery", ...round(0.4), ...VOID, length_m: 16, flow_m3_s: 0.8, T_entering_heating_C: 32, T_entering_cooling_C: 13, T_surround_C: 20, RH_surround_pct: null, insulation_thickness_m: 0.025, jacket_emissivity: 0.1 },
-  { label: "Lobby supply, void over entrance (bare)", zone: "Entrance lobby", ...round(0.25), ...VOID, length_m: 8, flow_m3_s: 0.2, T_entering_heating_C: 30, T_entering_cooling_C: 13, T_surround_C: 22, RH_surround_pct: 70, insulation_thickness_m: 0, jacket_emissivity: 0.3 },
-  { label: "Community room supply, ceiling void", zone: "Community room", ...rect(0.4, 0.25), ...VOID, length_m: 12, flow_m3_s: 0.45, T_entering_heating_C: 30, T_entering_cooling_C: 14, T_surround_C: 20, RH_surround_pct: null, insulation_thickness_m: 0.025, jacket_emissivity: 0.9, margin_K: 0.5 },
+  { label: "Reading room supply, ceiling void", zone: "Reading room", ...rect(0.6, 0.3), ...VOID, length_m: 26, flow_m3_s: 1.2, T_entering_heating_C: 32, T_entering_cooling_C: 13, T_surround_C: 19, T_surround_cooling_C: 28, RH_surround_pct: null, insulation_thickness_m: 0.025, jacket_emissivity: 0.1 },
+  { label: "Gallery supply, ceiling void", zone: "Study gallery", ...round(0.4), ...VOID, length_m: 16, flow_m3_s: 0.8, T_entering_heating_C: 32, T_entering_cooling_C: 13, T_surround_C: 20, T_surround_cooling_C: 28, RH_surround_pct: null, insulation_thickness_m: 0.025, jacket_emissivity: 0.1 },
+  { label: "Lobby supply, void over entrance (bare)", zone: "Entrance lobby", ...round(0.25), ...VOID, length_m: 8, flow_m3_s: 0.2, T_entering_heating_C: 30, T_entering_cooling_C: 13, T_surround_C: 22, T_surround_cooling_C: 29, RH_surround_pct: 70, insulation_thickness_m: 0, jacket_emissivity: 0.3 },
+  { label: "Community room supply, ceiling void", zone: "Community room", ...rect(0.4, 0.25), ...VOID, length_m: 12, flow_m3_s: 0.45, T_entering_heating_C: 30, T_entering_cooling_C: 14, T_surround_C: 20, T_surround_cooling_C: 27, RH_surround_pct: null, insulation_thickness_m: 0.025, jacket_emissivity: 0.9, margin_K: 0.5 },
 ];
 
 export const DEMO_SURFACE_COUNT = SURFACE_GROUPS.reduce((n, g) => n + g[3], 0);

@@ -103,6 +103,12 @@ describe("migrations round trip", () => {
     expect(heights.length).toBeGreaterThanOrEqual(5);
     expect(await db("duct_runs").where({ location: "outdoor" }).count({ n: "*" })).not.toEqual([{ n: "0" }]);
     expect(await db("duct_runs").where({ location: "indoor" }).whereNotNull("T_surround_C").count({ n: "*" })).not.toEqual([{ n: "0" }]);
+    // Ceiling voids are warmer in summer: the seed's void runs carry a cooling surround above their
+    // heating one, the roof runs leave both blank (the outdoor air).
+    const voids = await db("duct_runs").where({ location: "indoor" }).select("T_surround_C", "T_surround_cooling_C");
+    expect(voids.length).toBeGreaterThan(0);
+    for (const v of voids) expect(v.T_surround_cooling_C).toBeGreaterThan(v.T_surround_C);
+    expect(await db("duct_runs").where({ location: "outdoor" }).whereNotNull("T_surround_cooling_C").count({ n: "*" })).toEqual([{ n: "0" }]);
     // Edits made during a demo survive the next start (rows are inserted only when missing).
     await db("zones").where({ name: "Reading room" }).update({ floor_area_m2: 999 });
     expect(cli(["seed:run"]).status).toBe(0);
@@ -144,6 +150,20 @@ describe("migrations round trip", () => {
     const user = await db("users").first();
     const firm = await db("firms").first();
     await expect(db("memberships").insert({ firm_id: firm.id, user_id: user.id, role: "owner" })).rejects.toThrow(/membership_role|check constraint/);
+  });
+
+  test("duct_runs.T_surround_cooling_C is a nullable double; rolling back its migration drops only that column, with the rows", async () => {
+    const column = () =>
+      db("information_schema.columns").where({ table_schema: "public", table_name: "duct_runs", column_name: "T_surround_cooling_C" }).first("data_type", "is_nullable");
+    expect(await column()).toEqual({ data_type: "double precision", is_nullable: "YES" });
+    const rows = Number((await db("duct_runs").count({ n: "*" }))[0]!.n);
+    const down = cli(["migrate:down", "20261207000000_duct_surround_cooling.ts"]);
+    expect(down.status, down.output).toBe(0);
+    expect(await column()).toBeUndefined();
+    expect(Number((await db("duct_runs").count({ n: "*" }))[0]!.n)).toBe(rows);
+    const up = cli(["migrate:latest"]);
+    expect(up.status, up.output).toBe(0);
+    expect(await column()).toEqual({ data_type: "double precision", is_nullable: "YES" });
   });
 
   test("migrate:rollback --all drops every table, migrate:latest brings them back", async () => {
