@@ -2,22 +2,13 @@
 // demo project (its seeded schedule already holds 50) and at one project; the admin buys seats on
 // the Stripe stand-in's Checkout page, the signed webhook makes the firm paid, and the row and the
 // consultant's second project are then saved.
-import { expect, test, type Browser, type Page } from "@playwright/test";
+import { expect, test, type Page } from "@playwright/test";
 import knexFactory, { type Knex } from "knex";
+import { signedIn } from "./support/sign-in";
 
-const PASSWORD = process.env.DEMO_PASSWORD || "filmsheet-demo";
 let db: Knex;
 const started = new Date();
 
-async function signedIn(browser: Browser, email: string): Promise<Page> {
-  const page = await (await browser.newContext()).newPage();
-  await page.goto("/sign-in?callbackUrl=%2Fprojects");
-  await page.getByLabel("E-mail", { exact: true }).fill(email);
-  await page.getByLabel("Password").fill(PASSWORD);
-  await page.getByRole("button", { name: "Sign in", exact: true }).click();
-  await expect(page).toHaveURL(/\/projects$/);
-  return page;
-}
 
 async function createProject(page: Page, reference: string) {
   await page.getByLabel("Reference").fill(reference);

@@ -4,11 +4,11 @@
 // viewer finds revision A and nothing of the draft; and the e-mails reach the test SMTP sink.
 import { readdirSync, readFileSync } from "node:fs";
 import { join } from "node:path";
-import { expect as baseExpect, test, type Browser, type Page } from "@playwright/test";
+import { expect as baseExpect, test, type Page } from "@playwright/test";
 import knexFactory, { type Knex } from "knex";
 import { dropLeftoverEmailJobs } from "../support/checking";
+import { signedIn } from "./support/sign-in";
 
-const PASSWORD = process.env.DEMO_PASSWORD || "filmsheet-demo";
 const MAIL_DIR = process.env.E2E_MAIL_DIR ?? ".data/e2e-mail";
 const ROW = "RR south wall 1";
 test.describe.configure({ timeout: 240_000 });
@@ -18,15 +18,6 @@ let db: Knex;
 let firmId: string;
 let before: Record<string, unknown> | undefined;
 
-async function signedIn(browser: Browser, email: string): Promise<Page> {
-  const page = await (await browser.newContext()).newPage();
-  await page.goto("/sign-in?callbackUrl=%2Fprojects");
-  await page.getByLabel("E-mail", { exact: true }).fill(email);
-  await page.getByLabel("Password").fill(PASSWORD);
-  await page.getByRole("button", { name: "Sign in", exact: true }).click();
-  await expect(page).toHaveURL(/\/projects$/);
-  return page;
-}
 
 const tab = (page: Page, name: string) => page.getByRole("navigation", { name: "Project" }).getByRole("link", { name, exact: true });
 const checkForm = (page: Page) => page.getByRole("form", { name: "Check this row" });

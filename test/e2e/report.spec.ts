@@ -1,15 +1,12 @@
 // The consultant asks for the demo project's draft calculation report on the project page, follows
 // the report job's progress bar and downloads the PDF.
 import { expect, test } from "@playwright/test";
+import { signIn } from "./support/sign-in";
 
-const PASSWORD = process.env.DEMO_PASSWORD || "filmsheet-demo";
 test.describe.configure({ timeout: 90_000 });
 
 test("the consultant follows the draft report's progress and downloads the PDF", async ({ page }) => {
-  await page.goto("/sign-in?callbackUrl=%2Fprojects");
-  await page.getByLabel("E-mail", { exact: true }).fill("consultant@demo.filmsheet.test");
-  await page.getByLabel("Password").fill(PASSWORD);
-  await page.getByRole("button", { name: "Sign in", exact: true }).click();
+  await signIn(page, "consultant@demo.filmsheet.test");
   await page.getByRole("link", { name: "TS-2417" }).click();
   await page.getByRole("button", { name: "Draft report (PDF)" }).click();
   // The job's progress, shown until it is done (the page polls twice a second).
@@ -29,10 +26,7 @@ test("the consultant follows the draft report's progress and downloads the PDF",
 });
 
 test("the viewer is not offered the draft report", async ({ page }) => {
-  await page.goto("/sign-in?callbackUrl=%2Fprojects");
-  await page.getByLabel("E-mail", { exact: true }).fill("viewer@demo.filmsheet.test");
-  await page.getByLabel("Password").fill(PASSWORD);
-  await page.getByRole("button", { name: "Sign in", exact: true }).click();
+  await signIn(page, "viewer@demo.filmsheet.test");
   await page.getByRole("link", { name: "TS-2417" }).click();
   await expect(page.getByRole("heading", { level: 1 })).toBeVisible();
   await expect(page.getByRole("button", { name: "Draft report (PDF)" })).toHaveCount(0);

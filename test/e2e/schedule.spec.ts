@@ -3,18 +3,15 @@
 // bulk change, a CSV import runs its progress bar to the end, and IP units show °F and Btu/h.
 import { expect as baseExpect, test, type Page } from "@playwright/test";
 import knexFactory, { type Knex } from "knex";
+import { signIn } from "./support/sign-in";
 
-const PASSWORD = process.env.DEMO_PASSWORD || "filmsheet-demo";
 // The project page loads the grid, the engine and the chart: give a busy two-core machine room.
 test.describe.configure({ timeout: 90_000 });
 test.use({ actionTimeout: 15_000 });
 const expect = baseExpect.configure({ timeout: 15_000 });
 
 async function openDemoSchedule(page: Page) {
-  await page.goto("/sign-in?callbackUrl=%2Fprojects");
-  await page.getByLabel("E-mail", { exact: true }).fill("consultant@demo.filmsheet.test");
-  await page.getByLabel("Password").fill(PASSWORD);
-  await page.getByRole("button", { name: "Sign in", exact: true }).click();
+  await signIn(page, "consultant@demo.filmsheet.test");
   await page.getByRole("link", { name: "TS-2417" }).click();
   await expect(page.getByRole("heading", { level: 1, name: "Larchfield Community Library, extension" })).toBeVisible();
   await expect(page.locator(".ag-row").first()).toBeVisible();

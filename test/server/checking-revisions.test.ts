@@ -7,7 +7,7 @@ import { startAppWithSessions, type BuiltApp } from "../support/app-with-session
 import { clearPlan, grantPaidPlan } from "../support/billing";
 import { acceptAll, auditOf } from "../support/checking";
 import { closeTestDb, testDb } from "../support/db";
-import { pdfPages } from "../support/pdf-text";
+import { binaryBody, pdfPages } from "../support/pdf-text";
 import { makeProject, SURFACE_VALUES, type FixtureProject } from "../support/schedule-fixtures";
 
 const EMAILS = ["consultant@demo.filmsheet.test", "checker@demo.filmsheet.test", "viewer@demo.filmsheet.test", "admin@demo.filmsheet.test", "admin@other.filmsheet.test"] as const;
@@ -213,12 +213,7 @@ describe("comparing two revisions", () => {
 });
 
 describe("an issued revision's report", () => {
-  const binary = (res: request.Response, cb: (err: Error | null, body: Buffer) => void) => {
-    const chunks: Buffer[] = [];
-    res.on("data", (c: Buffer) => chunks.push(c));
-    res.on("end", () => cb(null, Buffer.concat(chunks)));
-  };
-  const report = (fx: FixtureProject, who: Record<string, string>) => request(app.server).get(`/api/projects/${fx.projectId}/revisions/A/report`).set(who).buffer(true).parse(binary);
+  const report = (fx: FixtureProject, who: Record<string, string>) => request(app.server).get(`/api/projects/${fx.projectId}/revisions/A/report`).set(who).buffer(true).parse(binaryBody);
 
   test("a viewer downloads it: issued, revision A, its checker, every row's label; clean on the paid plan", async () => {
     const fx = await makeProject("tarnbrook-sill");

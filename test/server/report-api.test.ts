@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { num } from "@/report/format";
 import { startAppWithSessions, type BuiltApp } from "../support/app-with-sessions";
 import { closeTestDb, testDb } from "../support/db";
-import { pdfPages } from "../support/pdf-text";
+import { binaryBody, pdfPages } from "../support/pdf-text";
 
 let app: BuiltApp;
 let consultant: Record<string, string>;
@@ -22,16 +22,11 @@ afterAll(async () => {
   await closeTestDb();
 });
 
-const binary = (res: request.Response, cb: (err: Error | null, body: Buffer) => void) => {
-  const chunks: Buffer[] = [];
-  res.on("data", (c: Buffer) => chunks.push(c));
-  res.on("end", () => cb(null, Buffer.concat(chunks)));
-};
 
 describe("the demo project's draft report", () => {
   test("is a PDF whose text matches the API's results, watermarked as a draft", async () => {
     const project = await testDb()("projects").where({ reference: "TS-2417" }).first("id", "name");
-    const res = await request(app.server).get(`/api/projects/${project.id}/report`).set(consultant).buffer(true).parse(binary);
+    const res = await request(app.server).get(`/api/projects/${project.id}/report`).set(consultant).buffer(true).parse(binaryBody);
     expect(res.status, String(res.body)).toBe(200);
     expect(res.headers["content-type"]).toBe("application/pdf");
     expect(res.headers["content-disposition"]).toContain("TS-2417-draft-report.pdf");

@@ -9,7 +9,7 @@ import { startAppWithSessions, type BuiltApp } from "../support/app-with-session
 import { clearPlan, grantPaidPlan } from "../support/billing";
 import { acceptAll } from "../support/checking";
 import { closeTestDb, testDb } from "../support/db";
-import { pdfPages } from "../support/pdf-text";
+import { binaryBody, pdfPages } from "../support/pdf-text";
 import { makeProject } from "../support/schedule-fixtures";
 
 const EMAILS = ["consultant@demo.filmsheet.test", "checker@demo.filmsheet.test", "viewer@demo.filmsheet.test", "admin@other.filmsheet.test"] as const;
@@ -32,12 +32,7 @@ afterAll(async () => {
 const consultant = () => as["consultant@demo.filmsheet.test"];
 const checker = () => as["checker@demo.filmsheet.test"];
 const viewer = () => as["viewer@demo.filmsheet.test"];
-const binary = (res: request.Response, cb: (err: Error | null, body: Buffer) => void) => {
-  const chunks: Buffer[] = [];
-  res.on("data", (c: Buffer) => chunks.push(c));
-  res.on("end", () => cb(null, Buffer.concat(chunks)));
-};
-const download = (path: string, who: Record<string, string>) => request(app.server).get(path).set(who).buffer(true).parse(binary);
+const download = (path: string, who: Record<string, string>) => request(app.server).get(path).set(who).buffer(true).parse(binaryBody);
 
 /** Polls a build until it has finished, keeping every answer (the progress seen on the way). */
 async function follow(projectId: string, buildId: string, who: Record<string, string>): Promise<{ final: any; seen: any[] }> {

@@ -46,16 +46,6 @@ function BuildProgress({ build, label }: { build: TReportBuild; label: string })
   );
 }
 
-function Finished({ build, name }: { build: TReportBuild; name: string }) {
-  return (
-    <a href={build.download!} download className={LINK}>
-      {name}
-    </a>
-  );
-}
-
-const pagesNote = (build: TReportBuild) => `${build.pages} pages${build.watermark ? ", marked “not for issue”" : ""}`;
-
 /**
  * The draft report on the project page: asks the server's report job for it, shows the job's
  * progress, then offers the PDF. (Large projects take several seconds; the page stays usable.)
@@ -76,13 +66,19 @@ export function DraftReportButton({ projectId }: { projectId: string }) {
         <BuildProgress build={build!} label="Draft report progress" />
       ) : (
         <span className="flex flex-wrap items-center justify-end gap-2">
-          {build?.status === "done" ? <Finished build={build} name="Download draft report (PDF)" /> : null}
+          {build?.status === "done" ? (
+            <a href={build.download!} download className={LINK}>
+              Download draft report (PDF)
+            </a>
+          ) : null}
           <button type="button" onClick={start} className={LINK}>
             {build?.status === "done" ? "Build again" : "Draft report (PDF)"}
           </button>
         </span>
       )}
-      {build?.status === "done" ? <p className="text-small text-muted">{pagesNote(build)}</p> : null}
+      {build?.status === "done" ? <p className="text-small text-muted">
+          {build.pages} pages{build.watermark ? ", marked “not for issue”" : ""}
+        </p> : null}
       {build?.status === "failed" ? <p role="alert" className="text-small text-danger">The report could not be built: {build.error}</p> : null}
       {error ? <p role="alert" className="text-small text-danger">{error}</p> : null}
     </div>

@@ -14,7 +14,9 @@ export async function enqueueReportBuild(trx: Knex | Knex.Transaction, buildId: 
   await trx.raw("SELECT graphile_worker.add_job(?, ?::json, max_attempts => 1)", [BUILD_REPORT_TASK, JSON.stringify({ buildId })]);
 }
 
-export const BUILD_COLUMNS = ["b.id", "b.kind", "b.status", "b.progress", "b.stage", "b.watermark", "b.requested_by_name", "b.pages", "b.byte_size", "b.error", "b.created_at", "b.updated_at", "b.finished_at", "b.project_id", "r.letter"];
+/** The columns of report_builds the API shows (`presentBuild`), and the same joined to the revision's letter. */
+export const BUILD_FIELDS = ["id", "kind", "status", "progress", "stage", "watermark", "requested_by_name", "pages", "byte_size", "error", "created_at", "updated_at", "finished_at", "project_id"];
+export const BUILD_COLUMNS = [...BUILD_FIELDS.map((c) => `b.${c}`), "r.letter"];
 
 type BuildRow = {
   id: string; kind: "draft" | "revision"; status: TReportBuild["status"]; progress: number; stage: string; watermark: boolean; requested_by_name: string;

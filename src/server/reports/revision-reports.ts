@@ -1,7 +1,9 @@
 import "server-only";
 import type { Knex } from "knex";
-import type { BuiltReport } from "@/report/build-report";
+import type { RevisionSnapshot } from "@/checking/snapshot";
+import { buildReportAsync, type BuiltReport, type ReportProgress } from "@/report/build-report";
 import { getPlan } from "@/server/services/get-plan";
+import { revisionReportSource, type RevisionRecord } from "./report-inputs";
 
 /** A revision's report as stored: the PDF served, byte for byte, every time it is asked for. */
 export interface StoredReport {
@@ -12,6 +14,9 @@ export interface StoredReport {
 }
 
 type Revision = { id: string; firm_id: string; project_id: string };
+
+/** The columns of `revisions` a revision's report is built from. */
+export const REVISION_REPORT_COLUMNS = ["id", "firm_id", "project_id", "letter", "issued_by_name", "issued_at", "snapshot"];
 
 export async function storedRevisionReport(q: Knex | Knex.Transaction, revisionId: string): Promise<StoredReport | null> {
   const row = await q("revision_reports").where({ revision_id: revisionId }).first("pdf", "pages", "filename", "watermark");
@@ -39,4 +44,20 @@ export async function revisionWatermark(q: Knex | Knex.Transaction, r: Revision)
   const build = await q("report_builds").where({ revision_id: r.id }).orderBy("created_at").first("watermark");
   if (build) return build.watermark as boolean;
   return !(await getPlan(r.firm_id, q)).limits.cleanReport;
+}
+
+/**
+ * Builds a revision's report from its frozen snapshot and stores it (the report job, and a
+ * download that comes before the job has finished); answers with what is stored.
+ */
+export async function buildRevisionReport(
+  q: Knex | Knex.Transaction,
+  firm: { id: string; name: string },
+  r: Revision & Omit<RevisionRecord, "snapshot"> & { snapshot: unknown },
+  watermark: boolean,
+  onProgress?: (p: ReportProgress) => void | Promise<void>,
+): Promise<StoredReport> {
+  const source = revisionReportSource(firm, { ...r, snapshot: r.snapshot as RevisionSnapshot }, watermark);
+  const built = await buildReportAsync(source.input, onProgress);
+  return storeRevisionReport(q, r, built, source.filename, watermark);
 }

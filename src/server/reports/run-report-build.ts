@@ -1,9 +1,8 @@
 import "server-only";
-import { buildReportAsync } from "@/report/build-report";
+import { buildReportAsync, type ReportProgress } from "@/report/build-report";
 import { db } from "@/server/db/knex";
-import type { RevisionSnapshot } from "@/checking/snapshot";
-import { draftReportSource, revisionReportSource, type ReportSource } from "./report-inputs";
-import { storeRevisionReport } from "./revision-reports";
+import { draftReportSource } from "./report-inputs";
+import { buildRevisionReport, REVISION_REPORT_COLUMNS } from "./revision-reports";
 
 // Progress is written at most this often: enough for a smooth bar, few enough writes.
 const PROGRESS_EVERY_MS = 250;
@@ -22,31 +21,28 @@ export async function runReportBuild(buildId: string): Promise<void> {
   if (!build) return;
   try {
     const firm = await q("firms").where({ id: build.firm_id }).first("id", "name");
-    let source: ReportSource;
-    let revision: { id: string; firm_id: string; project_id: string } | null = null;
-    if (build.kind === "revision") {
-      const r = await q("revisions").where({ id: build.revision_id }).first("id", "firm_id", "project_id", "letter", "issued_by_name", "issued_at", "snapshot");
-      revision = r;
-      source = revisionReportSource(firm, { ...r, snapshot: r.snapshot as RevisionSnapshot }, build.watermark);
-    } else {
-      source = await draftReportSource(q, firm, build.project_id, build.requested_by_name);
-    }
     let last = 0;
-    const built = await buildReportAsync(source.input, async (p) => {
+    const progress = async (p: ReportProgress) => {
       const now = Date.now();
       if (now - last < PROGRESS_EVERY_MS || p.fraction >= 1) return;
       last = now;
       await q("report_builds").where({ id: buildId }).update({ progress: Math.min(0.99, p.fraction), stage: p.stage, updated_at: q.fn.now() });
-    });
-    await q.transaction(async (trx) => {
-      const done = { status: "done", progress: 1, stage: "Done", pages: built.pages, byte_size: built.pdf.length, filename: source.filename, updated_at: trx.fn.now(), finished_at: trx.fn.now() };
-      if (revision) {
-        const stored = await storeRevisionReport(trx, revision, built, source.filename, build.watermark);
-        await trx("report_builds").where({ id: buildId }).update({ ...done, pages: stored.pages, byte_size: stored.pdf.length });
-      } else {
-        await trx("report_builds").where({ id: buildId }).update({ ...done, pdf: Buffer.from(built.pdf) });
-      }
-    });
+    };
+    let done: { pages: number; pdf: Uint8Array; filename: string };
+    if (build.kind === "revision") {
+      // Stored in revision_reports, where it never changes; the build keeps no copy.
+      const r = await q("revisions").where({ id: build.revision_id }).first(REVISION_REPORT_COLUMNS);
+      done = await buildRevisionReport(q, firm, r, build.watermark, progress);
+    } else {
+      const source = await draftReportSource(q, firm, build.project_id, build.requested_by_name);
+      done = { ...(await buildReportAsync(source.input, progress)), filename: source.filename };
+    }
+    await q("report_builds")
+      .where({ id: buildId })
+      .update({
+        status: "done", progress: 1, stage: "Done", pages: done.pages, byte_size: done.pdf.length, filename: done.filename,
+        pdf: build.kind === "draft" ? Buffer.from(done.pdf) : null, updated_at: q.fn.now(), finished_at: q.fn.now(),
+      });
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
     console.warn(`[jobs] report build ${buildId} failed: ${message.split("\n")[0]}`);

@@ -3,7 +3,7 @@ import type { TReportBuild } from "@/schemas/reports";
 import type { Actor } from "@/server/auth/actor";
 import { db } from "@/server/db/knex";
 import { AppError } from "@/server/http/app-error";
-import { BUILD_COLUMNS, buildsOf, enqueueReportBuild, presentBuild } from "@/server/reports/report-builds";
+import { BUILD_FIELDS, enqueueReportBuild, presentBuild } from "@/server/reports/report-builds";
 import { actorName } from "./record-audit";
 
 /**
@@ -16,10 +16,10 @@ export async function requestDraftReport(actor: Actor, projectId: string): Promi
     const project = await trx("projects").where({ id: projectId, firm_id: actor.firm.id }).first("id");
     if (!project) throw new AppError("not_found", "No project with that id in this firm");
     await trx("report_builds").where({ project_id: projectId, kind: "draft" }).where("created_at", "<", trx.raw("now() - interval '1 day'")).delete();
-    const [{ id }] = await trx("report_builds")
+    const [row] = await trx("report_builds")
       .insert({ firm_id: actor.firm.id, project_id: projectId, kind: "draft", watermark: true, requested_by: actor.userId, requested_by_name: actorName(actor) })
-      .returning(["id"]);
-    await enqueueReportBuild(trx, id);
-    return presentBuild(await buildsOf(trx, actor.firm.id, projectId).where("b.id", id).first(BUILD_COLUMNS));
+      .returning(BUILD_FIELDS);
+    await enqueueReportBuild(trx, row.id);
+    return presentBuild({ ...row, letter: null });
   });
 }

@@ -2,6 +2,7 @@
 
 import Link from "next/link";
 import { usePathname } from "next/navigation";
+import { ProjectTitle } from "./project-title";
 import { labelOf, METHOD_OPTIONS, TERRAIN_OPTIONS } from "@/schemas/schedule-fields";
 import { DraftReportButton } from "@/components/reports/report-build";
 import { useProject, useSchedule } from "@/components/schedule/schedule-context";
@@ -29,19 +30,10 @@ export function ProjectHeader({ canReport }: { canReport: boolean }) {
   return (
     <header className="grid gap-3">
       <div className="flex flex-wrap items-end justify-between gap-3">
-        <div>
-          <p className="text-small text-muted">
-            <Link href="/projects" className="hover:underline">
-              Projects
-            </Link>{" "}
-            / <span className="font-mono">{p.reference}</span>
-          </p>
-          <h1 className="text-headline font-semibold">{p.name}</h1>
-          <p className="text-small text-muted">
-            Site {formatQuantity("length", p.altitude_m, system, 0)} {unitLabel("length", system)} above sea level · {labelOf(TERRAIN_OPTIONS, p.terrain).toLowerCase()} · {p.wind_law} law · default method {labelOf(METHOD_OPTIONS, p.default_method)}
-            {canEdit ? "" : " · read only"}
-          </p>
-        </div>
+        <ProjectTitle reference={p.reference} name={p.name}>
+          Site {formatQuantity("length", p.altitude_m, system, 0)} {unitLabel("length", system)} above sea level · {labelOf(TERRAIN_OPTIONS, p.terrain).toLowerCase()} · {p.wind_law} law · default method {labelOf(METHOD_OPTIONS, p.default_method)}
+          {canEdit ? "" : " · read only"}
+        </ProjectTitle>
         {canReport && <DraftReportButton projectId={p.id} />}
       </div>
       <nav aria-label="Project" className="flex gap-1 overflow-x-auto border-b border-line">
