@@ -82,7 +82,19 @@ function describe(v: unknown): string {
   return String(v);
 }
 
-const TEMP_RULE = rule({ gt: -273.15, why: "absolute zero is −273.15 °C" });
+/**
+ * The physical reach of the air model, 100 K…1000 K: below 100 K air at atmospheric pressure is
+ * close to condensing (about 79–82 K at 1 atm), so the ideal gas and the dilute-gas transport terms
+ * no longer describe it (at −260 °C they give a negative viscosity); above 1000 K the cp table is
+ * long past its end. Between the reach and the validated −50…150 °C the engine answers and warns.
+ */
+export const T_REACH_MIN_C = -173.15;
+export const T_REACH_MAX_C = 726.85;
+const TEMP_RULE = rule({
+  min: T_REACH_MIN_C,
+  max: T_REACH_MAX_C,
+  why: "outside the air model's reach of 100 K to 1000 K; air properties are validated for −50…150 °C",
+});
 
 /**
  * Reads and checks the fields of one case. Optional numbers are tested with `=== undefined`.
@@ -115,7 +127,7 @@ export class CaseReader {
     return v === undefined ? fallback : check(field, v, rule);
   }
 
-  /** A temperature in °C: finite and above absolute zero. */
+  /** A temperature in °C: finite and within the air model's physical reach (100 K…1000 K). */
   tempC(field: string, fallback?: number): number {
     return this.tempCAt(field, this.raw[field], fallback);
   }

@@ -34,12 +34,16 @@ export interface DuctRunInput extends DuctSection {
   location: "indoor" | "outdoor";
   V_wind_m_s: number;
   margin_K: number;
+  /** v2: solar absorptance of the jacket (0 when absent). */
+  absorptance: number;
+  /** v2: irradiance on the horizontal, W/m² (0 when absent). */
+  solar_W_m2: number;
   roughness_m: number;
   pressure_Pa: number;
 }
 
-/** Thickest insulation the minimum-thickness search tries, m, and its step (0.1 mm). */
-export const MAX_INSULATION_M = 0.2;
+/** Thickest insulation the minimum-thickness search tries, m (0.5 m in v2, as the schedule accepts), and its step (0.1 mm). */
+export const MAX_INSULATION_M = 0.5;
 const STEP_M = 1e-4;
 const TOL_K = 1e-4;
 
@@ -166,6 +170,7 @@ function surfaceTemperature(
   Tair: number,
   Rin: number,
   V: number,
+  S: number,
   x0: number,
   c: Outside,
 ): { Ts: number; converged: boolean } {
@@ -173,9 +178,11 @@ function surfaceTemperature(
   const Tsur = d.T_surround_C + T0;
   const next = (Ts: number): number => {
     outsideAt(d, o, Ts, V, null, c);
-    return (Tair / Rin + o.P_o * (c.h_conv * Ta + c.h_rad * Tsur)) / (1 / Rin + o.P_o * (c.h_conv + c.h_rad));
+    return (Tair / Rin + S + o.P_o * (c.h_conv * Ta + c.h_rad * Tsur)) / (1 / Rin + o.P_o * (c.h_conv + c.h_rad));
   };
-  const s = solveFixedPoint(next, Math.min(Tair, Ta, Tsur), Math.max(Tair, Ta, Tsur), x0, TOL_K);
+  // Sunshine can lift the jacket above every temperature of the problem: widen the upper bound
+  // by the rise the absorbed sun alone would give through the inner resistance.
+  const s = solveFixedPoint(next, Math.min(Tair, Ta, Tsur), Math.max(Tair, Ta, Tsur) + S * Rin, x0, TOL_K);
   return { Ts: s.x, converged: s.converged };
 }
 
@@ -208,10 +215,14 @@ export function evaluateDuctRun(
   bothEnds = true,
   c: Outside = newOutside(),
   trace: DuctRunTrace | null = null,
+  sun = true,
 ): DuctRunState {
   const g = ductGeometry(d);
   const round = d.shape === "round";
   const o = outerSection(d, t, g.perimeter_m);
+  // Absorbed sun per metre, W/m (v2): the irradiance on the horizontal over the jacket's outer
+  // width, the shadow the duct casts (common practice for a horizontal run).
+  const S = sun ? d.absorptance * d.solar_W_m2 * (round ? o.D_o : o.W_o) : 0;
   const TE = d.T_entering_C + T0;
   const Ta = d.T_ambient_C + T0;
   const Tsur = d.T_surround_C + T0;
@@ -231,11 +242,12 @@ export function evaluateDuctRun(
   // outside coefficients at the outer surface temperature: one joint fixed-point iteration on
   // (T_mean, T_so), with secant steps on T_so kept inside the temperatures of the problem.
   const lo = Math.min(TE, Ta, Tsur);
-  const up = Math.max(TE, Ta, Tsur);
   let Tm = TE;
   let Rin = insideR(TE);
+  // The sun can lift the jacket above every air temperature, by at most S·R_in.
+  const up = Math.max(TE, Ta, Tsur) + S * Rin;
   const h0 = 8 + 4 * V; // a typical still-air or windy outside coefficient, for the first guess only
-  let Tso = (Tm / Rin + o.P_o * h0 * Ta) / (1 / Rin + o.P_o * h0);
+  let Tso = (Tm / Rin + S + o.P_o * h0 * Ta) / (1 / Rin + o.P_o * h0);
   let converged = false;
   let hConv = 0;
   let hRad = 0;
@@ -252,9 +264,9 @@ export function evaluateDuctRun(
     hConv = c.h_conv;
     hRad = c.h_rad;
     const ho = hConv + hRad;
-    const TsoNew = (Tm / Rin + o.P_o * (hConv * Ta + hRad * Tsur)) / (1 / Rin + o.P_o * ho);
+    const TsoNew = (Tm / Rin + S + o.P_o * (hConv * Ta + hRad * Tsur)) / (1 / Rin + o.P_o * ho);
     UA = 1 / (Rin + 1 / (ho * o.P_o));
-    Tenv = (hConv * Ta + hRad * Tsur) / ho;
+    Tenv = (hConv * Ta + hRad * Tsur + S / o.P_o) / ho;
     TL = leavingAirTemperature(TE, Tenv, UA, d.length_m, mdot, cp);
     const TmNew = (TE + TL) / 2;
     const gap = TsoNew - Tso;
@@ -303,12 +315,12 @@ export function evaluateDuctRun(
   const Rout = 1 / ((hConv + hRad) * o.P_o);
   const shift = Rout / (Rin + Rout);
   if (bothEnds || TE <= TL) {
-    const sE = surfaceTemperature(d, o, TE, Rin, V, Tso + (TE - Tm) * shift, c);
+    const sE = surfaceTemperature(d, o, TE, Rin, V, S, Tso + (TE - Tm) * shift, c);
     TsE = sE.Ts;
     converged &&= sE.converged;
   }
   if (bothEnds || TL < TE) {
-    const sL = surfaceTemperature(d, o, TL, Rin, V, Tso + (TL - Tm) * shift, c);
+    const sL = surfaceTemperature(d, o, TL, Rin, V, S, Tso + (TL - Tm) * shift, c);
     TsL = sL.Ts;
     converged &&= sL.converged;
   }
@@ -337,7 +349,7 @@ function coldestSurface(st: DuctRunState): number {
 
 /**
  * Least insulation thickness, a multiple of 0.1 mm, for which condensation is false in still air;
- * 0 when the bare duct is safe, null when 0.2 m does not avoid it. The colder surface warms as
+ * 0 when the bare duct is safe, null when 0.5 m does not avoid it. The colder surface warms as
  * insulation is added, so the flag changes once along the steps: the search keeps a bracket of
  * steps [condensing, safe] and narrows it by the Illinois variant of regula falsi on the margin
  * (surface temperature − dew point − margin), which ends on neighbouring steps.
@@ -349,7 +361,7 @@ export function minInsulationThickness(d: DuctRunInput, TdpK: number): number | 
   const margin = (n: number): number => {
     let m = margins.get(n);
     if (m === undefined) {
-      m = coldestSurface(evaluateDuctRun(d, n * STEP_M, 0, null, false, c)) - limit;
+      m = coldestSurface(evaluateDuctRun(d, n * STEP_M, 0, null, false, c, null, false)) - limit;
       margins.set(n, m);
     }
     return m;
@@ -455,6 +467,20 @@ export function ductRunCore(d: DuctRunInput, warnings: CalcWarning[], trace: Duc
   warnRange(warnings, "dew-point-hyland-wexler", "T_C", d.T_ambient_C);
   const Tdp = dewPointHylandWexler(d.T_ambient_C, d.RH_ambient_pct);
   const TdpK = Tdp + T0;
+  const condensation = coldestSurface(st) < TdpK + d.margin_K;
+  const minT = minInsulationThickness(d, TdpK);
+  if (condensation && (minT === null || minT < d.insulation_thickness_m)) {
+    // Insulation moves the jacket towards the surroundings' temperature, not above it: where that
+    // lies below the dew point plus margin (a cold night sky, a chilled void), the cure is vapour
+    // sealing, a warmer surround or a different route, and a thickness would mislead.
+    addWarning(
+      warnings,
+      "surroundings_below_dew_point",
+      minT === null
+        ? `no insulation up to ${MAX_INSULATION_M} m keeps the jacket above the dew point${d.margin_K > 0 ? " plus margin" : ""}: its surroundings hold it below; more insulation is no cure (seal the jacket against vapour, or change the route or the surround)`
+        : `the jacket is below the dew point${d.margin_K > 0 ? " plus margin" : ""} with ${d.insulation_thickness_m} m of insulation although ${minT} m would keep it above: its surroundings are colder than the dew point, so more insulation is no cure`,
+    );
+  }
   return {
     T_leaving_C: st.T_leaving_K - T0,
     Q_W: st.Q_W,
@@ -465,8 +491,8 @@ export function ductRunCore(d: DuctRunInput, warnings: CalcWarning[], trace: Duc
     T_surface_entering_C: st.Ts_entering_K - T0,
     T_surface_leaving_C: st.Ts_leaving_K - T0,
     T_dp_C: Tdp,
-    condensation: coldestSurface(st) < TdpK + d.margin_K,
-    min_insulation_thickness_m: minInsulationThickness(d, TdpK),
+    condensation,
+    min_insulation_thickness_m: minT,
     regime: (st.internal as DuctInternal).regime,
     correlation: "duct-run-exponential",
     Re: (st.internal as DuctInternal).Re,

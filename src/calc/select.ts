@@ -38,11 +38,25 @@ export interface NaturalBranch {
   /** Ra of that branch: with g·cos θ or g·sin θ where the plate is inclined. */
   RaEff: number;
   turbulent: boolean;
+  /** Nusselt number of the branch used. */
+  nu: number;
+  /**
+   * Near the stable side's 60° switch (θ within SWITCH_BAND_DEG of it): the Nusselt number the
+   * other form gives and the angle from vertical; NaN elsewhere. The contract fixes the switch,
+   * so the engine keeps it and warns (see warnNaturalBranch).
+   */
+  altNu: number;
+  thetaDeg: number;
 }
 
 export function newNaturalBranch(): NaturalBranch {
-  return { id: "", RaEff: 0, turbulent: false };
+  return { id: "", RaEff: 0, turbulent: false, nu: 0, altNu: NaN, thetaDeg: 0 };
 }
+
+/** Angle from vertical of the stable side's switch between the inclined and horizontal forms. */
+export const STABLE_SWITCH_DEG = 60;
+/** Within this many degrees of the switch, a result warns and names the other form's value. */
+export const SWITCH_BAND_DEG = 5;
 
 /**
  * Natural convection from a plate at any tilt (0 = facing up, 90 = vertical, 180 = facing down):
@@ -53,25 +67,41 @@ export function newNaturalBranch(): NaturalBranch {
  */
 export function nuPlateNatural(Ra: number, Pr: number, tiltDeg: number, hot: boolean, b: NaturalBranch): number {
   const thetaDeg = Math.abs(tiltDeg - 90);
+  b.altNu = NaN;
+  b.thetaDeg = thetaDeg;
   if (thetaDeg === 0) {
     b.id = "churchill-chu-vertical-plate";
     b.RaEff = Ra;
     b.turbulent = Ra > 1e9;
-    return nuVerticalPlateChurchillChu(Ra, Pr);
+    b.nu = nuVerticalPlateChurchillChu(Ra, Pr);
+    return b.nu;
   }
   const stable = hot !== tiltDeg < 90;
-  if (stable && thetaDeg > 60) {
-    b.id = "horizontal-plate-stable";
-    b.RaEff = Ra;
-    b.turbulent = false;
-    return nuHorizontalPlateStable(Ra);
-  }
   const RaV = Ra * Math.cos(thetaDeg * DEG);
+  if (stable) {
+    // The switch at 60° is a step (a cold plate facing up: h 2.45 → 0.55 W/m²K between tilt 30°
+    // and 29.9°); near it the other form is computed too, for the warning.
+    const near = Math.abs(thetaDeg - STABLE_SWITCH_DEG) <= SWITCH_BAND_DEG;
+    if (thetaDeg > STABLE_SWITCH_DEG) {
+      b.id = "horizontal-plate-stable";
+      b.RaEff = Ra;
+      b.turbulent = false;
+      b.nu = nuHorizontalPlateStable(Ra);
+      if (near) b.altNu = nuVerticalPlateChurchillChu(RaV, Pr);
+      return b.nu;
+    }
+    b.id = "churchill-chu-inclined-plate";
+    b.RaEff = RaV;
+    b.turbulent = RaV > 1e9;
+    b.nu = nuVerticalPlateChurchillChu(RaV, Pr);
+    if (near) b.altNu = nuHorizontalPlateStable(Ra);
+    return b.nu;
+  }
   const nuV = nuVerticalPlateChurchillChu(RaV, Pr);
   b.id = "churchill-chu-inclined-plate";
   b.RaEff = RaV;
   b.turbulent = RaV > 1e9;
-  if (stable) return nuV;
+  b.nu = nuV;
   const RaH = Ra * Math.sin(thetaDeg * DEG);
   const turbH = RaH > 1e7;
   const nuH = turbH ? nuHorizontalPlateUnstableTurbulent(RaH) : nuHorizontalPlateUnstableLaminar(RaH);
@@ -79,6 +109,7 @@ export function nuPlateNatural(Ra: number, Pr: number, tiltDeg: number, hot: boo
   b.id = turbH ? "horizontal-plate-unstable-turbulent" : "horizontal-plate-unstable-laminar";
   b.RaEff = RaH;
   b.turbulent = turbH;
+  b.nu = nuH;
   return nuH;
 }
 

@@ -6,16 +6,17 @@
 import { SIGMA, T0 } from "./constants";
 import { airProperties, airPropertiesInto, newAirProperties, type AirProperties } from "./properties/air";
 import { hcIso6946, hcMcAdams } from "./convection/empirical";
-import { hRadiation, radiantTemperature, skyTemperatureSwinbank, skyViewFactor } from "./radiation/radiation";
+import { hRadiation, radiantTemperature, skyTemperatureCloudy, skyViewFactor } from "./radiation/radiation";
 import { air } from "./kinds/common";
-import { RE_CRIT_DEFAULT, warnPlateCombined } from "./kinds/external";
+import { warnPlateCombined } from "./kinds/external";
 import { regimeFromRichardson } from "./convection/combined";
 import type { CalcWarning } from "./contract";
 import { newPlateCombinedState, plateCombinedInto, type PlateCombinedState } from "./select";
 import { windAtHeight } from "./kinds/wind";
 import type { Terrain } from "./wind/wind-profile";
-import { isWindward } from "./wind/wind-profile";
-import { addWarning } from "./validity";
+import { exposureWeight } from "./wind/wind-profile";
+import { addWarning, checkRange } from "./validity";
+import { METHOD_BY_ID } from "./registry";
 
 export type ExteriorMethod = "boundary_layer" | "iso6946" | "mcadams";
 export const EXTERIOR_METHODS: readonly ExteriorMethod[] = ["boundary_layer", "iso6946", "mcadams"];
@@ -47,6 +48,10 @@ export interface SurfaceInput {
   method: ExteriorMethod;
   /** Default 0.25. */
   leeward_factor?: number;
+  /** v2. Critical Reynolds number of the boundary-layer method; default 0 (turbulent from the leading edge). */
+  Re_crit?: number;
+  /** v2. Cloud cover, fraction 0 (clear, the default) … 1 (overcast). */
+  cloud_cover?: number;
   /** Default 101 325 Pa. */
   pressure_Pa?: number;
 }
@@ -57,6 +62,8 @@ export const SURFACE_DEFAULTS = {
   met_height_m: 10,
   solar_W_m2: 0,
   leeward_factor: 0.25,
+  Re_crit: 0,
+  cloud_cover: 0,
   pressure_Pa: 101325,
 } as const;
 
@@ -67,6 +74,7 @@ export type SurfaceResult = {
   V_local_m_s: number;
   V_surface_m_s: number;
   windward: boolean;
+  exposure: number;
   h_c_W_m2K: number;
   h_r_W_m2K: number;
   h_o_W_m2K: number;
@@ -76,6 +84,8 @@ export type SurfaceResult = {
   U_W_m2K: number;
   q_W_m2: number;
   Q_W: number;
+  q_air_W_m2: number;
+  q_sky_solar_W_m2: number;
   regime: string;
   correlation: string;
   warnings: CalcWarning[];
@@ -86,6 +96,8 @@ export interface SurfaceTrace {
   law: "power" | "log";
   met_height_m: number;
   leeward_factor: number;
+  Re_crit: number;
+  cloud_cover: number;
   pressure_Pa: number;
   R_in_m2K_W: number;
   absorbed_solar_W_m2: number;
@@ -103,7 +115,7 @@ export interface SurfaceTrace {
 
 export function newSurfaceTrace(): SurfaceTrace {
   return {
-    law: "power", met_height_m: 0, leeward_factor: 0, pressure_Pa: 0, R_in_m2K_W: 0, absorbed_solar_W_m2: 0, F_sky: 0,
+    law: "power", met_height_m: 0, leeward_factor: 0, Re_crit: 0, cloud_cover: 0, pressure_Pa: 0, R_in_m2K_W: 0, absorbed_solar_W_m2: 0, F_sky: 0,
     T_sky_K: 0, T_radiant_K: 0, T_eval_K: 0, iterations: 0, props: newAirProperties(), combined: null,
   };
 }
@@ -115,6 +127,8 @@ const STATE = newPlateCombinedState();
 
 // A Newton step smaller than this means T_s is within it of the root (the contract asks 0.001 K).
 const TOL_K = 1e-3;
+
+const MCADAMS_RANGE = METHOD_BY_ID["mcadams-wind"].ranges.V_surface_m_s;
 
 /**
  * Solves the outside-face balance and returns the `surface` result of the contract. The result
@@ -131,13 +145,16 @@ export function surfaceCore(
   const metHeight = s.met_height_m === undefined ? d.met_height_m : s.met_height_m;
   const leeward = s.leeward_factor === undefined ? d.leeward_factor : s.leeward_factor;
   const wind = windAtHeight(s.V_met_m_s, s.height_m, s.terrain, law, metHeight, warnings);
-  const windward = isWindward(s.wind_from_deg, s.azimuth_deg, s.tilt_deg);
-  const Vs = windward ? wind.V_m_s : leeward * wind.V_m_s;
+  const w = exposureWeight(s.wind_from_deg, s.azimuth_deg, s.tilt_deg);
+  const windward = w >= 0.5;
+  const Vs = wind.V_m_s * (leeward + (1 - leeward) * w);
+  const ReCrit = s.Re_crit === undefined ? d.Re_crit : s.Re_crit;
+  const cloud = s.cloud_cover === undefined ? d.cloud_cover : s.cloud_cover;
   const Tin = s.T_inside_C + T0;
   const To = s.T_outside_C + T0;
   const Rin = (s.R_si_m2K_W === undefined ? d.R_si_m2K_W : s.R_si_m2K_W) + s.R_construction_m2K_W;
   const solar = s.absorptance * (s.solar_W_m2 === undefined ? d.solar_W_m2 : s.solar_W_m2);
-  const Tsky = skyTemperatureSwinbank(To);
+  const Tsky = skyTemperatureCloudy(To, cloud);
   const Fsky = skyViewFactor(s.tilt_deg);
   const Tr = radiantTemperature(Fsky, Tsky, To);
   const p = s.pressure_Pa === undefined ? d.pressure_Pa : s.pressure_Pa;
@@ -163,7 +180,7 @@ export function surfaceCore(
     let slopeN = 0;
     if (state !== null) {
       airPropertiesInto((x + To) / 2, p, props);
-      hc = plateCombinedInto(props, x, To, Vs, s.length_m, s.tilt_deg, s.panel_height_m, RE_CRIT_DEFAULT, state);
+      hc = plateCombinedInto(props, x, To, Vs, s.length_m, s.tilt_deg, s.panel_height_m, ReCrit, state);
       const hN = state.hN;
       if (hc > 0) slopeN = ((state.natural.turbulent ? 1 / 3 : 1 / 4) * hN * hN * hN) / (hc * hc);
     }
@@ -183,11 +200,13 @@ export function surfaceCore(
   // T_s from the linearised balance with the coefficients just evaluated: the reported h_c and h_r
   // then close the balance exactly (they are taken within 0.0001 K of T_s).
   const Ts = (Tin / Rin + solar + hc * To + hr * Tr) / (1 / Rin + hc + hr);
-  if (hcFixed >= 0) air((Ts + To) / 2, p, warnings, "T_film_C");
-  else {
+  if (hcFixed >= 0) {
+    air((Ts + To) / 2, p, warnings, "T_film_C");
+    if (s.method === "mcadams") checkRange(warnings, "mcadams-wind", METHOD_BY_ID["mcadams-wind"].title, "V_surface_m_s", Vs, MCADAMS_RANGE);
+  } else {
     // Range warnings of the state reported, worded once.
     air((x + To) / 2, p, warnings, "T_film_C");
-    if (state !== null) warnPlateCombined(state, warnings);
+    if (state !== null) warnPlateCombined(state, ReCrit, warnings);
   }
   const regime = state === null ? "empirical" : regimeFromRichardson(state.Ri);
   if (trace !== null) {
@@ -195,6 +214,8 @@ export function surfaceCore(
     trace.law = law;
     trace.met_height_m = metHeight;
     trace.leeward_factor = leeward;
+    trace.Re_crit = ReCrit;
+    trace.cloud_cover = cloud;
     trace.pressure_Pa = p;
     trace.R_in_m2K_W = Rin;
     trace.absorbed_solar_W_m2 = solar;
@@ -219,12 +240,15 @@ export function surfaceCore(
     Tsolair = Ts;
     U = 0;
   }
+  // The part of q a checker reconciles with U·ΔT; the rest is what the sky adds and the sun removes.
+  const qAir = U * (Tin - To);
   return {
     id,
     ok: true,
     V_local_m_s: wind.V_m_s,
     V_surface_m_s: Vs,
     windward,
+    exposure: w,
     h_c_W_m2K: hc,
     h_r_W_m2K: hr,
     h_o_W_m2K: ho,
@@ -234,6 +258,8 @@ export function surfaceCore(
     U_W_m2K: U,
     q_W_m2: q,
     Q_W: q * s.area_m2,
+    q_air_W_m2: qAir,
+    q_sky_solar_W_m2: q - qAir,
     regime,
     correlation: state !== null ? "churchill-combined-plate" : s.method === "iso6946" ? "iso6946-simplified" : "mcadams-wind",
     warnings,

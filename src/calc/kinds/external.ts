@@ -15,6 +15,8 @@ import {
   grashof,
   newNaturalBranch,
   newPlateCombinedState,
+  STABLE_SWITCH_DEG,
+  SWITCH_BAND_DEG,
   nuPlateForced,
   nuPlateNatural,
   plateCombinedInto,
@@ -24,6 +26,7 @@ import {
 } from "../select";
 import type { AirProperties } from "../properties/air";
 import { air, warnRange, type Warnings } from "./common";
+import { addWarning } from "../validity";
 
 export const RE_CRIT_DEFAULT = 5e5;
 
@@ -61,6 +64,7 @@ export function plateForcedCore(
     if (Rex <= ReCrit) {
       Nux = nuFlatPlateLaminarLocal(Rex, Pr);
       out.correlation_x = "flat-plate-local-laminar";
+      warnRange(warnings, out.correlation_x, "Re_x", Rex);
       warnRange(warnings, out.correlation_x, "Pr", Pr);
     } else {
       Nux = nuFlatPlateTurbulentLocal(Rex, Pr);
@@ -90,13 +94,28 @@ export interface PlateNatural {
 /** Range warnings of the average flat-plate correlation used. */
 export function warnPlateForced(f: PlateForced, warnings: Warnings): void {
   if (warnings === null) return;
-  if (f.regime !== "laminar") warnRange(warnings, f.correlation, "Re", f.Re);
+  warnRange(warnings, f.correlation, "Re", f.Re);
   warnRange(warnings, f.correlation, "Pr", f.Pr);
 }
 
-/** Range warnings of the natural-convection branch used (on its effective Rayleigh number). */
+/**
+ * Range warnings of the natural-convection branch used (on its effective Rayleigh number) and,
+ * within SWITCH_BAND_DEG of the stable side's 60° switch, a `near_method_switch` warning that
+ * names the other form's Nusselt number: the contract keeps the step, the checker sees its size.
+ */
 export function warnNaturalBranch(b: NaturalBranch, warnings: Warnings): void {
-  if (warnings !== null) warnRange(warnings, b.id, "Ra", b.RaEff);
+  if (warnings === null) return;
+  warnRange(warnings, b.id, "Ra", b.RaEff);
+  if (b.altNu === b.altNu) {
+    const other = b.id === "horizontal-plate-stable" ? "Churchill & Chu with g·cos θ" : "the horizontal stable form 0.52 Ra^⅕";
+    const change = Math.round((b.altNu / b.nu - 1) * 100);
+    addWarning(
+      warnings,
+      "near_method_switch",
+      `the plate is ${Math.round(b.thetaDeg * 10) / 10}° from vertical, within ${SWITCH_BAND_DEG}° of the ${STABLE_SWITCH_DEG}° switch of the stable side; ` +
+        `${other} would give Nu ${Math.round(b.altNu * 100) / 100} instead of ${Math.round(b.nu * 100) / 100} (${change > 0 ? "+" : ""}${change} %)`,
+    );
+  }
 }
 
 /** Natural convection from a plate at any tilt (see nuPlateNatural for the selection). */
@@ -136,11 +155,15 @@ export interface PlateCombined {
 }
 
 /** Range warnings of both parts of a combined coefficient, from its state. */
-export function warnPlateCombined(st: PlateCombinedState, warnings: Warnings): void {
+export function warnPlateCombined(st: PlateCombinedState, ReCrit: number, warnings: Warnings): void {
   if (warnings === null) return;
-  const b = plateForcedBranch(st.Re, RE_CRIT_DEFAULT);
-  if (b.regime !== "laminar") warnRange(warnings, b.id, "Re", st.Re);
-  warnRange(warnings, b.id, "Pr", st.Pr);
+  const b = plateForcedBranch(st.Re, ReCrit);
+  // The forced part's ranges matter only where it contributes: not in still air (Ri null) and
+  // not where buoyancy rules (Ri > 10), or every still day would warn of a low Reynolds number.
+  if (st.Ri !== null && st.Ri <= 10) {
+    warnRange(warnings, b.id, "Re", st.Re);
+    warnRange(warnings, b.id, "Pr", st.Pr);
+  }
   warnNaturalBranch(st.natural, warnings);
 }
 
@@ -173,7 +196,7 @@ export function plateCombinedCore(
 ): PlateCombined {
   const st = newPlateCombinedState();
   plateCombinedInto(props, Ts, Ta, V, L, tiltDeg, H, RE_CRIT_DEFAULT, st);
-  warnPlateCombined(st, warnings);
+  warnPlateCombined(st, RE_CRIT_DEFAULT, warnings);
   return plateCombinedResult(st);
 }
 

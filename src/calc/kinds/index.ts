@@ -34,6 +34,9 @@ const RH = rule({ gt: 0, max: 100, why: "no dew point exists in perfectly dry ai
 const NO_FLOW_DUCT = rule({ gt: 0, why: "a duct without flow has no inside film" });
 const NO_FLOW_RUN = rule({ gt: 0, why: "a duct run without flow has no leaving temperature" });
 const THICKNESS = rule({ min: 0, max: 1 });
+// A met mast reads the wind at least 1 m above the ground (10 m is the standard height); below
+// that the reading says nothing about the site wind (WMO No. 8, §5.1.2: common practice).
+const MET_HEIGHT = rule({ min: 1, why: "a met-mast reading is taken at least 1 m above the ground (10 m is standard)" });
 const MARGIN = rule({ min: 0, max: 50 });
 const SHAPES = ["round", "rect"] as const;
 const LOCATIONS = ["indoor", "outdoor"] as const;
@@ -79,6 +82,8 @@ export function readDuctRun(r: CaseReader): DuctRunInput {
     location: r.oneOfAt("location", v.location, LOCATIONS),
     V_wind_m_s: r.optNumAt("V_wind_m_s", v.V_wind_m_s, 0, NONNEG),
     margin_K: r.optNumAt("margin_K", v.margin_K, 0, MARGIN),
+    absorptance: r.optNumAt("absorptance", v.absorptance, 0, FRACTION),
+    solar_W_m2: r.optNumAt("solar_W_m2", v.solar_W_m2, 0, SOLAR),
     roughness_m: r.optNumAt("roughness_m", v.roughness_m, ROUGHNESS_DEFAULT_M, NONNEG),
     pressure_Pa: r.optNumAt("pressure_Pa", v.pressure_Pa, 101325, PRESSURE),
   };
@@ -174,7 +179,7 @@ export const KINDS: Readonly<Record<string, KindFn>> = {
     const H = r.num("height_m", NONNEG);
     const terrain = r.oneOf("terrain", TERRAINS);
     const law = r.oneOf("law", WIND_LAWS, "power");
-    const Hmet = r.optNum("met_height_m", 10, POS);
+    const Hmet = r.optNum("met_height_m", 10, MET_HEIGHT);
     readPressure(r);
     return { id, ok: true, ...windAtHeight(V, H, terrain, law, Hmet, w), warnings: w };
   },
@@ -216,12 +221,14 @@ export const KINDS: Readonly<Record<string, KindFn>> = {
     r.numAt("wind_from_deg", v.wind_from_deg, BEARING);
     r.oneOfAt("terrain", v.terrain, TERRAINS);
     r.oneOfAt("law", v.law, WIND_LAWS, SURFACE_DEFAULTS.law);
-    r.optNumAt("met_height_m", v.met_height_m, SURFACE_DEFAULTS.met_height_m, POS);
+    r.optNumAt("met_height_m", v.met_height_m, SURFACE_DEFAULTS.met_height_m, MET_HEIGHT);
     r.numAt("emissivity", v.emissivity, FRACTION);
     r.numAt("absorptance", v.absorptance, FRACTION);
     r.optNumAt("solar_W_m2", v.solar_W_m2, SURFACE_DEFAULTS.solar_W_m2, SOLAR);
     r.oneOfAt("method", v.method, EXTERIOR_METHODS);
     r.optNumAt("leeward_factor", v.leeward_factor, SURFACE_DEFAULTS.leeward_factor, FRACTION);
+    r.optNumAt("Re_crit", v.Re_crit, SURFACE_DEFAULTS.Re_crit, NONNEG);
+    r.optNumAt("cloud_cover", v.cloud_cover, SURFACE_DEFAULTS.cloud_cover, FRACTION);
     r.optNumAt("pressure_Pa", v.pressure_Pa, SURFACE_DEFAULTS.pressure_Pa, PRESSURE);
     return surfaceCore(v as SurfaceInput, [], id);
   },

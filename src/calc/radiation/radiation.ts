@@ -26,6 +26,23 @@ export function skyTemperatureSwinbank(Tair: number): number {
 }
 
 /**
+ * Sky temperature under cloud cover c (0 clear … 1 overcast): T_sky⁴ = (1 − c)·T_clear⁴ + c·T_air⁴,
+ * T_clear by Swinbank. An overcast sky radiates at about the air temperature (common practice;
+ * no single source), so c = 0 is Swinbank's clear sky exactly and c = 1 the air temperature.
+ * @param Tair screen-level air temperature, K
+ * @param cloud cloud cover, fraction 0…1
+ * @example 268.15 K, c 1 → 268.15 K; c 0 → 242.4 K
+ * @see Swinbank (1963); Filmsheet calculation contract v2, `surface`.
+ */
+export function skyTemperatureCloudy(Tair: number, cloud: number): number {
+  const Tc = skyTemperatureSwinbank(Tair);
+  if (cloud === 0) return Tc;
+  const c2 = Tc * Tc;
+  const a2 = Tair * Tair;
+  return Math.sqrt(Math.sqrt((1 - cloud) * c2 * c2 + cloud * a2 * a2));
+}
+
+/**
  * View factor from a tilted plane to the sky dome: F_sky = (1 + cos tilt)/2.
  * @param tiltDeg tilt from the horizontal, degrees (0 faces up)
  * @see J. A. Duffie, W. A. Beckman, Solar Engineering of Thermal Processes (4th ed.), §3.16.

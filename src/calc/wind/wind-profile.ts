@@ -64,11 +64,27 @@ export function windSpeedLogLaw(Vmet: number, z: number, terrain: Terrain, Hmet:
 }
 
 /**
- * Whether a surface faces the wind: the direction the wind comes from lies within 90° of the
- * outward normal (90° included). Horizontal surfaces (tilt 0 or 180) count as windward.
+ * Exposure of a face to the wind, w in 0…1 (contract v2): 1 when the wind comes from within 80°
+ * of the outward normal, 0 from 100°, linear between (w_az = clamp((100 − Δ)/20, 0, 1)); faces
+ * within 10° of the horizontal are fully exposed, fading to the azimuth rule by 20°
+ * (w_tilt = clamp((20 − t)/10, 0, 1), t = min(tilt, 180 − tilt)); w = max(w_az, w_tilt).
+ * Blending over 20° replaces v1's step at 90°, which dropped h_c by half for a change of wind
+ * direction of a thousandth of a degree (common practice: no single published source fixes the
+ * width of the band; 20° is the contract's choice).
+ * @param windFromDeg direction the wind comes from, degrees clockwise from north
+ * @param azimuthDeg outward normal of the face, degrees clockwise from north
+ * @param tiltDeg tilt from the horizontal, degrees (0 faces up, 180 faces down)
+ * @example wind from 265°, face to 180°: Δ = 85° → 0.75
+ * @see Filmsheet calculation contract v2, `surface`.
  */
-export function isWindward(windFromDeg: number, azimuthDeg: number, tiltDeg: number): boolean {
-  if (tiltDeg === 0 || tiltDeg === 180) return true;
+export function exposureWeight(windFromDeg: number, azimuthDeg: number, tiltDeg: number): number {
   const d = Math.abs(((((windFromDeg - azimuthDeg) % 360) + 540) % 360) - 180);
-  return d <= 90 + 1e-9;
+  const wAz = clamp01((100 - d) / 20);
+  const t = Math.min(tiltDeg, 180 - tiltDeg);
+  const wTilt = clamp01((20 - t) / 10);
+  return wAz > wTilt ? wAz : wTilt;
+}
+
+function clamp01(x: number): number {
+  return x < 0 ? 0 : x > 1 ? 1 : x;
 }
