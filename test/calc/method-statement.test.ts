@@ -20,7 +20,7 @@ describe("method statement", () => {
   });
 
   test("states the conventions: tilt, azimuth, sign of Q, evaluation temperature", () => {
-    for (const topic of ["Tilt", "Azimuth and wind direction", "Sign of heat flow", "Evaluation temperature"]) {
+    for (const topic of ["Tilt", "Azimuth, wind direction and exposure", "Sign of heat flow", "Evaluation temperature", "Sky and cloud", "Switches", "Inputs refused"]) {
       expect(CONVENTIONS.map((c) => c.topic)).toContain(topic);
       expect(doc).toContain(`**${topic}.**`);
     }
