@@ -44,8 +44,14 @@ describe("surface working", () => {
     }
     expect(w.methods.find((m) => m.id === "churchill-chu-vertical-plate")?.source).toMatch(/Churchill.*Chu.*1975/);
   });
-  test("local h falls as x^−½ in the laminar part and jumps up at transition (flat-plate laws)", () => {
+  test("default (turbulent from the leading edge): local h is turbulent throughout and falls as x^−0.2 (0.0296 Re_x^0.8)", () => {
     const pts = w.charts.local_h ?? [];
+    expect(pts.every((p) => p.regime === "turbulent")).toBe(true);
+    const [a, b] = [pts[0], pts[pts.length - 1]];
+    expect(a.h_W_m2K / b.h_W_m2K).toBeCloseTo(Math.pow(b.x_m / a.x_m, 0.2), 9);
+  });
+  test("with Re_crit 5×10⁵ local h falls as x^−½ in the laminar part and jumps up at transition (flat-plate laws)", () => {
+    const pts = working({ ...wall, Re_crit: 5e5 }).charts.local_h ?? [];
     const lam = pts.filter((p) => p.regime === "laminar");
     const turb = pts.filter((p) => p.regime === "turbulent");
     expect(lam.length).toBeGreaterThan(2);

@@ -24,6 +24,8 @@ export function ductRunWorking(d: DuctRunInput, result: CalcResult): Working {
     .add("Location", "location", d.location)
     .add("Wind across the duct", "V_w", d.V_wind_m_s, "m/s")
     .add("Condensation margin", "Δ", d.margin_K, "K")
+    .add("Jacket solar absorptance", "α", d.absorptance)
+    .add("Solar irradiance on the horizontal", "G", d.solar_W_m2, "W/m²")
     .add("Wall roughness", "ε_r", d.roughness_m, "m")
     .add("Site pressure", "p", d.pressure_Pa, "Pa");
 
@@ -76,7 +78,8 @@ export function ductRunWorking(d: DuctRunInput, result: CalcResult): Working {
   const ntu = (o.UA_per_m_W_mK * d.length_m) / (o.mass_flow_kg_s * (tr.inside_props?.cp_J_kgK ?? 1006));
   w.to("The run")
     .add("Overall conductance per metre", "UA′", o.UA_per_m_W_mK, "W/mK", "1/(R′_i + R′_ins + 1/((h_o,c + h_o,r) P_o))")
-    .add("Environment temperature", "T_env", o.T_env_C, "°C", "(h_o,c T_amb + h_o,r T_sur)/(h_o,c + h_o,r)")
+    .add("Absorbed sun per metre", "S", d.absorptance * d.solar_W_m2 * (round ? tr.D_o_m : tr.W_o_m), "W/m", "α G W, W the outer width (G on the horizontal)")
+    .add("Environment temperature", "T_env", o.T_env_C, "°C", "(h_o,c T_amb + h_o,r T_sur + S/P_o)/(h_o,c + h_o,r)")
     .add("Mass flow", "ṁ", o.mass_flow_kg_s, "kg/s", "ρ(T_E) V̇")
     .add("Number of transfer units", "NTU", ntu, "", "UA′ L/(ṁ c_p)")
     .add("Leaving air temperature", "T_L", o.T_leaving_C, "°C", "T_env + (T_E − T_env) e^−NTU", "duct-run-exponential")
@@ -87,7 +90,7 @@ export function ductRunWorking(d: DuctRunInput, result: CalcResult): Working {
     .add("Jacket temperature, leaving end", "T_s,L", o.T_surface_leaving_C, "°C")
     .add("Ambient dew point", "T_dp", o.T_dp_C, "°C", undefined, "dew-point-hyland-wexler")
     .add("Condensation", "cond", o.condensation, "", "colder end below T_dp + margin")
-    .add("Least insulation that avoids it (still air)", "t_min", o.min_insulation_thickness_m, "m", "to 0.1 mm, at most 0.2 m; null: not within 0.2 m");
+    .add("Least insulation that avoids it (still air)", "t_min", o.min_insulation_thickness_m, "m", "to 0.1 mm, at most 0.5 m, no sun; null: not within 0.5 m");
   if (result.ok) for (const x of result.warnings) if (x.method !== undefined) w.use(x.method);
   return { kind: "duct_run", result, lines: w.lines, methods: w.methods(), charts: { local_h: null, h_vs_wind: null, current: null } };
 }
