@@ -15,7 +15,11 @@ export interface CalcWarning {
 }
 
 export interface CalcErrorBody {
-  code: "invalid_input";
+  /**
+   * `invalid_input` on the contract's wire; a schedule also answers `not_computed` for a row the
+   * engine leaves out by design (a surface over ground).
+   */
+  code: "invalid_input" | "not_computed";
   field: string;
   message: string;
 }

@@ -1,5 +1,5 @@
 /**
- * Filmsheet's calculation engine: calculation contract v1 (shared/design/calc-contract.md).
+ * Filmsheet's calculation engine: calculation contract v2 (shared/design/calc-contract.md).
  * Pure TypeScript with no I/O, so it runs the same in the browser and on the server.
  */
 
@@ -16,7 +16,9 @@ export type { Terrain } from "./wind/wind-profile";
 export type { WindLaw } from "./kinds/wind";
 
 export * from "./schedule/types";
-export { buildupResistance, ductRunCase, ductSurroundC, insideSurfaceResistance, insideTemperature, outdoorDuctSurroundC, solarOnSurface, surfaceCase } from "./schedule/cases";
-export { scheduleResults, type Schedule, type ScheduleResults, type RowResult } from "./schedule/results";
+export { buildupResistance, ductRunCase, ductSurroundC, insideSurfaceResistance, insideTemperature, outdoorDuctSurroundC, rhCarried, solarOnSurface, surfaceCase } from "./schedule/cases";
+export { insideSurfaceCheck, methodSpread, METHOD_SENSITIVE_SHARE, MOULD_SURFACE_RH, type InsideSurfaceCheck, type MethodSpread } from "./schedule/checks";
+export { TOTAL_EXCLUSIONS, exclusionsSentence, type Exclusion } from "./schedule/exclusions";
+export { OVER_GROUND_MESSAGE, scheduleResults, type Schedule, type ScheduleResults, type RowResult } from "./schedule/results";
 export { working } from "./working/index";
 export type { Working, WorkingLine, MethodUsed, WorkingCharts, LocalHPoint, WindPoint } from "./working/index";

@@ -18,6 +18,7 @@ import {
   type SurfaceRow,
   type Zone,
 } from "../../src/calc/index";
+import { expectClose, num, run } from "./helpers";
 
 const site: Site = { altitude_m: 120, terrain: "suburban", wind_law: "power", method: "boundary_layer" };
 const winter: DesignCase = { id: "dc-w", name: "Windy winter", kind: "heating", T_outdoor_C: -4, RH_outdoor_pct: 85, V_met_m_s: 7, wind_from_deg: 240, solar_W_m2: {} };
@@ -141,10 +142,25 @@ describe("duct-run case", () => {
     expect("T_surround_C" in ductRunCase(site, winter, zone, { ...duct, location: "indoor" })).toBe(false);
     expect("T_surround_C" in ductRunCase(site, winter, zone, { ...duct, T_surround_C: 5 })).toBe(false);
   });
-  test("run in a ceiling void: the void's temperature, the zone's RH, no wind", () => {
+  test("run in a ceiling void: the void's temperature, the zone air's moisture (its dew point), no wind", () => {
     const c = ductRunCase(site, summer, zone, { ...duct, location: "indoor", T_surround_C: 28, shape: "rect", diameter_m: null, width_m: 0.6, height_m: 0.3 });
-    expect(c).toMatchObject({ T_ambient_C: 28, RH_ambient_pct: 50, V_wind_m_s: 0, width_m: 0.6, height_m: 0.3 });
+    expect(c).toMatchObject({ T_ambient_C: 28, V_wind_m_s: 0, width_m: 0.6, height_m: 0.3 });
     expect("diameter_m" in c).toBe(false);
+    // The zone air, 24 °C at 50 %, has a dew point of 12.95 °C (psychrolib 1.1.1,
+    // GetTDewPointFromRelHum(24, 0.5)); the void carries that moisture, not 50 % at 28 °C
+    // (whose dew point would be 16.6 °C, ASHRAE psychrometric chart, from memory).
+    const dp = run({ kind: "dew_point", T_C: c.T_ambient_C, RH_pct: c.RH_ambient_pct });
+    expectClose(num(dp, "T_dp_C"), 12.95, 0, 0.05);
+    expect(c.RH_ambient_pct).toBeLessThan(50);
+  });
+  test("a void colder than the zone air's dew point is saturated (RH 100 %), the unsafe side of v1", () => {
+    const c = ductRunCase(site, summer, zone, { ...duct, location: "indoor", T_surround_C: 10 });
+    expect(c.RH_ambient_pct).toBe(100);
+  });
+  test("a run inside the zone it serves crosses the zone air: its set point and RH in the case", () => {
+    const c = ductRunCase(site, winter, zone, { ...duct, location: "outdoor", T_surround_C: 5, in_served_zone: true });
+    expect(c).toMatchObject({ T_ambient_C: 21, RH_ambient_pct: 50, V_wind_m_s: 0, location: "indoor" });
+    expect("T_surround_C" in c).toBe(false);
   });
 });
 
@@ -176,7 +192,9 @@ describe("duct-run surround by the design case's kind", () => {
   test("humidity follows the surround of the case: the zone's RH in a space, the outdoor RH in the outdoor air", () => {
     // Zone RH 50 %, winter outdoor 85 % (fixtures above).
     const onlyCooling = { ...voidRun, T_surround_C: null, T_surround_cooling_C: 28 };
-    expect(ductRunCase(site, summer, zone, onlyCooling).RH_ambient_pct).toBe(50);
+    // 28 °C carrying the 24 °C / 50 % zone air's moisture: 50 % × p_ws(24)/p_ws(28), with the
+    // saturation pressures 2985.0 and 3781.9 Pa (ASHRAE Fundamentals 2017, ch. 1, table 3, from memory).
+    expectClose(ductRunCase(site, summer, zone, onlyCooling).RH_ambient_pct, (50 * 2985.0) / 3781.9, 0.003);
     expect(ductRunCase(site, winter, zone, onlyCooling).RH_ambient_pct).toBe(85);
   });
 

@@ -4,9 +4,10 @@
  * are plain contract requests, so the browser, the server and `npm run calc` compute them alike.
  */
 import { pressureAtAltitude } from "../properties/atmosphere";
-import { radiantTemperature, skyTemperatureSwinbank, skyViewFactor } from "../radiation/radiation";
+import { radiantTemperature, skyTemperatureCloudy, skyViewFactor } from "../radiation/radiation";
+import { saturationPressureHylandWexler } from "../psychrometrics/dew-point";
 import { windSpeedLogLaw, windSpeedPowerLaw } from "../wind/wind-profile";
-import { ORIENTATIONS, type Buildup, type DesignCase, type DuctRunRow, type Site, type SolarTable, type SurfaceRow, type Zone } from "./types";
+import { DEFAULT_JACKET_ABSORPTANCE, ORIENTATIONS, type Buildup, type DesignCase, type DuctRunRow, type Site, type SolarTable, type SurfaceRow, type Zone } from "./types";
 
 /** Construction resistance of a build-up, m²K/W: Σ t/k over its layers, or its direct R. */
 export function buildupResistance(b: Pick<Buildup, "layers" | "R_direct_m2K_W">): number {
@@ -81,6 +82,7 @@ export function surfaceCase(site: Site, dc: DesignCase, zone: Zone, buildup: Bui
     absorptance: row.absorptance ?? buildup.absorptance,
     solar_W_m2: solarOnSurface(dc.solar_W_m2, row.tilt_deg, row.azimuth_deg),
     method: row.method ?? site.method,
+    cloud_cover: dc.cloud_cover ?? 0,
     pressure_Pa: pressureAtAltitude(site.altitude_m),
   };
 }
@@ -91,12 +93,25 @@ export const DEFAULT_DUCT_ELEVATION_M = 10;
 /**
  * Radiant surround of a duct run out of doors, °C: a horizontal run sees the sky over its upper
  * half and the ground below (view factor ½ each, as a vertical plane: common practice), the sky at
- * Swinbank's clear-sky temperature and the ground at the outdoor air temperature. On a clear night
- * this cools the jacket below the air around it, which is when outdoor ducts condense.
+ * Swinbank's clear-sky temperature under the case's cloud cover and the ground at the outdoor air
+ * temperature. On a clear night this cools the jacket below the air around it, which is when
+ * outdoor ducts condense.
  */
-export function outdoorDuctSurroundC(T_outdoor_C: number): number {
+export function outdoorDuctSurroundC(T_outdoor_C: number, cloud_cover = 0): number {
   const T = T_outdoor_C + 273.15;
-  return radiantTemperature(skyViewFactor(90), skyTemperatureSwinbank(T), T) - 273.15;
+  return radiantTemperature(skyViewFactor(90), skyTemperatureCloudy(T, cloud_cover), T) - 273.15;
+}
+
+/**
+ * Relative humidity, %, at T_C of air that carries the vapour of air at T_from_C and RH_from_pct:
+ * a void or plant room takes the zone air's moisture (its dew point), not its RH at another
+ * temperature (a 28 °C void under a 24 °C / 50 % zone is 39 % RH, dew point 12.9 °C; at 50 % it
+ * would be 16.6 °C). Capped at 100 % (colder than the zone's dew point: saturated).
+ */
+export function rhCarried(T_from_C: number, RH_from_pct: number, T_C: number): number {
+  if (T_C === T_from_C) return RH_from_pct;
+  const rh = (RH_from_pct * saturationPressureHylandWexler(T_from_C)) / saturationPressureHylandWexler(T_C);
+  return rh > 100 ? 100 : rh;
 }
 
 /**
@@ -109,26 +124,33 @@ export function ductSurroundC(dc: Pick<DesignCase, "kind">, row: Pick<DuctRunRow
 }
 
 /**
- * The `duct_run` case of a row in a design case. The run crosses the space at the case's surround
- * (`ductSurroundC`; the outdoor air when there is none); its humidity is the outdoor RH outdoors
- * or in the outdoor air, the zone's inside RH otherwise, unless the row gives one; an outdoor run
- * sees the site wind at its elevation.
+ * The `duct_run` case of a row in a design case. A run inside the zone it serves crosses that
+ * zone's air (its set point and humidity in the case). Otherwise it crosses the space at the
+ * case's surround (`ductSurroundC`; the outdoor air when there is none). Humidity: the row's own
+ * RH when it gives one; else the outdoor air's (outdoors, or in the outdoor air); else the served
+ * zone's moisture carried to the space's temperature (`rhCarried`). An outdoor run sees the site
+ * wind at its elevation; in the outdoor air it radiates to sky and ground under the case's cloud
+ * cover and absorbs the case's irradiance on the horizontal.
  */
 export function ductRunCase(site: Site, dc: DesignCase, zone: Zone, row: DuctRunRow) {
-  const surround = ductSurroundC(dc, row);
+  const inZone = row.in_served_zone === true;
+  const T_zone = insideTemperature(zone, dc);
+  const surround = inZone ? T_zone : ductSurroundC(dc, row);
   const outdoorAir = surround === null;
-  // Out of doors in the outdoor air: radiation to sky and ground (a run in a space of its own,
-  // a surround given for this case, radiates to that space).
-  const skyward = row.location === "outdoor" && outdoorAir;
+  const outdoor = row.location === "outdoor" && !inZone;
+  // Out of doors in the outdoor air: radiation to sky and ground, and the sun (a run in a space of
+  // its own, a surround given for this case, radiates to that space).
+  const skyward = outdoor && outdoorAir;
   const T_ambient_C = surround === null ? dc.T_outdoor_C : surround;
-  const RH = row.RH_surround_pct ?? (row.location === "outdoor" || outdoorAir ? dc.RH_outdoor_pct : zone.RH_inside_pct);
+  const RH =
+    row.RH_surround_pct ??
+    (outdoor || outdoorAir ? dc.RH_outdoor_pct : rhCarried(T_zone, zone.RH_inside_pct, T_ambient_C));
   const z = row.elevation_m ?? DEFAULT_DUCT_ELEVATION_M;
-  const wind =
-    row.location === "outdoor"
-      ? site.wind_law === "log"
-        ? windSpeedLogLaw(dc.V_met_m_s, z, site.terrain, 10)
-        : windSpeedPowerLaw(dc.V_met_m_s, z, site.terrain, 10)
-      : 0;
+  const wind = outdoor
+    ? site.wind_law === "log"
+      ? windSpeedLogLaw(dc.V_met_m_s, z, site.terrain, 10)
+      : windSpeedPowerLaw(dc.V_met_m_s, z, site.terrain, 10)
+    : 0;
   const section = row.shape === "round" ? { diameter_m: row.diameter_m } : { width_m: row.width_m, height_m: row.height_m };
   return {
     id: row.id,
@@ -143,10 +165,16 @@ export function ductRunCase(site: Site, dc: DesignCase, zone: Zone, row: DuctRun
     insulation_thickness_m: row.insulation_thickness_m,
     insulation_k_W_mK: row.insulation_k_W_mK,
     jacket_emissivity: row.jacket_emissivity,
-    location: row.location,
+    location: inZone ? ("indoor" as const) : row.location,
     V_wind_m_s: wind,
     margin_K: row.margin_K,
     pressure_Pa: pressureAtAltitude(site.altitude_m),
-    ...(skyward ? { T_surround_C: outdoorDuctSurroundC(dc.T_outdoor_C) } : {}),
+    ...(skyward
+      ? {
+          T_surround_C: outdoorDuctSurroundC(dc.T_outdoor_C, dc.cloud_cover ?? 0),
+          absorptance: row.jacket_absorptance ?? DEFAULT_JACKET_ABSORPTANCE,
+          solar_W_m2: dc.solar_W_m2.horizontal ?? 0,
+        }
+      : {}),
   };
 }

@@ -5,8 +5,10 @@
  */
 import type { CalcResult } from "../contract";
 import { calculateCase } from "../calculate";
-import { zoneTotals, type ZoneTotals } from "../zone";
+import { zoneTotals, type ZoneRowResult, type ZoneTotals } from "../zone";
 import { ductRunCase, surfaceCase } from "./cases";
+import { insideSurfaceCheck, methodSpread, type InsideSurfaceCheck, type MethodSpread } from "./checks";
+import type { SurfaceInput, SurfaceResult } from "../surface";
 import type { Buildup, DesignCase, DuctRunRow, Site, SurfaceRow, Zone } from "./types";
 
 export interface Schedule {
@@ -20,6 +22,10 @@ export interface Schedule {
 export interface RowResult {
   row_id: string;
   result: CalcResult;
+  /** Surfaces computed: the three exterior methods' band of h_o and Q (v2). */
+  spread?: MethodSpread;
+  /** Surfaces computed: inside-surface temperature and ISO 13788's factor against the zone air (v2). */
+  inside?: InsideSurfaceCheck;
 }
 
 export interface ScheduleResults {
@@ -29,9 +35,13 @@ export interface ScheduleResults {
   zones: ({ zone_id: string; name: string; floor_area_m2: number } & ZoneTotals)[];
 }
 
-function missing(row_id: string, field: string, message: string): RowResult {
-  return { row_id, result: { id: row_id, ok: false, error: { code: "invalid_input", field, message } } };
+function missing(row_id: string, field: string, message: string, code: "invalid_input" | "not_computed" = "invalid_input"): RowResult {
+  return { row_id, result: { id: row_id, ok: false, error: { code, field, message } } };
 }
+
+/** The answer for a surface over ground: outside Filmsheet's scope, flagged, left out of totals. */
+export const OVER_GROUND_MESSAGE =
+  "over ground: heat loss to the ground needs ISO 13370 and is not computed here; the row is left out of the totals";
 
 export function scheduleResults(s: Schedule, dc: DesignCase): ScheduleResults {
   const zones = new Map(s.zones.map((z) => [z.id, z]));
@@ -41,7 +51,17 @@ export function scheduleResults(s: Schedule, dc: DesignCase): ScheduleResults {
     const buildup = buildups.get(row.buildup_id);
     if (zone === undefined) return missing(row.id, "zone_id", `zone ${row.zone_id} is not in this project`);
     if (buildup === undefined) return missing(row.id, "buildup_id", `build-up ${row.buildup_id} is not in this project`);
-    return { row_id: row.id, result: calculateCase(surfaceCase(s.site, dc, zone, buildup, row)) };
+    if (row.exposed_to === "ground") return missing(row.id, "exposed_to", OVER_GROUND_MESSAGE, "not_computed");
+    const c = surfaceCase(s.site, dc, zone, buildup, row);
+    const result = calculateCase(c);
+    if (!result.ok) return { row_id: row.id, result };
+    const r = result as unknown as SurfaceResult;
+    return {
+      row_id: row.id,
+      result,
+      spread: methodSpread(c as SurfaceInput, r),
+      inside: insideSurfaceCheck(r.q_W_m2, c.R_si_m2K_W, c.T_inside_C, zone.RH_inside_pct, c.T_outside_C),
+    };
   });
   const ductRuns = s.ductRuns.map((row): RowResult => {
     const zone = zones.get(row.zone_id);
@@ -49,14 +69,14 @@ export function scheduleResults(s: Schedule, dc: DesignCase): ScheduleResults {
     return { row_id: row.id, result: calculateCase(ductRunCase(s.site, dc, zone, row)) };
   });
   const totals = s.zones.map((z) => {
-    const rows: { source: "surface" | "duct_run"; Q_W: number }[] = [];
+    const rows: ZoneRowResult[] = [];
     s.surfaces.forEach((row, i) => {
       const r = surfaces[i].result;
       if (row.zone_id === z.id && r.ok) rows.push({ source: "surface", Q_W: r.Q_W as number });
     });
     s.ductRuns.forEach((row, i) => {
       const r = ductRuns[i].result;
-      if (row.zone_id === z.id && r.ok) rows.push({ source: "duct_run", Q_W: r.Q_W as number });
+      if (row.zone_id === z.id && r.ok) rows.push({ source: "duct_run", Q_W: r.Q_W as number, in_zone: row.in_served_zone === true });
     });
     return { zone_id: z.id, name: z.name, floor_area_m2: z.floor_area_m2, ...zoneTotals(rows, z.floor_area_m2) };
   });

@@ -30,6 +30,11 @@ export interface DesignCase {
   wind_from_deg: number;
   /** Irradiance, W/m², on vertical surfaces by orientation and on a horizontal one; absent = 0. */
   solar_W_m2: SolarTable;
+  /**
+   * Cloud cover, 0 (clear, the conservative choice for heating) … 1 (overcast); absent (as in
+   * revisions issued before v2) = 0.
+   */
+  cloud_cover?: number;
 }
 
 export interface Zone {
@@ -72,7 +77,15 @@ export interface SurfaceRow {
   method: ExteriorMethod | null;
   absorptance: number | null;
   emissivity: number | null;
+  /**
+   * What lies outside the surface: outside air (the default, and the only case Filmsheet
+   * computes) or the ground, whose heat loss needs ISO 13370 and is left out of the totals.
+   */
+  exposed_to?: SurfaceExposure;
 }
+
+export const SURFACE_EXPOSURES = ["outside_air", "ground"] as const;
+export type SurfaceExposure = (typeof SURFACE_EXPOSURES)[number];
 
 export interface DuctRunRow {
   id: string;
@@ -105,4 +118,14 @@ export interface DuctRunRow {
   insulation_k_W_mK: number;
   jacket_emissivity: number;
   margin_K: number;
+  /**
+   * The run lies inside the zone it serves: it crosses that zone's air (set point and humidity of
+   * the case), and its heat stays in the zone, so the zone's totals leave it out. Absent = false.
+   */
+  in_served_zone?: boolean;
+  /** Solar absorptance of the jacket, for runs out of doors in the sun; null/absent = 0.6. */
+  jacket_absorptance?: number | null;
 }
+
+/** Jacket absorptance assumed when a row gives none: weathered metal or painted (common practice). */
+export const DEFAULT_JACKET_ABSORPTANCE = 0.6;
