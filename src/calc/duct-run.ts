@@ -10,7 +10,7 @@ import { insulationResistanceRect, insulationResistanceRound, leavingAirTemperat
 import { airProperties, airPropertiesInto, newAirProperties, type AirProperties } from "./properties/air";
 import { dewPointHylandWexler } from "./psychrometrics/dew-point";
 import { hRadiation } from "./radiation/radiation";
-import { air, warnRange, type Warnings } from "./kinds/common";
+import { air, warnAir, warnRange, type Warnings } from "./kinds/common";
 import { warnNaturalBranch } from "./kinds/external";
 import { grashof, newNaturalBranch, nuPlateNatural, type NaturalBranch } from "./select";
 import { nuCylinderCrossflowChurchillBernstein } from "./convection/forced-external";
@@ -105,7 +105,7 @@ function hCrossflow(c: Outside, V: number, D: number, warnings: Warnings): numbe
 function outsideAt(d: DuctRunInput, o: OuterSection, Tso: number, V: number, warnings: Warnings, c: Outside): Outside {
   const Ta = d.T_ambient_C + T0;
   const Tf = (Tso + Ta) / 2;
-  if (warnings !== null) air(Tf, d.pressure_Pa, warnings, "T_film_C");
+  warnAir(Tf, warnings, "T_film_C");
   const props = airPropertiesInto(Tf, d.pressure_Pa, c.props);
   let h: number;
   if (d.shape === "round") {

@@ -7,7 +7,7 @@ import { SIGMA, T0 } from "./constants";
 import { airProperties, airPropertiesInto, newAirProperties, type AirProperties } from "./properties/air";
 import { hcIso6946, hcMcAdams } from "./convection/empirical";
 import { hRadiation, radiantTemperature, skyTemperatureCloudy, skyViewFactor } from "./radiation/radiation";
-import { air } from "./kinds/common";
+import { warnAir } from "./kinds/common";
 import { warnPlateCombined } from "./kinds/external";
 import { regimeFromRichardson } from "./convection/combined";
 import type { CalcWarning } from "./contract";
@@ -201,11 +201,11 @@ export function surfaceCore(
   // then close the balance exactly (they are taken within 0.0001 K of T_s).
   const Ts = (Tin / Rin + solar + hc * To + hr * Tr) / (1 / Rin + hc + hr);
   if (hcFixed >= 0) {
-    air((Ts + To) / 2, p, warnings, "T_film_C");
+    warnAir((Ts + To) / 2, warnings, "T_film_C");
     if (s.method === "mcadams") checkRange(warnings, "mcadams-wind", METHOD_BY_ID["mcadams-wind"].title, "V_surface_m_s", Vs, MCADAMS_RANGE);
   } else {
     // Range warnings of the state reported, worded once.
-    air((x + To) / 2, p, warnings, "T_film_C");
+    warnAir((x + To) / 2, warnings, "T_film_C");
     if (state !== null) warnPlateCombined(state, ReCrit, warnings);
   }
   const regime = state === null ? "empirical" : regimeFromRichardson(state.Ri);

@@ -15,12 +15,16 @@ export function warnRange(warnings: Warnings, methodId: string, quantity: string
   if (r !== undefined) checkRange(warnings, methodId, m.title, quantity, value, r);
 }
 
+/** Warns when T_K lies outside the property model's range (no properties computed). */
+export function warnAir(T_K: number, warnings: Warnings, label = "T_C"): void {
+  if (warnings === null) return;
+  const m = METHOD_BY_ID["air-lemmon-jacobsen"];
+  checkRange(warnings, m.id, m.title, label, T_K - T0, m.ranges.T_C);
+}
+
 /** Air properties at T_K, warning when T_K lies outside the property model's range. */
 export function air(T_K: number, p_Pa: number, warnings: Warnings, label = "T_C"): AirProperties {
-  if (warnings !== null) {
-    const m = METHOD_BY_ID["air-lemmon-jacobsen"];
-    checkRange(warnings, m.id, m.title, label, T_K - T0, m.ranges.T_C);
-  }
+  warnAir(T_K, warnings, label);
   return airProperties(T_K, p_Pa);
 }
 
