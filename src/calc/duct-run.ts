@@ -202,6 +202,10 @@ export interface DuctRunState {
   converged: boolean;
 }
 
+// Scratch inside-air properties, refilled by every evaluateDuctRun (synchronous, not reentrant):
+// the insulation search evaluates a run many times and allocation, not arithmetic, is its cost.
+const PIN = newAirProperties();
+
 /**
  * Evaluates the run at insulation thickness t (m) and wind speed V (m/s). With `bothEnds` false
  * only the end with the colder air gets its surface temperature (the other is NaN): that end has
@@ -227,7 +231,7 @@ export function evaluateDuctRun(
   const Ta = d.T_ambient_C + T0;
   const Tsur = d.T_surround_C + T0;
   const p = d.pressure_Pa;
-  const pin = airPropertiesInto(TE, p, newAirProperties());
+  const pin = airPropertiesInto(TE, p, PIN);
   const mdot = pin.rho_kg_m3 * d.flow_m3_s;
   const velocity = d.flow_m3_s / g.area_m2;
   // Inside film (bulk properties at the mean air temperature) as a resistance per metre.

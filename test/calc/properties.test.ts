@@ -127,16 +127,19 @@ describe("surface: the outside-face balance and its identities", () => {
     );
   });
 
-  test("windward within 90° of the outward normal (horizontal surfaces windward); leeward wind × leeward_factor", () => {
+  test("exposure (contract v2): w = max(w_az, w_tilt), windward when w ≥ 0.5, V_surface = V_local (f_lee + (1 − f_lee) w)", () => {
+    const clamp = (x: number) => Math.min(1, Math.max(0, x));
     fc.assert(
       fc.property(surfaces, (c) => {
         const r = run(c);
         const d = Math.abs((((c.wind_from_deg as number) - (c.azimuth_deg as number)) % 360 + 540) % 360 - 180);
-        const horizontal = c.tilt_deg === 0 || c.tilt_deg === 180;
-        fc.pre(Math.abs(d - 90) > 1e-6); // the exact boundary is left to the public cases
-        expect(r.windward).toBe(horizontal || d < 90);
-        const factor = r.windward ? 1 : ((c.leeward_factor ?? 0.25) as number);
-        expectClose(num(r, "V_surface_m_s"), factor * num(r, "V_local_m_s"), 1e-9, 1e-12, "V_surface");
+        const tilt = c.tilt_deg as number;
+        const w = Math.max(clamp((100 - d) / 20), clamp((20 - Math.min(tilt, 180 - tilt)) / 10));
+        fc.pre(Math.abs(w - 0.5) > 1e-6); // the exact boundary is left to the public cases
+        expectClose(num(r, "exposure"), w, 1e-9, 1e-12, "exposure");
+        expect(r.windward).toBe(w >= 0.5);
+        const f = (c.leeward_factor ?? 0.25) as number;
+        expectClose(num(r, "V_surface_m_s"), (f + (1 - f) * w) * num(r, "V_local_m_s"), 1e-9, 1e-12, "V_surface");
       }),
       RUNS,
     );

@@ -63,13 +63,14 @@ function ductSection(r: CaseReader): DuctSection {
 export function readDuctRun(r: CaseReader): DuctRunInput {
   const v = r.raw as DuctRunRaw;
   const shape = r.oneOfAt("shape", v.shape, SHAPES);
-  const section: DuctSection =
-    shape === "round"
-    ? { shape, diameter_m: r.numAt("diameter_m", v.diameter_m, POS) }
-    : { shape, width_m: r.numAt("width_m", v.width_m, POS), height_m: r.numAt("height_m", v.height_m, POS) };
+  const round = shape === "round";
   const T_ambient_C = r.tempCAt("T_ambient_C", v.T_ambient_C);
+  // One object shape for both sections (no spread): the engine's hot loops read it many times.
   return {
-    ...section,
+    shape,
+    diameter_m: round ? r.numAt("diameter_m", v.diameter_m, POS) : undefined,
+    width_m: round ? undefined : r.numAt("width_m", v.width_m, POS),
+    height_m: round ? undefined : r.numAt("height_m", v.height_m, POS),
     length_m: r.numAt("length_m", v.length_m, NONNEG),
     flow_m3_s: r.numAt("flow_m3_s", v.flow_m3_s, NO_FLOW_RUN),
     T_entering_C: r.tempCAt("T_entering_C", v.T_entering_C),
