@@ -70,7 +70,7 @@ export function* ductTables(w: Writer, input: ReportInput, results: ScheduleResu
         return [
           row.label, zones.get(row.zone_id) ?? "", withUnit(row.length_m, "m", c, 3), withUnit(row.flow_m3_s, "m³/s", c, 3),
           withUnit(val(res, "T_leaving_C"), "°C", c), withUnit(val(res, "Q_W"), "W", c), withUnit(tmin, "°C", c, 3), withUnit(val(res, "T_dp_C"), "°C", c, 3),
-          res.ok ? (res.condensation ? "YES" : "no") : "error", res.ok ? (tmi === null ? "> 0.2 m" : withUnit(tmi, "m", c, 3)) : "-",
+          res.ok ? (res.condensation ? "YES" : "no") : "error", res.ok ? (tmi === null ? "> 0.5 m" : withUnit(tmi, "m", c, 3)) : "-",
           input.checks?.[row.id] ?? "unchecked",
         ].map((x) => pdfText(String(x)));
       }),
