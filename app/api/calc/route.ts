@@ -1,4 +1,4 @@
-// POST /api/calc: calculation contract v1 (shared/design/calc-contract.md); same answer as `npm run calc`.
+// POST /api/calc: calculation contract (shared/design/calc-contract.md); the same bytes as `npm run calc`.
 // Any member or API token may calculate; anonymous callers get 401.
 import { CALC_LIMITS, ZCalcBody } from "@/schemas/calc";
 import { route } from "@/server/http/route";

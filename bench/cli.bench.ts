@@ -1,0 +1,99 @@
+// Benchmark of the command-line calculator end to end (npm run bench:cli): 30,000 surface cases
+// (10,000 rows × 3 design cases) piped through `node scripts/run-calc.mjs` — what `npm run calc`
+// runs, without npm's own start-up — and the answer read back from its stdout. Start-up is timed
+// apart with the empty body {"cases":[]} and left out: evaluations per second are 30,000 over (the
+// run's wall time − the empty run's). The CLI's own report (FILMSHEET_CALC_TIMING=1) gives the
+// phases: read, parse, engine, serialize, write, in wall and CPU time (CPU time includes V8's GC
+// threads; other work on a shared machine does not inflate it much). Prints figures, asserts nothing.
+import { spawn } from "node:child_process";
+import { join } from "node:path";
+import { performance } from "node:perf_hooks";
+import { ROOT, ensureBundle } from "../scripts/lib/calc-bundle.mjs";
+import { surfaceCases } from "./lib/cases";
+
+const ROWS = 10_000;
+const REPEATS = 5;
+const GOAL = 100_000;
+const LAUNCHER = join(ROOT, "scripts", "run-calc.mjs");
+
+interface Timing {
+  cases: number;
+  startup_ms: number;
+  after_startup: { wall_ms: number; cpu_ms: number };
+  phases: Record<string, { wall_ms: number; cpu_ms: number }>;
+}
+interface Run {
+  wallMs: number;
+  outBytes: number;
+  out: Buffer | null;
+  timing: Timing;
+}
+
+/** One run of the CLI on `input`: wall time from spawn to exit, its answer and its timing line. */
+function runCli(input: Buffer, keepOutput: boolean): Promise<Run> {
+  return new Promise((resolve, reject) => {
+    const t0 = performance.now();
+    const child = spawn(process.execPath, [LAUNCHER], { env: { ...process.env, FILMSHEET_CALC_TIMING: "1" } });
+    const out: Buffer[] = [];
+    let outBytes = 0;
+    let err = "";
+    child.stdout.on("data", (b: Buffer) => {
+      outBytes += b.length;
+      if (keepOutput) out.push(b);
+    });
+    child.stderr.on("data", (b: Buffer) => (err += b.toString()));
+    child.on("error", reject);
+    child.on("close", (code) => {
+      const wallMs = performance.now() - t0;
+      if (code !== 0) return reject(new Error(`calc exited ${code}: ${err}`));
+      const line = err.trim().split("\n").pop() ?? "";
+      resolve({ wallMs, outBytes, out: keepOutput ? Buffer.concat(out) : null, timing: JSON.parse(line) as Timing });
+    });
+    child.stdin.end(input);
+  });
+}
+
+const fmt = (n: number) => Math.round(n).toLocaleString("en-US");
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)]!;
+
+await ensureBundle();
+const cases = surfaceCases(ROWS, true);
+const input = Buffer.from(JSON.stringify({ cases }));
+const empty = Buffer.from('{"cases":[]}');
+console.log(`calc CLI benchmark, node ${process.version}: ${fmt(cases.length)} surface cases, ${(input.length / 1e6).toFixed(1)} MB in`);
+
+// Warm the file cache and check the answer once.
+const first = await runCli(input, true);
+const answer = JSON.parse(first.out!.toString("utf8")) as { results: { ok: boolean }[] };
+const failed = answer.results.filter((r) => !r.ok).length;
+console.log(`answer: ${fmt(answer.results.length)} results (${failed} ok: false), ${(first.outBytes / 1e6).toFixed(1)} MB out`);
+
+const startups: Run[] = [];
+const runs: Run[] = [];
+for (let i = 0; i < REPEATS; i++) {
+  startups.push(await runCli(empty, false));
+  runs.push(await runCli(input, false));
+}
+const startupWall = median(startups.map((r) => r.wallMs));
+const best = runs.reduce((a, b) => (b.wallMs < a.wallMs ? b : a));
+const net = best.wallMs - startupWall;
+const perSecond = cases.length / (net / 1000);
+const bestCpu = Math.min(...runs.map((r) => r.timing.after_startup.cpu_ms));
+const perCpuSecond = cases.length / (bestCpu / 1000);
+const selfWall = Math.min(...runs.map((r) => r.timing.after_startup.wall_ms));
+const verdict = perSecond >= GOAL ? "meets" : `misses by ${((1 - perSecond / GOAL) * 100).toFixed(0)} %`;
+
+console.log(
+  `start-up (empty body, median of ${REPEATS}): ${startupWall.toFixed(0)} ms wall, of which ${median(startups.map((r) => r.timing.startup_ms)).toFixed(0)} ms before the CLI's first line`,
+);
+console.log(
+  `end to end, start-up excluded (best of ${REPEATS}): ${net.toFixed(0)} ms → ${fmt(perSecond)} evals/s; goal ${fmt(GOAL)} — ${verdict}`,
+);
+console.log(
+  `the CLI's own clock after start-up: ${selfWall.toFixed(0)} ms wall → ${fmt(cases.length / (selfWall / 1000))} evals/s; ` +
+    `${bestCpu.toFixed(0)} ms CPU → ${fmt(perCpuSecond)} evals per CPU-second`,
+);
+console.log("phases of the fastest run (wall / CPU ms):");
+for (const [phase, t] of Object.entries(best.timing.phases)) {
+  console.log(`  ${phase.padEnd(10)} ${t.wall_ms.toFixed(0).padStart(6)} / ${t.cpu_ms.toFixed(0).padStart(6)}`);
+}
