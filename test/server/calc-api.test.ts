@@ -30,8 +30,9 @@ const ref = JSON.parse(readFileSync(join(ROOT, "../shared/reference/public-cases
 };
 const body = { cases: ref.cases.map((c) => ({ id: c.id, ...c.request })) };
 
+// What `npm run calc` runs: the launcher, which builds the bundle (.build/calc) when stale.
 function cli(input: string) {
-  const r = spawnSync(process.execPath, ["--import", "tsx", join(ROOT, "scripts/calc.ts")], { cwd: ROOT, input, encoding: "utf8" });
+  const r = spawnSync(process.execPath, [join(ROOT, "scripts/run-calc.mjs")], { cwd: ROOT, input, encoding: "utf8", maxBuffer: 64 * 1024 * 1024 });
   return { status: r.status, stdout: r.stdout, stderr: r.stderr };
 }
 
