@@ -3,6 +3,7 @@
 // limits. `npm run calc` runs this file bundled (.build/calc/calc.mjs, see scripts/run-calc.mjs):
 // no TypeScript loader at start-up. The answer is written batch by batch while the engine computes.
 // FILMSHEET_CALC_TIMING=1 prints the wall and CPU time of each phase as one JSON line on stderr.
+import { isAscii } from "node:buffer";
 import { readFileSync } from "node:fs";
 import { performance } from "node:perf_hooks";
 import { writeCalcAnswer } from "../src/calc/serialize";
@@ -38,16 +39,19 @@ function fail(payload: unknown): never {
   process.exit(2);
 }
 
+/** UTF-8 text of the bytes; pure ASCII (the usual body) decodes faster as Latin-1, to the same string. */
+const decode = (bytes: Buffer): string => (isAscii(bytes) ? bytes.toString("latin1") : bytes.toString("utf8"));
+
 /** All of stdin. One synchronous read loop is quicker than the stream's event-loop turns. */
 async function readStdin(): Promise<string> {
   try {
-    return readFileSync(0, "utf8");
+    return decode(readFileSync(0));
   } catch (e) {
     // A non-blocking stdin (some parents hand one over) answers EAGAIN: read it as a stream.
     if ((e as NodeJS.ErrnoException).code !== "EAGAIN") throw e;
     const chunks: Buffer[] = [];
     for await (const chunk of process.stdin) chunks.push(chunk as Buffer);
-    return Buffer.concat(chunks).toString("utf8");
+    return decode(Buffer.concat(chunks));
   }
 }
 

@@ -45,6 +45,16 @@ describe("npm run calc (the bundle)", () => {
     expect(out.stdout).toBe(JSON.stringify(calculate({ cases })) + "\n");
   });
 
+  test("text outside ASCII (ids, a bad kind) comes back as the same UTF-8", () => {
+    const cases = [
+      { id: "Façade N° 3 — 北", kind: "dew_point", T_C: 20, RH_pct: 50 },
+      { id: "ü", kind: "größe" },
+    ];
+    const out = cli(JSON.stringify({ cases }));
+    expect(out.status, out.stderr).toBe(0);
+    expect(out.stdout).toBe(JSON.stringify(calculate({ cases })) + "\n");
+  });
+
   test("the launcher npm run calc uses gives the same answer", () => {
     const input = JSON.stringify({ cases: publicCases.slice(0, 5) });
     const out = run(join(ROOT, "scripts/run-calc.mjs"), input);
