@@ -7,7 +7,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { calculate } from "../../src/calc/index";
-import { calcAnswerText } from "../../src/calc/serialize";
+import { ANSWER_BATCH, calcAnswerText } from "../../src/calc/serialize";
 import { ZCalcBody, calcBodyError } from "../../src/schemas/calc";
 import { CALC_BUNDLE, bundleIsStale, ensureBundle } from "../../scripts/lib/calc-bundle.mjs";
 import { ROOT } from "../support/paths";
@@ -27,7 +27,8 @@ const ref = JSON.parse(readFileSync(join(ROOT, "../shared/reference/public-cases
 };
 const publicCases = ref.cases.map((c) => ({ id: c.id, ...c.request }));
 
-describe("npm run calc (the bundle)", () => {
+// Each test starts Node at least once; a loaded 2-core machine needs more than vitest's 5 s.
+describe("npm run calc (the bundle)", { timeout: 60_000 }, () => {
   test("answers the public cases exactly as calculate() and the shared writer, plus a newline", () => {
     const body = { cases: publicCases };
     const out = cli(JSON.stringify(body));
@@ -37,7 +38,7 @@ describe("npm run calc (the bundle)", () => {
   });
 
   test("answers a body of several batches in order, bad cases in place", () => {
-    const cases = Array.from({ length: 2500 }, (_, i) => ({ ...publicCases[i % publicCases.length], id: `c${i}` }));
+    const cases = Array.from({ length: 2 * ANSWER_BATCH + 5 }, (_, i) => ({ ...publicCases[i % publicCases.length], id: `c${i}` }));
     const out = cli(JSON.stringify({ cases }));
     expect(out.status, out.stderr).toBe(0);
     const answer = JSON.parse(out.stdout) as { results: { id: string }[] };
