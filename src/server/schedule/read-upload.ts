@@ -8,6 +8,7 @@ import { unescapeCsvText } from "@/schedule/csv-formulae";
 import { MAX_TEXT_CELL_CHARS } from "@/schedule/parse-cells";
 import { SHEET_TITLES, headerKey, matchHeaders } from "@/schedule/sheet-columns";
 import { UPLOAD_LIMITS, UploadError } from "./upload-limits";
+import { checkInflatedSizes } from "./xlsx-archive";
 
 export type UploadFormat = "csv" | "xlsx";
 export type Table = unknown[][];
@@ -153,6 +154,7 @@ function worksheetTable(ws: ExcelJS.Worksheet, sheet: TSheet): Table {
  * checked before (xlsx-archive.ts); this runs in the worker, whose memory and time are capped.
  */
 export async function readXlsx(bytes: Uint8Array, sheet?: TSheet): Promise<Tables> {
+  checkInflatedSizes(bytes);
   const wb = new ExcelJS.Workbook();
   try {
     await wb.xlsx.load(bytes as unknown as ArrayBuffer);

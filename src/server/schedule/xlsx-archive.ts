@@ -1,4 +1,5 @@
-import "server-only";
+// Used by the main thread (the declared sizes and dimensions, before a worker starts) and by the
+// upload worker (the real sizes), so it does not import "server-only" (it throws in a worker).
 import { inflateRawSync, constants as zlib } from "node:zlib";
 import { UPLOAD_LIMITS, UploadError } from "./upload-limits";
 
@@ -66,10 +67,7 @@ export function zipEntries(bytes: Uint8Array): ZipEntry[] {
 
 /** The first bytes of an entry's content, inflated from a bounded slice of its data. */
 function entryHead(bytes: Uint8Array, entry: ZipEntry, headBytes: number): string {
-  const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
-  const at = entry.localHeaderOffset;
-  if (at + 30 > bytes.byteLength || view.getUint32(at, true) !== LOCAL_SIGNATURE) throw unreadable(`The part ${entry.name} is damaged`);
-  const start = at + 30 + view.getUint16(at + 26, true) + view.getUint16(at + 28, true);
+  const start = dataStart(bytes, entry);
   const data = bytes.subarray(start, Math.min(start + entry.compressedSize, start + headBytes, bytes.byteLength));
   if (entry.method === 0) return new TextDecoder().decode(data);
   if (entry.method !== 8) throw unreadable(`The part ${entry.name} uses a compression method XLSX files do not use`);
@@ -98,6 +96,34 @@ export function sheetDimension(head: string): { ref: string; columns: number; ro
   if (!ref) return null;
   const [, c1, r1, c2 = c1!, r2 = r1!] = ref;
   return { ref: ref[0].slice(ref[0].indexOf('"') + 1, -1), columns: Math.max(columnNumber(c1!), columnNumber(c2!)), rows: Math.max(Number(r1), Number(r2)) };
+}
+
+/** Where an entry's compressed data starts. */
+function dataStart(bytes: Uint8Array, entry: ZipEntry): number {
+  const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);
+  const at = entry.localHeaderOffset;
+  if (at + 30 > bytes.byteLength || view.getUint32(at, true) !== LOCAL_SIGNATURE) throw unreadable(`The part ${entry.name} is damaged`);
+  return at + 30 + view.getUint16(at + 26, true) + view.getUint16(at + 28, true);
+}
+
+/**
+ * Inflates every part with its declared size as a hard ceiling, so a part that unpacks to more
+ * than its central directory says (a lying bomb) is refused having produced at most that much.
+ * Run in the worker, before the XLSX reader (which would inflate everything, then compare).
+ */
+export function checkInflatedSizes(bytes: Uint8Array): void {
+  for (const entry of zipEntries(bytes)) {
+    if (entry.method !== 8) continue;
+    const start = dataStart(bytes, entry);
+    try {
+      inflateRawSync(bytes.subarray(start, start + entry.compressedSize), { maxOutputLength: Math.max(1, entry.uncompressedSize) });
+    } catch (error) {
+      if ((error as { code?: string }).code !== "ERR_BUFFER_TOO_LARGE") throw unreadable(`The part ${entry.name} cannot be unpacked`);
+      throw new UploadError("payload_too_large", `A part of the workbook (${entry.name}) unpacks to more than the ${entry.uncompressedSize} bytes it declares; the file is refused`, [
+        { row: 0, column: "", field: "file", message: "Uncompressed size larger than declared" },
+      ]);
+    }
+  }
 }
 
 /** Refuses, before any inflating, an archive or a worksheet larger than an import reads. */
