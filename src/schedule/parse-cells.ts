@@ -19,7 +19,23 @@ export interface Lookups {
 export type CellResult = { ok: true; value: unknown } | { ok: false; message: string };
 
 // A plain decimal number, optionally signed, with an optional exponent; no thousands separators.
-const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
+// Written so that no two parts can match the same digits (the old `\d+\.?\d*` could split a run of
+// digits in n ways, and a long digit run ending in a letter took quadratic time): linear time.
+const NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?$/i;
+
+/**
+ * The longest cell read, in characters, before any parsing. A number has no business being longer
+ * than 64 (17 significant digits, a sign, a point and an exponent fit many times over); text
+ * (labels, names, choices) is stored at 120 characters at most, so 2,000 leaves room for stray
+ * spaces while keeping a hostile file from handing every parser megabytes per cell.
+ */
+export const MAX_NUMBER_CELL_CHARS = 64;
+export const MAX_TEXT_CELL_CHARS = 2000;
+
+/** Whether `text` is a plain decimal number the importer accepts (linear time on any input). */
+export function isPlainNumber(text: string): boolean {
+  return NUMBER.test(text);
+}
 
 const isBlank = (raw: unknown) => raw === null || raw === undefined || (typeof raw === "string" && raw.trim() === "");
 
@@ -36,12 +52,17 @@ export function parseCell(col: SheetColumn, raw: unknown, units: ColumnUnits, lo
     if (col.kind === "text") return { ok: true, value: "" };
     return { ok: true, value: null };
   }
+  const limit = col.kind === "number" ? MAX_NUMBER_CELL_CHARS : MAX_TEXT_CELL_CHARS;
+  // Checked on the raw length, before trimming or matching, so a huge cell costs nothing more.
+  if (typeof raw === "string" && raw.length > limit) {
+    return { ok: false, message: `${header}: the cell is longer than ${limit} characters, the most a ${col.kind === "number" ? "number" : "cell of this column"} may have` };
+  }
   const text = typeof raw === "string" ? raw.trim() : String(raw);
   switch (col.kind) {
     case "text":
       return { ok: true, value: text };
     case "number": {
-      const n = typeof raw === "number" ? raw : NUMBER.test(text) ? Number(text) : Number.NaN;
+      const n = typeof raw === "number" ? raw : isPlainNumber(text) ? Number(text) : Number.NaN;
       if (!Number.isFinite(n)) return { ok: false, message: `${header}: "${text}" is not a number` };
       return { ok: true, value: units === "stored" ? n : fromDisplay(col.spec!.quantity, n, units) };
     }

@@ -5,6 +5,7 @@ import type { Actor } from "@/server/auth/actor";
 import { requireActor, type AuthMode } from "@/server/auth/require-actor";
 import { assertSameOrigin } from "@/server/auth/same-origin";
 import { AppError } from "./app-error";
+import { readCappedBody } from "./read-bytes";
 
 type Params = Record<string, string | string[] | undefined>;
 
@@ -50,29 +51,10 @@ function invalid(error: z.ZodError, where: string, status: 400 | 422): Response 
   return errorResponse(new AppError(status === 400 ? "bad_request" : "invalid_input", `Invalid ${where}`, details), status);
 }
 
-// Bodies over the limit are still read (and discarded) up to this many bytes, so the client can
-// finish sending and receives the 413 instead of a broken pipe. Beyond it the connection is cut.
-const DRAIN_CAP_BYTES = 64 * 1024 * 1024;
-
 async function readJson(req: Request, maxBytes: number): Promise<unknown> {
-  const tooLarge = () => new AppError("payload_too_large", `Body larger than ${maxBytes} bytes`);
-  if (Number(req.headers.get("content-length") ?? 0) > Math.max(maxBytes, DRAIN_CAP_BYTES)) throw tooLarge();
-  const chunks: Uint8Array[] = [];
-  let size = 0;
-  const reader = req.body?.getReader();
-  while (reader) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    size += value.byteLength;
-    if (size > DRAIN_CAP_BYTES) {
-      await reader.cancel();
-      break;
-    }
-    if (size <= maxBytes) chunks.push(value);
-  }
-  if (size > maxBytes) throw tooLarge();
+  const bytes = await readCappedBody(req, maxBytes);
   try {
-    return JSON.parse(Buffer.concat(chunks).toString("utf8"));
+    return JSON.parse(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength).toString("utf8"));
   } catch {
     throw new AppError("bad_request", "Body is not valid JSON");
   }

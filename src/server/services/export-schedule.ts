@@ -5,6 +5,7 @@ import { ENGINEERING_CAUTION } from "@/components/engineering-caution";
 import type { ScheduleResults } from "@/calc/index";
 import { labelOf } from "@/schemas/schedule-fields";
 import type { TSchedule, TSheet } from "@/schemas/schedule";
+import { CSV_ESCAPE_FORMULAE } from "@/schedule/csv-formulae";
 import { resultsFor } from "@/schedule/engine-schedule";
 import { RESULT_COLUMNS, resultHeader, resultValue } from "@/schedule/result-columns";
 import { SHEET_COLUMNS, SHEET_TITLES, columnHeader, type SheetColumn } from "@/schedule/sheet-columns";
@@ -97,7 +98,8 @@ export async function exportSchedule(actor: Actor, projectId: string, opts: Expo
   const base = `${s.project.reference}-${opts.template ? "template" : "schedule"}`.replace(/[^A-Za-z0-9._-]+/g, "-");
   if (opts.format === "csv") {
     if (!opts.sheet) throw new AppError("invalid_input", "Say which sheet to export as CSV", [{ field: "query.sheet", message: "sheet must be surfaces or duct_runs for a CSV" }]);
-    const csv = Papa.unparse(sheetTable(s, opts.sheet, opts.template, results, dc?.name ?? ""));
+    // Text that a spreadsheet would run as a formula gets a leading quote (see csv-formulae.ts).
+    const csv = Papa.unparse(sheetTable(s, opts.sheet, opts.template, results, dc?.name ?? ""), { escapeFormulae: CSV_ESCAPE_FORMULAE });
     // The byte-order mark lets spreadsheet programs read m², ° and · as UTF-8.
     return { filename: `${base}-${opts.sheet}.csv`, contentType: "text/csv; charset=utf-8", body: new TextEncoder().encode(`\uFEFF${csv}\r\n`) };
   }

@@ -8,7 +8,8 @@ import { AppError } from "@/server/http/app-error";
 import { loadSchedule } from "@/server/repositories/schedule";
 import type { ItemChange, RowProblem } from "@/server/schedule/check-changes";
 import { ENTITIES, readColumns } from "@/server/schedule/entities";
-import { detectFormat, readCsv, readXlsx, type Table, type UploadFormat } from "@/server/schedule/read-upload";
+import { detectFormat, type Table, type UploadFormat } from "@/server/schedule/read-upload";
+import { readUploadInWorker } from "@/server/schedule/read-upload-in-worker";
 import { writeItems } from "@/server/schedule/write-items";
 import { noteScheduleChanges } from "./note-schedule-changes";
 
@@ -37,12 +38,10 @@ const REPORT_LIMIT = 1000;
  */
 export async function importSchedule(actor: Actor, projectId: string, opts: ImportOptions): Promise<ImportSummary> {
   const format = detectFormat(opts.bytes, opts.contentType, opts.format);
-  let tables: Partial<Record<TSheet, Table>>;
-  if (format === "csv") {
-    if (!opts.sheet) throw new AppError("invalid_input", "Say which sheet the CSV holds", [{ field: "query.sheet", message: "sheet must be surfaces or duct_runs for a CSV" }]);
-    tables = { [opts.sheet]: readCsv(opts.bytes) };
-  } else {
-    tables = await readXlsx(opts.bytes, opts.sheet);
+  if (format === "csv" && !opts.sheet) throw new AppError("invalid_input", "Say which sheet the CSV holds", [{ field: "query.sheet", message: "sheet must be surfaces or duct_runs for a CSV" }]);
+  // Read in a worker thread with capped memory and time (a hostile file cannot stall the server).
+  const tables: Partial<Record<TSheet, Table>> = await readUploadInWorker({ bytes: opts.bytes, format, sheet: opts.sheet });
+  if (format === "xlsx") {
     if (Object.keys(tables).length === 0) throw new AppError("invalid_input", 'The workbook has no worksheet named "Surfaces" or "Duct runs"', [{ field: "file", message: "No Surfaces or Duct runs worksheet" }]);
   }
 
