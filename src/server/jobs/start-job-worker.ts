@@ -2,10 +2,10 @@ import "server-only";
 import { Logger, run, type Runner } from "graphile-worker";
 import { db } from "@/server/db/knex";
 import { env } from "@/server/env";
-import { ZEmailMessage } from "@/server/email/message";
 import { sendEmail } from "@/server/email/send-email";
 import { BUILD_REPORT_TASK } from "@/server/reports/report-builds";
 import { runReportBuild } from "@/server/reports/run-report-build";
+import { openEmailJob } from "./enqueue-email";
 import { ensureJobSchema } from "./job-schema";
 
 type Holder = { __filmsheetWorker?: Promise<Runner>; __filmsheetStopWorker?: () => Promise<void> };
@@ -32,7 +32,7 @@ export function startJobWorker(): Promise<Runner> {
       pollInterval: 1000,
       logger,
       taskList: {
-        send_email: async (payload) => sendEmail(ZEmailMessage.parse(payload)),
+        send_email: async (payload) => sendEmail(openEmailJob(payload)),
         [BUILD_REPORT_TASK]: async (payload) => runReportBuild(String((payload as { buildId?: unknown }).buildId)),
         // Attempts older than a day no longer count toward any limit.
         prune_sign_in_attempts: async () => {
