@@ -7,6 +7,7 @@ import request from "supertest";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { FREE_PLAN } from "@/schemas/billing";
 import { REPORT_LIMITS } from "@/schemas/reports";
+import { runReportBuild } from "@/server/reports/run-report-build";
 import { startAppWithSessions, type BuiltApp } from "../support/app-with-sessions";
 import { newFirmAdmin } from "../support/billing";
 import { closeTestDb, testDb } from "../support/db";
@@ -81,6 +82,14 @@ describe("the size of a report", () => {
     expect(res.body.error.message).toContain(`${REPORT_LIMITS.rowCases / 2 + 3} rows × 2 design cases`);
     expect(res.body.error.message).toContain(`at most ${REPORT_LIMITS.rowCases}`);
     expect(await testDb()("report_builds").where({ project_id: big.projectId })).toEqual([]);
+  });
+
+  test("a draft whose schedule grew past the limit after it was asked for fails at build time, saying why", async () => {
+    const [b] = await testDb()("report_builds").insert({ firm_id: big.firmId, project_id: big.projectId, kind: "draft", watermark: true, requested_by_name: "Test" }).returning("id");
+    await runReportBuild(b.id);
+    const row = await testDb()("report_builds").where({ id: b.id }).first("status", "error", "pdf");
+    expect(row).toMatchObject({ status: "failed", pdf: null });
+    expect(row.error).toContain(`at most ${REPORT_LIMITS.rowCases} are built`);
   });
 
   test(`the in-request build takes up to ${REPORT_LIMITS.inRequestRowCases} row-cases; above, 413 points at the job route`, async () => {

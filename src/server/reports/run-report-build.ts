@@ -4,6 +4,7 @@ import { db } from "@/server/db/knex";
 import { AppError } from "@/server/http/app-error";
 import { internalMessage, logInternalError } from "@/server/http/internal-error";
 import { draftReportSource } from "./report-inputs";
+import { assertReportSize, draftReportSize } from "./report-size";
 import { buildRevisionReport, REVISION_REPORT_COLUMNS } from "./revision-reports";
 
 // Progress is written at most this often: enough for a smooth bar, few enough writes.
@@ -36,6 +37,8 @@ export async function runReportBuild(buildId: string): Promise<void> {
       const r = await q("revisions").where({ id: build.revision_id }).first(REVISION_REPORT_COLUMNS);
       done = await buildRevisionReport(q, firm, r, build.watermark, progress);
     } else {
+      // The schedule may have grown since the draft was asked for: the size limit holds at build time too.
+      assertReportSize(await draftReportSize(q, build.project_id));
       const source = await draftReportSource(q, firm, build.project_id, build.requested_by_name);
       done = { ...(await buildReportAsync(source.input, progress)), filename: source.filename };
     }
