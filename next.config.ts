@@ -1,6 +1,7 @@
 import type { NextConfig } from "next";
 
-// The Content-Security-Policy, with a fresh nonce per request, comes from proxy.ts.
+// The Content-Security-Policy of pages, with a fresh nonce per request, comes from proxy.ts;
+// the API's fixed one is below.
 const securityHeaders = [
   { key: "X-Content-Type-Options", value: "nosniff" },
   { key: "X-Frame-Options", value: "DENY" },
@@ -23,7 +24,11 @@ const nextConfig: NextConfig = {
   // `npm test` type-checks the whole project as a suite of its own (tsc --noEmit).
   typescript: { ignoreBuildErrors: true },
   async headers() {
-    return [{ source: "/:path*", headers: securityHeaders }];
+    return [
+      { source: "/:path*", headers: securityHeaders },
+      // The API serves data, never a page: nothing in its answers may run or load anything.
+      { source: "/api/:path*", headers: [{ key: "Content-Security-Policy", value: "default-src 'none'; frame-ancestors 'none'; base-uri 'none'; form-action 'self'" }] },
+    ];
   },
 };
 

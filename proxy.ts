@@ -46,6 +46,8 @@ export function proxy(request: NextRequest) {
 }
 
 export const config = {
-  // Static files need no policy of their own (a policy governs documents) and no proxy run.
-  matcher: [{ source: "/((?!_next/static|_next/image|favicon.ico|icon.svg).*)" }],
+  // Pages only. Static files need no policy (a policy governs documents), and the API answers
+  // with a fixed policy from next.config.ts: with a proxy in front, Next.js buffers every request
+  // body (up to 10 MB, and cuts it there), which uploads, imports and webhooks must not suffer.
+  matcher: [{ source: "/((?!api/|_next/static|_next/image|favicon.ico|icon.svg).*)" }],
 };

@@ -36,6 +36,11 @@ describe("Content-Security-Policy", () => {
     expect(res.text).toMatch(new RegExp(`<script nonce="${nonce!.replace(/[+/=]/g, "\\$&")}">try\\{var t=localStorage`));
   });
 
+  test("the API answers with a policy that lets nothing run, and is not passed through the proxy", async () => {
+    const res = await api().get("/api/health");
+    expect(res.headers["content-security-policy"]).toBe("default-src 'none'; frame-ancestors 'none'; base-uri 'none'; form-action 'self'");
+  });
+
   test("the nonce is fresh for every request", async () => {
     const nonces = new Set<string | undefined>();
     for (let i = 0; i < 3; i++) nonces.add(nonceOf((await api().get("/sign-in")).headers["content-security-policy"] as string));
