@@ -3,7 +3,15 @@
 export async function register(): Promise<void> {
   if (process.env.NEXT_RUNTIME === "nodejs") {
     const { env } = await import("@/server/env");
-    if (env().JOBS_WORKER === "on") {
+    const jobsWorker = env().JOBS_WORKER;
+    // A production site marks its database, so the demo seed never runs against it.
+    const { markDeployment } = await import("@/server/services/mark-deployment");
+    const mark = (tries: number): void =>
+      void markDeployment().catch(() => {
+        if (tries > 1) setTimeout(() => mark(tries - 1), 30_000).unref();
+      });
+    mark(20);
+    if (jobsWorker === "on") {
       const { startJobWorker } = await import("@/server/jobs/start-job-worker");
       // Not awaited: the app must serve (and report its health) even while the database is down.
       startJobWorker().catch(() => {});

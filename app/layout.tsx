@@ -1,4 +1,5 @@
 import type { Metadata, Viewport } from "next";
+import { headers } from "next/headers";
 import localFont from "next/font/local";
 import type { ReactNode } from "react";
 import { AppShell } from "@/components/shell/app-shell";
@@ -30,12 +31,14 @@ export const viewport: Viewport = {
 
 export default async function RootLayout({ children }: { children: ReactNode }) {
   const viewer = await getViewer();
+  // The CSP nonce proxy.ts gave this request: the one inline script must carry it to run.
+  const nonce = (await headers()).get("x-nonce") ?? undefined;
   const shell = viewer ? { user: viewer.user, firm: viewer.actor?.firm, firms: viewer.actor?.firms ?? [] } : null;
   return (
     // The theme script sets data-theme before hydration, hence suppressHydrationWarning.
     <html lang="en" className={inter.variable} suppressHydrationWarning>
       <head>
-        <script dangerouslySetInnerHTML={{ __html: themeScript }} />
+        <script nonce={nonce} dangerouslySetInnerHTML={{ __html: themeScript }} />
       </head>
       <body>
         <AppShell viewer={shell} signOut={signOutAction} switchFirm={switchFirmAction}>

@@ -2,6 +2,7 @@
 // second, unrelated firm to prove tenant isolation. Idempotent: safe on every `npm start`.
 import bcrypt from "bcryptjs";
 import type { Knex } from "knex";
+import { assertDemoSeedAllowed } from "../demo-seed-guard";
 
 export const DEFAULT_DEMO_PASSWORD = "filmsheet-demo";
 
@@ -35,9 +36,8 @@ export const DEMO_PROJECTS = [
 ] as const;
 
 export async function seed(knex: Knex): Promise<void> {
-  if (process.env.NODE_ENV === "production") {
-    throw new Error("Refusing to load demo data with NODE_ENV=production.");
-  }
+  // Never where the app serves (or will serve) in production: see db/demo-seed-guard.ts.
+  await assertDemoSeedAllowed(knex);
   const password = process.env.DEMO_PASSWORD || DEFAULT_DEMO_PASSWORD;
   const passwordHash = await bcrypt.hash(password, 10);
 

@@ -4,6 +4,7 @@
 // idempotent: rows already there (perhaps edited during a demo) are left as they are.
 import { createHash } from "node:crypto";
 import type { Knex } from "knex";
+import { assertDemoSeedAllowed } from "../demo-seed-guard";
 
 /** A stable UUID (version-5 layout) from a name, so every run seeds the same ids. */
 export function demoId(name: string): string {
@@ -82,7 +83,7 @@ export const DEMO_DUCT_RUNS = [
 export const DEMO_SURFACE_COUNT = SURFACE_GROUPS.reduce((n, g) => n + g[3], 0);
 
 export async function seed(knex: Knex): Promise<void> {
-  if (process.env.NODE_ENV === "production") throw new Error("Refusing to load demo data with NODE_ENV=production.");
+  await assertDemoSeedAllowed(knex);
   const project = await knex("projects as p").join("firms as f", "f.id", "p.firm_id").where({ "f.slug": "tarnbrook-sill", "p.reference": "TS-2417" }).first("p.id", "p.firm_id");
   if (!project) throw new Error("The demo project TS-2417 is missing: run 01_demo_firms first.");
   const own = { firm_id: project.firm_id, project_id: project.id };

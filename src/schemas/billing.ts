@@ -7,6 +7,8 @@ import { z } from "zod";
 export const FREE_PLAN = {
   projects: 1,
   rowsPerProject: 40,
+  /** Design cases per project: each one multiplies the work of every result and report. */
+  designCasesPerProject: 6,
   revisions: false,
   cleanReport: false,
   /** Seats a free firm may fill (members plus pending invitations). */

@@ -43,4 +43,13 @@ export interface TProject {
   created_at: string;
   updated_at: string;
   version: number;
+  /** Set while the project is archived (read-only, listed apart); null while in use. */
+  archived_at: string | null;
 }
+
+/** Archive or bring back a project at the version read (admins). */
+export const ZProjectArchive = z.strictObject({ version: ZVersion });
+export type TProjectArchive = z.infer<typeof ZProjectArchive>;
+
+/** `GET /api/projects?archived=1` lists the archived projects instead of those in use. */
+export const ZProjectListQuery = z.object({ archived: z.enum(["0", "1"], { error: "archived must be 0 or 1" }).optional() });

@@ -47,10 +47,16 @@ describe("an issued revision is frozen in the database", () => {
     expect(Number((await testDb()("revisions").count({ n: "*" }))[0]!.n)).toBeGreaterThan(0);
   });
 
-  test("deleting the whole project takes its revisions with it (the cascade is allowed)", async () => {
+  test("the project of an issued revision cannot be deleted, whoever asks; only its whole firm's deletion takes it", async () => {
     const projectId = await projectWithRevision();
-    await testDb()("projects").where({ id: projectId }).delete();
-    expect(await revisionOf(projectId)).toBeUndefined();
+    await expect(testDb()("projects").where({ id: projectId }).delete()).rejects.toThrow(/a project with issued revisions is never deleted/);
+    expect(await revisionOf(projectId)).toBeDefined();
+
+    const [firm] = await testDb()("firms").insert({ name: "Freeze test firm", slug: `freeze-${process.pid}-${++serial}` }).returning("id");
+    const [p] = await testDb()("projects").insert({ firm_id: firm.id, name: "Freeze test hall", reference: `FZ-${process.pid}-${++serial}` }).returning("id");
+    await testDb()("revisions").insert({ firm_id: firm.id, project_id: p.id, sequence: 1, letter: "A", issued_by_name: "Solveig Prynne", snapshot: JSON.stringify({ format: 1, checks: [] }) });
+    await testDb()("firms").where({ id: firm.id }).delete();
+    expect(await revisionOf(p.id)).toBeUndefined();
   });
 });
 
@@ -67,7 +73,7 @@ describe("the audit trail", () => {
 
   test("outlives the project it describes", async () => {
     const actor = await actorFor("consultant@demo.filmsheet.test");
-    const projectId = await projectWithRevision();
+    const [{ id: projectId }] = await testDb()("projects").insert({ firm_id: firmId, name: "Freeze test hall", reference: `FZ-${process.pid}-${++serial}` }).returning("id");
     await db().transaction((trx) => recordAudit(trx, actor, [{ projectId, entity: "project", entityId: projectId, action: "delete", before: { name: "Freeze test hall" } }]));
     await testDb()("projects").where({ id: projectId }).delete();
     expect(await auditOf(projectId)).toHaveLength(1);

@@ -149,14 +149,16 @@ describe("an issued revision never changes", () => {
     expect(await stored(fx.projectId, "A")).toEqual(before);
   });
 
-  test("deleting the project through its route takes its revisions; the audit trail keeps the deletion", async () => {
+  test("a project with an issued revision is never deleted: consultants 403, admins 409 naming the archive; the revision stays", async () => {
     const other = await makeProject("tarnbrook-sill");
     await acceptAll(other.projectId, checkerId);
     expect((await issue(other)).status).toBe(201);
-    const res = await request(app.server).delete(`/api/projects/${other.projectId}?version=1`).set(consultant());
-    expect(res.status, res.text).toBe(200);
-    expect(await testDb()("revisions").where({ project_id: other.projectId })).toEqual([]);
-    expect((await auditOf(other.projectId)).at(-1)).toMatchObject({ entity: "project", action: "delete" });
+    expect((await request(app.server).delete(`/api/projects/${other.projectId}?version=1`).set(consultant())).status).toBe(403);
+    const res = await request(app.server).delete(`/api/projects/${other.projectId}?version=1`).set(as["admin@demo.filmsheet.test"]);
+    expect(res.status, res.text).toBe(409);
+    expect(res.body.error.message).toContain("archive it instead");
+    expect(await testDb()("revisions").where({ project_id: other.projectId })).toHaveLength(1);
+    expect(await testDb()("projects").where({ id: other.projectId }).first("id")).toBeDefined();
   });
 });
 

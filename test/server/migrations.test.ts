@@ -13,6 +13,7 @@ const TABLES = [
   "audit_log",
   "buildup_layers",
   "buildups",
+  "deployment_marks",
   "design_cases",
   "duct_runs",
   "firm_billing",
@@ -136,6 +137,24 @@ describe("migrations round trip", () => {
     const r = cli(["seed:run"], { NODE_ENV: "production" });
     expect(r.status).not.toBe(0);
     expect(r.output).toContain("Refusing to load demo data");
+  });
+
+  test("the seed refuses whenever the app will serve in production: a public APP_URL or database, whatever NODE_ENV says", () => {
+    const publicUrl = cli(["seed:run"], { APP_URL: "https://filmsheet.example.com" });
+    expect(publicUrl.status).not.toBe(0);
+    expect(publicUrl.output).toContain("Refusing to load demo data: APP_URL (https://filmsheet.example.com) is not on this machine");
+    const remoteDb = knexCli(["seed:run"], { DATABASE_URL: url.replace("127.0.0.1", "db.example.invalid"), NODE_ENV: "test", DEMO_PASSWORD: "" });
+    expect(remoteDb.status).not.toBe(0);
+    expect(remoteDb.output).toContain("Refusing to load demo data: DATABASE_URL points at db.example.invalid");
+  });
+
+  test("the seed refuses a database the app has served in production (the mark it leaves), and runs again once the mark is gone", async () => {
+    await db("deployment_marks").insert({ mode: "production", app_url: "https://filmsheet.example.com" });
+    const marked = cli(["seed:run"]);
+    expect(marked.status).not.toBe(0);
+    expect(marked.output).toContain("Refusing to load demo data: the app has served this database in production at https://filmsheet.example.com");
+    await db("deployment_marks").delete();
+    expect(cli(["seed:run"]).status).toBe(0);
   });
 
   test("an invitation with an unknown role, or a firm with no seats, is rejected by the database", async () => {

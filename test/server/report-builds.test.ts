@@ -115,10 +115,12 @@ describe("a draft report through the job", () => {
     expect(early.status).toBe(409);
     expect(early.body.error.message).toContain("42 %");
 
+    // Another project: one project holds one queued or running draft at a time.
+    const other = await makeProject("tarnbrook-sill");
     const [quiet] = await testDb()("report_builds")
-      .insert({ firm_id: fx.firmId, project_id: fx.projectId, kind: "draft", status: "running", progress: 0.3, stage: "Writing", watermark: true, requested_by_name: "Test", updated_at: new Date(Date.now() - 20 * 60_000) })
+      .insert({ firm_id: other.firmId, project_id: other.projectId, kind: "draft", status: "running", progress: 0.3, stage: "Writing", watermark: true, requested_by_name: "Test", updated_at: new Date(Date.now() - 20 * 60_000) })
       .returning("id");
-    const res = await request(app.server).get(`/api/projects/${fx.projectId}/reports/${quiet.id}`).set(consultant());
+    const res = await request(app.server).get(`/api/projects/${other.projectId}/reports/${quiet.id}`).set(consultant());
     expect(res.body).toMatchObject({ status: "failed", stage: "Interrupted" });
     expect(res.body.error).toContain("ask for the report again");
   });

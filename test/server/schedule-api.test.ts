@@ -11,6 +11,7 @@ import { clearPlan } from "../support/billing";
 
 let app: BuiltApp;
 let consultant: Record<string, string>;
+let admin: Record<string, string>;
 let otherFirm: Record<string, string>;
 let otherConsultantToken: Record<string, string>;
 let fx: FixtureProject;
@@ -23,9 +24,10 @@ const call = (who: Record<string, string>, method: Method, path: string, body?: 
 const as = (method: Method, path: string, body?: object) => call(consultant, method, path, body);
 
 beforeAll(async () => {
-  const started = await startAppWithSessions(["consultant@demo.filmsheet.test", "admin@other.filmsheet.test"]);
+  const started = await startAppWithSessions(["consultant@demo.filmsheet.test", "admin@demo.filmsheet.test", "admin@other.filmsheet.test"]);
   app = started.app;
   consultant = started.as["consultant@demo.filmsheet.test"];
+  admin = started.as["admin@demo.filmsheet.test"];
   otherFirm = started.as["admin@other.filmsheet.test"];
   otherConsultantToken = bearer(await makeToken("ostrander-mechanical", "consultant"));
   fx = await makeProject("tarnbrook-sill");
@@ -224,7 +226,9 @@ describe("projects", () => {
     const bad = await as("patch", `/api/projects/${p.projectId}`, { version: 2, terrain: "moor" });
     expect(bad.status).toBe(422);
     expect(bad.body.error.details[0]).toEqual({ field: "body.terrain", message: "Terrain must be one of: city, suburban, open, water" });
-    expect((await as("delete", `/api/projects/${p.projectId}?version=2`)).status).toBe(200);
+    // Only an admin deletes a project.
+    expect((await as("delete", `/api/projects/${p.projectId}?version=2`)).status).toBe(403);
+    expect((await call(admin, "delete", `/api/projects/${p.projectId}?version=2`)).status).toBe(200);
     expect(await testDb()("surfaces").where({ project_id: p.projectId }).count({ n: "*" })).toEqual([{ n: "0" }]);
   });
 });

@@ -53,6 +53,11 @@ describe("action()", () => {
     const state = await broken(null, new FormData());
     expect(state).toMatchObject({ ok: false, code: "internal" });
     expect(JSON.stringify(state)).not.toContain("secret detail");
+    // The person gets a reference to quote; the log has the error under the same reference.
+    const id = /quote reference ([0-9a-f-]{36})/.exec((state as { message: string }).message)?.[1];
+    expect(id).toBeDefined();
+    expect(String(spy.mock.calls[0]![0])).toContain(id);
+    expect((spy.mock.calls[0]![1] as Error).message).toBe("secret detail");
     spy.mockRestore();
   });
 

@@ -102,6 +102,34 @@ describe("input parsing", () => {
     expect(JSON.stringify(await res.json())).not.toContain("password");
   });
 
+  test("an unexpected error answers a generic message and a request id; the log has the details under that id", async () => {
+    const logged = vi.spyOn(console, "error").mockImplementation(() => {});
+    const handler = route({ auth: "public" }, () => {
+      throw new Error('relation "firm_billing" does not exist at /srv/filmsheet/node_modules/pg');
+    });
+    const res = await handler(new Request("http://test/api/things"));
+    expect(res.status).toBe(500);
+    const body = await res.json();
+    const id = res.headers.get("x-request-id");
+    expect(id).toMatch(/^[0-9a-f-]{36}$/);
+    expect(body).toEqual({ error: { code: "internal", message: `Something went wrong on our side. If it happens again, quote reference ${id}.`, details: { requestId: id } } });
+    expect(JSON.stringify(body)).not.toMatch(/firm_billing|node_modules|relation/);
+    expect(logged).toHaveBeenCalledTimes(1);
+    expect(String(logged.mock.calls[0]![0])).toBe(`[${id}] GET /api/things failed:`);
+    expect((logged.mock.calls[0]![1] as Error).message).toContain('relation "firm_billing" does not exist');
+  });
+
+  test("the id a proxy gave the request (X-Request-Id) is kept; a malformed one is replaced", async () => {
+    vi.spyOn(console, "error").mockImplementation(() => {});
+    const handler = route({ auth: "public" }, () => {
+      throw new Error("boom");
+    });
+    const given = await handler(new Request("http://test/x", { headers: { "x-request-id": "lb-4f2a9c1e-77" } }));
+    expect(given.headers.get("x-request-id")).toBe("lb-4f2a9c1e-77");
+    const forged = await handler(new Request("http://test/x", { headers: { "x-request-id": "<script>alert(1)</script>" } }));
+    expect(forged.headers.get("x-request-id")).toMatch(/^[0-9a-f-]{36}$/);
+  });
+
   test("a handler may return its own Response", async () => {
     const handler = route({ auth: "public" }, () => new Response("teapot", { status: 418 }));
     expect((await handler(new Request("http://test/x"))).status).toBe(418);

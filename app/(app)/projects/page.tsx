@@ -8,9 +8,10 @@ import { ProjectsView } from "./projects-view";
 
 export const metadata: Metadata = { title: "Projects" };
 
-export default async function ProjectsPage() {
+export default async function ProjectsPage({ searchParams }: { searchParams: Promise<{ archived?: string }> }) {
   const actor = await requirePageActor("/projects");
-  const [projects, plan] = await Promise.all([listProjects(actor), getPlan(actor.firm.id)]);
-  const notice = <PlanNotice plan={plan} projects={projects.length} isAdmin={hasAnyRole(actor, ["admin"])} />;
-  return <ProjectsView firmName={actor.firm.name} projects={projects} canCreate={hasAnyRole(actor, ["consultant"])} notice={notice} />;
+  const archived = (await searchParams).archived === "1";
+  const [projects, plan] = await Promise.all([listProjects(actor, { archived }), getPlan(actor.firm.id)]);
+  const notice = archived ? null : <PlanNotice plan={plan} projects={projects.length} isAdmin={hasAnyRole(actor, ["admin"])} />;
+  return <ProjectsView firmName={actor.firm.name} projects={projects} archived={archived} canCreate={!archived && hasAnyRole(actor, ["consultant"])} notice={notice} />;
 }

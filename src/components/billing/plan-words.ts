@@ -21,6 +21,7 @@ export function planLabel(plan: TPlan): string {
 export const PLAN_LINES: { what: string; free: string; paid: string }[] = [
   { what: "Projects", free: `${FREE_PLAN.projects}`, paid: "Unlimited" },
   { what: "Rows per project", free: `Up to ${FREE_PLAN.rowsPerProject}`, paid: "Unlimited" },
+  { what: "Design cases per project", free: `Up to ${FREE_PLAN.designCasesPerProject}`, paid: "Unlimited" },
   { what: "Calculation report", free: "Marked “not for issue”", paid: "Clean, for issue" },
   { what: "Revisions", free: "—", paid: "Issue frozen revisions A, B, C …" },
   { what: "Seats", free: `${FREE_PLAN.seats}`, paid: "As many as you buy" },

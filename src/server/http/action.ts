@@ -4,6 +4,7 @@ import { z, type ZodType } from "zod";
 import type { TRole } from "@/schemas/roles";
 import type { Actor } from "@/server/auth/actor";
 import { requireActor, type AuthMode } from "@/server/auth/require-actor";
+import { internalMessage, logInternalError } from "./internal-error";
 import { AppError, type AppErrorCode } from "./app-error";
 
 /** What a form gets back from a server action: a result, or an error naming the fields. */
@@ -81,8 +82,8 @@ export function action<TInput = Record<string, unknown>, TAuth extends AuthMode 
         return failed({ ok: false, code: error.code, message: error.message, ...(details.length ? { fields } : {}) });
       }
       if (error instanceof z.ZodError) return failed({ ok: false, code: "invalid_input", message: "Check the highlighted fields", fields: fieldErrors(error.issues) });
-      console.error("Server action failed:", error);
-      return failed({ ok: false, code: "internal", message: "Something went wrong on our side; nothing was saved" });
+      const id = logInternalError("Server action", error);
+      return failed({ ok: false, code: "internal", message: internalMessage(id, "; nothing was saved") });
     }
   };
 }

@@ -6,6 +6,7 @@ import { requireActor, type AuthMode } from "@/server/auth/require-actor";
 import { assertSameOrigin } from "@/server/auth/same-origin";
 import { AppError } from "./app-error";
 import { readCappedBody } from "./read-bytes";
+import { internalMessage, logInternalError, requestIdOf } from "./internal-error";
 
 type Params = Record<string, string | string[] | undefined>;
 
@@ -104,8 +105,11 @@ export function route<TBody = undefined, TQuery = Record<string, string | string
     } catch (error) {
       if (error instanceof AppError) return errorResponse(error);
       if (error instanceof z.ZodError) return invalid(error, "input", invalidStatus);
-      console.error(`${req.method} ${new URL(req.url).pathname} failed:`, error);
-      return errorResponse(new AppError("internal", "Something went wrong on our side"));
+      // The details go to the log under the request's id; the answer carries the id only.
+      const id = logInternalError(`${req.method} ${new URL(req.url).pathname}`, error, requestIdOf(req.headers));
+      const res = errorResponse(new AppError("internal", internalMessage(id), { requestId: id }));
+      res.headers.set("x-request-id", id);
+      return res;
     }
   };
 }

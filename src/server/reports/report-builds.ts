@@ -1,6 +1,7 @@
 import "server-only";
 import type { Knex } from "knex";
 import type { TReportBuild } from "@/schemas/reports";
+import { REPORT_PRIORITY } from "@/server/jobs/job-priorities";
 
 /** Graphile-worker's task that builds one report. */
 export const BUILD_REPORT_TASK = "build_report";
@@ -11,7 +12,8 @@ export const STALE_AFTER_S = 600;
 /** Queues the build of `buildId` in the caller's transaction: it starts once that commits. */
 export async function enqueueReportBuild(trx: Knex | Knex.Transaction, buildId: string): Promise<void> {
   // One attempt: a build that fails says why, and the person asks again (a retry would fail alike).
-  await trx.raw("SELECT graphile_worker.add_job(?, ?::json, max_attempts => 1)", [BUILD_REPORT_TASK, JSON.stringify({ buildId })]);
+  // Built by a runner of their own (one at a time per instance), never in the e-mail runner's slots.
+  await trx.raw("SELECT graphile_worker.add_job(?, ?::json, max_attempts => 1, priority => ?)", [BUILD_REPORT_TASK, JSON.stringify({ buildId }), REPORT_PRIORITY]);
 }
 
 /** The columns of report_builds the API shows (`presentBuild`), and the same joined to the revision's letter. */

@@ -1,7 +1,10 @@
 import "server-only";
 import { buildReportAsync, type ReportProgress } from "@/report/build-report";
 import { db } from "@/server/db/knex";
+import { AppError } from "@/server/http/app-error";
+import { internalMessage, logInternalError } from "@/server/http/internal-error";
 import { draftReportSource } from "./report-inputs";
+import { assertReportSize, draftReportSize } from "./report-size";
 import { buildRevisionReport, REVISION_REPORT_COLUMNS } from "./revision-reports";
 
 // Progress is written at most this often: enough for a smooth bar, few enough writes.
@@ -34,6 +37,8 @@ export async function runReportBuild(buildId: string): Promise<void> {
       const r = await q("revisions").where({ id: build.revision_id }).first(REVISION_REPORT_COLUMNS);
       done = await buildRevisionReport(q, firm, r, build.watermark, progress);
     } else {
+      // The schedule may have grown since the draft was asked for: the size limit holds at build time too.
+      assertReportSize(await draftReportSize(q, build.project_id));
       const source = await draftReportSource(q, firm, build.project_id, build.requested_by_name);
       done = { ...(await buildReportAsync(source.input, progress)), filename: source.filename };
     }
@@ -44,8 +49,9 @@ export async function runReportBuild(buildId: string): Promise<void> {
         pdf: build.kind === "draft" ? Buffer.from(done.pdf) : null, updated_at: q.fn.now(), finished_at: q.fn.now(),
       });
   } catch (error) {
-    const message = error instanceof Error ? error.message : String(error);
-    console.warn(`[jobs] report build ${buildId} failed: ${message.split("\n")[0]}`);
+    // A refusal meant for the person (AppError) is shown as it is; anything else is logged in full
+    // and shown only as a reference, since its message may name tables, paths or connections.
+    const message = error instanceof AppError ? error.message : internalMessage(logInternalError(`[jobs] report build ${buildId}`, error), " while building this report");
     await q("report_builds").where({ id: buildId }).update({ status: "failed", stage: "Failed", error: message.slice(0, 2000), updated_at: q.fn.now(), finished_at: q.fn.now() });
   }
 }

@@ -137,6 +137,10 @@ async function writeChecked(trx: Knex.Transaction, actor: Actor, projectId: stri
     if (creates.some((c) => c.entity === "surfaces" || c.entity === "duct_runs")) {
       await assertPlanAllows(trx, actor.firm.id, { rows: () => countRows(trx, projectId) });
     }
+    // Every design case multiplies the work of each result and report: the free plan caps them too.
+    if (creates.some((c) => c.entity === "design_cases")) {
+      await assertPlanAllows(trx, actor.firm.id, { designCases: async () => Number((await trx("design_cases").where({ project_id: projectId }).count({ n: "*" }))[0]!.n) });
+    }
     for (const u of checked.filter((c) => c.op === "update")) {
       const e = ENTITIES[u.entity];
       // Guarded by the version read: outside a transaction (a single-row edit) a write that

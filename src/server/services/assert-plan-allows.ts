@@ -12,6 +12,8 @@ export interface PlanNeeds {
   projects?: PlanCount;
   /** Rows (surfaces + duct runs) the one project will hold once the change is saved. */
   rows?: PlanCount;
+  /** Design cases the one project will hold once the change is saved. */
+  designCases?: PlanCount;
   /** The change issues a revision. */
   revisions?: true;
   /** The change produces a report without the "not for issue" watermark. */
@@ -63,6 +65,12 @@ export async function assertPlanAllows(trx: Knex.Transaction, firmId: string, ne
     const requested = await count(needs.rows);
     if (requested > FREE_PLAN.rowsPerProject) {
       throw refuse("rows", FREE_PLAN.rowsPerProject, requested, `The free plan holds ${FREE_PLAN.rowsPerProject} rows per project (this change would make ${requested}); a paid plan has no limit. ${UPGRADE}`);
+    }
+  }
+  if (needs.designCases !== undefined) {
+    const requested = await count(needs.designCases);
+    if (requested > FREE_PLAN.designCasesPerProject) {
+      throw refuse("designCases", FREE_PLAN.designCasesPerProject, requested, `The free plan holds ${FREE_PLAN.designCasesPerProject} design cases per project (this change would make ${requested}); a paid plan has no limit. ${UPGRADE}`);
     }
   }
   if (needs.revisions) throw refuse("revisions", 0, 1, `Issuing revisions needs a paid plan. ${UPGRADE}`);

@@ -14,6 +14,7 @@ import { enqueueEmail } from "@/server/jobs/enqueue-email";
 import { notificationRecipients } from "@/server/repositories/notification-recipients";
 import { enqueueReportBuild } from "@/server/reports/report-builds";
 import { loadSnapshotInputs } from "@/server/repositories/snapshot-inputs";
+import { assertReportSize } from "@/server/reports/report-size";
 import { assertPlanAllows } from "./assert-plan-allows";
 import { actorName, recordAudit } from "./record-audit";
 
@@ -52,6 +53,8 @@ export async function issueRevision(actor: Actor, projectId: string, input: { no
 
     const inputs = (await loadSnapshotInputs(trx, actor.firm.id, projectId))!;
     if (inputs.checks.length === 0) throw new AppError("conflict", "There is nothing to issue: the schedule has no surfaces or duct runs");
+    // The revision's report is built as it is issued: one too large to build is refused first.
+    assertReportSize({ rows: inputs.surfaces.length + inputs.duct_runs.length, cases: inputs.design_cases.length });
     const open = inputs.checks.filter((c) => c.state !== "accepted");
     if (open.length > 0) {
       const by = (s: string) => open.filter((c) => c.state === s).length;

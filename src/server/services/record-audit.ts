@@ -1,6 +1,7 @@
 import "server-only";
 import type { Knex } from "knex";
 import type { Actor } from "@/server/auth/actor";
+import { AppError } from "@/server/http/app-error";
 
 /** One change to a project's data: which thing, what was done, and its state before and after. */
 export interface AuditEntry {
@@ -23,11 +24,30 @@ export function actorName(actor: Actor): string {
   return actor.name ?? actor.email ?? `user ${actor.userId}`;
 }
 
+// What may still happen to an archived project: bringing it back (and archiving, which sets it).
+const ON_ARCHIVED = new Set(["archive", "unarchive"]);
+
+/**
+ * Refuses every change to an archived project. Every writer of project data records its change
+ * here in its own transaction, so this one check makes archived projects read-only for all of
+ * them: the refusal (409) rolls the change back with its record.
+ */
+async function assertNotArchived(trx: Knex.Transaction, firmId: string, entries: readonly AuditEntry[]): Promise<void> {
+  const ids = [...new Set(entries.filter((e) => e.projectId !== null && !ON_ARCHIVED.has(e.action)).map((e) => e.projectId as string))];
+  if (ids.length === 0) return;
+  const archived = await trx("projects").where({ firm_id: firmId }).whereIn("id", ids).whereNotNull("archived_at").first("reference");
+  if (archived) {
+    throw new AppError("conflict", `Project ${archived.reference} is archived, so it is read-only; an admin can bring it back from the archived projects`, [{ field: "archived", message: "Archived projects are read-only" }]);
+  }
+}
+
 /**
  * Writes audit rows in the caller's transaction, so the record and the change commit together or
- * not at all. The table is append-only (a trigger refuses UPDATE and DELETE).
+ * not at all. The table is append-only (a trigger refuses UPDATE and DELETE). A change to an
+ * archived project is refused here (409).
  */
 export async function recordAudit(trx: Knex.Transaction, actor: Actor, entries: readonly AuditEntry[]): Promise<void> {
+  await assertNotArchived(trx, actor.firm.id, entries);
   const who = { firm_id: actor.firm.id, actor_user_id: actor.userId, actor_token_id: actor.tokenId, actor_name: actorName(actor) };
   const rows = entries.map((e) => ({
     ...who,

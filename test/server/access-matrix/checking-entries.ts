@@ -86,7 +86,8 @@ export const CHECKING_ENTRIES: MatrixEntry[] = [
   { file: "projects/[projectId]/revisions/[letter]/route.ts", method: "GET", request: async () => ({ path: `/api/projects/${(await readProject()).projectId}/revisions/A` }), expect: anyone(200) },
   { file: "projects/[projectId]/revisions/[letter]/report/route.ts", method: "GET", request: async () => ({ path: `/api/projects/${(await readProject()).projectId}/revisions/A/report` }), expect: anyone(200) },
   // Report builds: drafts are asked for and read by the people who work on the schedule.
-  { file: "projects/[projectId]/reports/route.ts", method: "POST", request: async () => ({ path: `/api/projects/${(await readProject()).projectId}/reports`, body: { kind: "draft" } }), expect: draftReaders(202) },
+  // A fresh project each time: while a project's draft is queued, asking again returns it (200).
+  { file: "projects/[projectId]/reports/route.ts", method: "POST", request: async () => ({ path: `/api/projects/${(await makeProject("tarnbrook-sill")).projectId}/reports`, body: { kind: "draft" } }), expect: draftReaders(202) },
   { file: "projects/[projectId]/reports/[buildId]/route.ts", method: "GET", request: async () => ({ path: await draftBuild() }), expect: draftReaders(200) },
   { file: "projects/[projectId]/reports/[buildId]/pdf/route.ts", method: "GET", request: async () => ({ path: `${await draftBuild()}/pdf` }), expect: draftReaders(200) },
   { file: "projects/[projectId]/revisions/compare/route.ts", method: "GET", request: async () => ({ path: `/api/projects/${(await readProject()).projectId}/revisions/compare?from=A&to=B` }), expect: anyone(200) },

@@ -14,6 +14,7 @@ const PRINCIPALS: Principal[] = ["anonymous", "admin", "consultant", "checker", 
 const refused = { anonymous: 401, revoked_token: 401, expired_token: 401 };
 // Viewers read issued revisions only, never the draft schedule.
 const read: Status = { ...(Object.fromEntries(PRINCIPALS.map((p) => [p, 200])) as Status), ...refused, viewer: 403, other_firm: 404 };
+const adminWrite = (ok: number): Status => ({ ...(Object.fromEntries(PRINCIPALS.map((p) => [p, 403])) as Status), ...refused, admin: ok, admin_token: ok, other_firm: 404 });
 const write = (ok: number): Status => ({ ...(Object.fromEntries(PRINCIPALS.map((p) => [p, 403])) as Status), ...refused, consultant: ok });
 
 async function demoIds() {
@@ -51,8 +52,10 @@ async function newItem(table: string): Promise<string> {
   return id;
 }
 
-async function newProject(): Promise<string> {
-  const [row] = await testDb()("projects").insert({ firm_id: await firmId(DEMO_FIRM), name: "Matrix project", reference: uniqueRef("MXP") }).returning("id");
+async function newProject(archived = false): Promise<string> {
+  const [row] = await testDb()("projects")
+    .insert({ firm_id: await firmId(DEMO_FIRM), name: "Matrix project", reference: uniqueRef("MXP"), ...(archived ? { archived_at: new Date() } : {}) })
+    .returning("id");
   return row.id;
 }
 
@@ -68,7 +71,10 @@ const base = async () => `/api/projects/${await demoProjectId()}`;
 
 export const SCHEDULE_ENTRIES: MatrixEntry[] = [
   { file: "projects/[projectId]/route.ts", method: "PATCH", request: async () => ({ path: `/api/projects/${await newProject()}`, body: { version: 1, unit_system: "IP" } }), expect: write(200) },
-  { file: "projects/[projectId]/route.ts", method: "DELETE", request: async () => ({ path: `/api/projects/${await newProject()}?version=1` }), expect: write(200) },
+  // Deleting and archiving a project: firm admins only (the other firm's admin finds no such project).
+  { file: "projects/[projectId]/route.ts", method: "DELETE", request: async () => ({ path: `/api/projects/${await newProject()}?version=1` }), expect: adminWrite(200) },
+  { file: "projects/[projectId]/archive/route.ts", method: "POST", request: async () => ({ path: `/api/projects/${await newProject()}/archive`, body: { version: 1 } }), expect: adminWrite(200) },
+  { file: "projects/[projectId]/archive/route.ts", method: "DELETE", request: async () => ({ path: `/api/projects/${await newProject(true)}/archive?version=1` }), expect: adminWrite(200) },
   { file: "projects/[projectId]/schedule/route.ts", method: "GET", request: async () => ({ path: `${await base()}/schedule` }), expect: read },
   { file: "projects/[projectId]/results/route.ts", method: "GET", request: async () => ({ path: `${await base()}/results?case=${(await demoIds()).caseId}` }), expect: read },
   // The draft report: people who work on the schedule; viewers read issued revisions only.

@@ -36,7 +36,8 @@ export default async function ProjectLayout({ children, params }: { children: Re
   });
   return (
     // Keyed by project: moving from one project to another starts a fresh cache seeded with its schedule.
-    <ScheduleProvider key={projectId} initial={schedule} canEdit={hasAnyRole(actor, ["consultant"])}>
+    // An archived project is read-only for everyone (the server refuses its changes as well).
+    <ScheduleProvider key={projectId} initial={schedule} canEdit={hasAnyRole(actor, ["consultant"]) && schedule.project.archived_at === null}>
       <div className="fs-project grid gap-5">
         <ProjectHeader canReport={hasAnyRole(actor, ["admin", "consultant", "checker"])} />
         {children}

@@ -18,7 +18,7 @@ const FIELDS: FieldDef[] = [
   { name: "default_method", label: "Exterior convection method", kind: "select", options: METHOD_OPTIONS, hint: "For every surface without its own" },
 ];
 
-export function SettingsView() {
+export function SettingsView({ isAdmin }: { isAdmin: boolean }) {
   const s = useSchedule();
   const { system, canEdit, setSystem } = useProject();
   const { project } = useScheduleWrites();
@@ -40,6 +40,20 @@ export function SettingsView() {
       const { message, fields } = serverErrors(error);
       st.setErrors(fields);
       st.setMessage({ tone: "error", text: message });
+    }
+  }
+
+  // Archiving keeps everything (issued revisions and their reports above all) but makes the
+  // project read-only and lists it apart; an admin brings it back the same way.
+  async function toggleArchive() {
+    try {
+      const archived = s.project.archived_at !== null;
+      if (archived) await api("DELETE", `/api/projects/${s.project.id}/archive?version=${s.project.version}`);
+      else await api("POST", `/api/projects/${s.project.id}/archive`, { version: s.project.version });
+      router.push(archived ? `/projects/${s.project.id}` : "/projects?archived=1");
+      router.refresh();
+    } catch (error) {
+      setDeleteError((error as Error).message);
     }
   }
 
@@ -66,10 +80,25 @@ export function SettingsView() {
           <FieldInputs fields={FIELDS} values={s.project as unknown as Record<string, unknown>} errors={st.errors} system={system} idPrefix="project" disabled={!canEdit} />
         </div>
       </ItemCard>
-      {canEdit ? (
+      {isAdmin ? (
+        <section aria-label="Archive the project" className="grid gap-2 rounded-panel border border-line bg-surface p-4">
+          <h2 className="font-semibold">{s.project.archived_at === null ? "Archive the project" : "Archived project"}</h2>
+          <p className="text-small text-muted">
+            {s.project.archived_at === null
+              ? "Keeps the schedule, its checks and every issued revision with its report, read-only, under Archived projects."
+              : `Archived on ${new Date(s.project.archived_at).toLocaleDateString("en-GB")}: read-only. Bring it back to change it again.`}
+          </p>
+          <div>
+            <button type="button" onClick={toggleArchive} className="rounded-chip border border-line px-3 py-1.5 text-small font-semibold">
+              {s.project.archived_at === null ? "Archive project" : "Bring back"}
+            </button>
+          </div>
+        </section>
+      ) : null}
+      {isAdmin ? (
         <section aria-label="Delete the project" className="grid gap-2 rounded-panel border border-danger/40 bg-surface p-4">
           <h2 className="font-semibold text-danger">Delete the project</h2>
-          <p className="text-small text-muted">Deletes the schedule, design cases, zones and build-ups for good. Type the reference {s.project.reference} to confirm.</p>
+          <p className="text-small text-muted">Deletes the schedule, design cases, zones and build-ups for good (a project with issued revisions is archived instead). Type the reference {s.project.reference} to confirm.</p>
           <div className="flex flex-wrap gap-2">
             <input aria-label="Reference to confirm" value={typed} onChange={(e) => setTyped(e.target.value)} className="rounded-chip border border-line bg-canvas px-2 py-1.5 text-small" />
             <button type="button" disabled={typed !== s.project.reference} onClick={remove} className="rounded-chip bg-danger px-3 py-1.5 text-small font-semibold text-accent-ink disabled:opacity-50">
