@@ -5,7 +5,7 @@ import { chmodSync, chownSync, existsSync, mkdirSync, mkdtempSync, readdirSync, 
 import { tmpdir } from "node:os";
 import { dirname, join, relative } from "node:path";
 import { fileURLToPath } from "node:url";
-import { assertPortFree, capture, run, runStatus, step } from "./proc.mjs";
+import { assertPortFree, capture, run, runAsync, runStatus, step } from "./proc.mjs";
 
 export const ROOT = join(dirname(fileURLToPath(import.meta.url)), "..", "..");
 export const PG_BIN = process.env.PG_BIN ?? "/usr/lib/postgresql/15/bin";
@@ -51,7 +51,7 @@ export function ensureNodeModules() {
 
 // ---------------------------------------------------------------- Debian packages
 
-function aptInstall(pkg) {
+export function aptInstall(pkg) {
   if (!isRoot) {
     throw new Error(`${pkg} is missing. Install it with: sudo apt-get install -y ${pkg}`);
   }
@@ -182,6 +182,16 @@ export async function startCluster({ dir, port, forTests = false }) {
 export function stopCluster(dir) {
   if (!clusterRunning(dir)) return;
   pgRun("pg_ctl", ["stop", "-D", dir, "-m", "fast", "-w", "-t", "60", "-s"]);
+}
+
+/**
+ * `pg_ctl restart -m fast`: every connection is cut, as in a failover or a crash-restart.
+ * Asynchronous, so a benchmark in this process keeps sending requests meanwhile.
+ */
+export async function restartCluster(dir) {
+  const { file, argv, options } = pg("pg_ctl", ["restart", "-D", dir, "-m", "fast", "-l", join(dir, "server.log"), "-w", "-t", "60", "-s"]);
+  const code = await runAsync(file, argv, options);
+  if (code !== 0) throw new Error(`pg_ctl restart exited with ${code}`);
 }
 
 export function databaseUrl(port, database) {

@@ -18,10 +18,12 @@ const logger = new Logger(() => (level, message) => {
 });
 
 /**
- * Starts the job worker inside this app instance (once per process). Every instance runs one;
- * PostgreSQL hands each job to exactly one of them. Failed jobs are retried with backoff.
+ * Starts the job worker in this process, once: inside an app instance (instrumentation.ts, unless
+ * JOBS_WORKER=off) or as a process of its own (`npm run worker`, scripts/worker.ts). PostgreSQL
+ * hands each job to exactly one worker, however many run. Failed jobs are retried with backoff.
+ * With `retry` (the default) a worker that cannot reach the database tries again every 10 s.
  */
-export function startJobWorker(): Promise<Runner> {
+export function startJobWorker({ retry = true }: { retry?: boolean } = {}): Promise<Runner> {
   holder.__filmsheetWorker ??= (async () => {
     await ensureJobSchema();
     const runner = await run({
@@ -48,9 +50,10 @@ export function startJobWorker(): Promise<Runner> {
     holder.__filmsheetStopWorker = () => runner.stop();
     return runner;
   })().catch((error: unknown) => {
+    holder.__filmsheetWorker = undefined;
+    if (!retry) throw error;
     // The database may not be up yet: try again shortly rather than run without a worker.
     console.warn(`[jobs] worker did not start (${error instanceof Error ? error.message : String(error)}); retrying in 10 s`);
-    holder.__filmsheetWorker = undefined;
     setTimeout(() => void startJobWorker().catch(() => {}), 10_000).unref();
     throw error;
   });
