@@ -6,6 +6,7 @@ import { join } from "node:path";
 import { DB_USER, ROOT, clusterDir, databaseUrl, ensureBuild, ensureDatabase, ensureNodeModules, ensurePostgres, knex, startCluster, stopCluster } from "./lib/bootstrap.mjs";
 import { assertPortFree, step, stopService } from "./lib/proc.mjs";
 import { ensureNginx, startBalancer } from "./lib/balancer.mjs";
+import { startPgbouncer } from "./lib/pgbouncer.mjs";
 import {
   DEFAULT_DEMO_PASSWORD,
   DEMO_ACCOUNTS,
@@ -30,6 +31,9 @@ const ports = {
 };
 
 const instances = instancesFromArgs();
+// `--pgbouncer` (or PGBOUNCER=1): the web instances query through PgBouncer in transaction mode.
+const pgbouncer = process.argv.includes("--pgbouncer") || process.env.PGBOUNCER === "1";
+const pgbouncerPort = portFromEnv("PGBOUNCER_PORT", 54331);
 const appPorts = instancePorts(ports.app, instances);
 
 const services = [];
@@ -52,6 +56,7 @@ async function main() {
   ensureNodeModules();
   // Ports first: a second `npm start` must fail here, before it touches the running cluster.
   const appSlots = [[ports.app, instances > 1 ? "balancer" : "app"], ...(instances > 1 ? appPorts.map((p, i) => [p, `app instance ${i + 1}`]) : [])];
+  if (pgbouncer) appSlots.push([pgbouncerPort, "PgBouncer; set PGBOUNCER_PORT"]);
   for (const [port, what] of [...appSlots, [ports.smtp, "SMTP"], [ports.mailWeb, "mail web"], [ports.stripe, "Stripe stand-in"]]) {
     await assertPortFree(port, what);
   }
@@ -90,8 +95,16 @@ async function main() {
     STRIPE_API_URL: `http://127.0.0.1:${ports.stripe}`,
     STRIPE_WEBHOOK_SECRET: process.env.STRIPE_WEBHOOK_SECRET ?? LOCAL_WEBHOOK_SECRET,
   };
+  const webEnv = { ...appEnv, JOBS_WORKER: "off" };
+  if (pgbouncer) {
+    if (!cluster) throw new Error("--pgbouncer runs in front of the private cluster; with your own DATABASE_URL, run your own pooler and set DATABASE_POOL_URL");
+    const bouncer = startPgbouncer({ port: pgbouncerPort, pgPort: ports.pg, dir: clusterDir("pgbouncer") });
+    services.push(bouncer.service);
+    await bouncer.ready();
+    webEnv.DATABASE_POOL_URL = bouncer.url("filmsheet");
+  }
   // Web instances only queue jobs; the worker process runs them (report builds, e-mail).
-  const apps = appPorts.map((port, i) => startApp(port, { ...appEnv, JOBS_WORKER: "off" }, { name: instances > 1 ? `next ${i + 1}` : "next" }));
+  const apps = appPorts.map((port, i) => startApp(port, webEnv, { name: instances > 1 ? `next ${i + 1}` : "next" }));
   const worker = startWorker(appEnv);
   services.push(...apps.map((a) => a.service), worker.service);
   await Promise.all(apps.map((a) => a.ready()));
@@ -111,7 +124,7 @@ Filmsheet is running.
   Health           http://127.0.0.1:${ports.app}/api/health
   Mail inbox       http://127.0.0.1:${ports.mailWeb}   (SMTP 127.0.0.1:${ports.smtp})
   Stripe stand-in  http://127.0.0.1:${ports.stripe}   (test Checkout and portal pages; webhooks to the app)
-  PostgreSQL       ${url.replace(/:[^:@/]+@/, ":***@")}${process.env.DATABASE_URL ? "" : `  (private cluster, user ${DB_USER})`}
+  PostgreSQL       ${url.replace(/:[^:@/]+@/, ":***@")}${process.env.DATABASE_URL ? "" : `  (private cluster, user ${DB_USER})`}${pgbouncer ? `\n  PgBouncer        127.0.0.1:${pgbouncerPort}  (transaction mode; the web instances' queries)` : ""}
 
 Demo sign-in (password: ${password})
 ${DEMO_ACCOUNTS.map(([email, role]) => `  ${email.padEnd(width)}  ${role}`).join("\n")}

@@ -13,3 +13,5 @@ export function ensureBuild(): void;
 export function aptInstall(pkg: string): void;
 export function clusterRunning(dir: string): boolean;
 export function restartCluster(dir: string): Promise<void>;
+export const DB_USER: string;
+export const DB_PASSWORD: string;

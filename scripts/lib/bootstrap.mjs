@@ -76,7 +76,7 @@ export function ensureChromium() {
 // ---------------------------------------------------------------- PostgreSQL cluster
 
 /** Runs a PostgreSQL binary as the postgres system user when we are root (initdb refuses root). */
-function pg(bin, args, options = {}) {
+export function pg(bin, args, options = {}) {
   const cmd = join(PG_BIN, bin);
   const [file, argv] = isRoot ? ["runuser", ["-u", "postgres", "--", cmd, ...args]] : [cmd, args];
   return { file, argv, options: { cwd: "/", ...options } };
@@ -110,7 +110,7 @@ export function clusterDir(name) {
   return join(fallback, name);
 }
 
-function giveToPostgres(path, mode) {
+export function giveToPostgres(path, mode) {
   if (isRoot) {
     const uid = Number(capture("id", ["-u", "postgres"]).stdout.trim());
     const gid = Number(capture("id", ["-g", "postgres"]).stdout.trim());

@@ -125,6 +125,10 @@ export function route<TBody = undefined, TQuery = Record<string, string | string
       if (error instanceof z.ZodError) return invalid(error, "input", invalidStatus);
       // Handled by the caller below: a read is tried once more, anything else is refused (503).
       if (isConnectionError(error)) throw new LostConnection(error);
+      // Stripe (or its stand-in) not answering is an outage of theirs, not a fault of ours.
+      if ((error as { type?: unknown } | null)?.type === "StripeConnectionError") {
+        return errorResponse(new AppError("unavailable", "Stripe, which takes our payments, cannot be reached just now. Nothing was changed; try again in a few minutes."));
+      }
       console.error(`${req.method} ${new URL(req.url).pathname} failed:`, error);
       return errorResponse(new AppError("internal", "Something went wrong on our side"));
     }

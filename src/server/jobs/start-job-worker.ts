@@ -5,6 +5,7 @@ import { env } from "@/server/env";
 import { ZEmailMessage } from "@/server/email/message";
 import { sendEmail } from "@/server/email/send-email";
 import { BUILD_REPORT_TASK } from "@/server/reports/report-builds";
+import { recoverStalledBuilds, stallSeconds } from "@/server/reports/recover-stalled-builds";
 import { runReportBuild } from "@/server/reports/run-report-build";
 import { ensureJobSchema } from "./job-schema";
 
@@ -47,7 +48,13 @@ export function startJobWorker({ retry = true }: { retry?: boolean } = {}): Prom
       },
       crontab: "17 * * * * prune_sign_in_attempts\n23 * * * * prune_draft_reports",
     });
-    holder.__filmsheetStopWorker = () => runner.stop();
+    // Report builds whose worker died are restarted by whichever worker notices first.
+    const watch = setInterval(() => void recoverStalledBuilds().catch(() => {}), (stallSeconds() * 1000) / 2);
+    watch.unref();
+    holder.__filmsheetStopWorker = () => {
+      clearInterval(watch);
+      return runner.stop();
+    };
     return runner;
   })().catch((error: unknown) => {
     holder.__filmsheetWorker = undefined;
