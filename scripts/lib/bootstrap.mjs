@@ -246,6 +246,11 @@ function hashInputs() {
 
 /** Runs `next build` unless the last build was made from exactly the same sources. */
 export function ensureBuild() {
+  // SKIP_BUILD=1: serve the .next that is there (e.g. one made by hand with `npx next build`).
+  if (process.env.SKIP_BUILD === "1" && existsSync(join(ROOT, ".next", "BUILD_ID"))) {
+    console.log("SKIP_BUILD=1: serving the existing build (.next) as it is");
+    return;
+  }
   const hash = hashInputs();
   if (existsSync(join(ROOT, ".next", "BUILD_ID")) && existsSync(STAMP) && readFileSync(STAMP, "utf8") === hash) {
     console.log("App build is up to date (.next)");
