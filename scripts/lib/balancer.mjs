@@ -39,6 +39,9 @@ http {
   upstream filmsheet {
 ${upstreams.map((p) => `    server 127.0.0.1:${p} max_fails=2 fail_timeout=5s;`).join("\n")}
     keepalive 64;
+    # Below Node's own 5 s keep-alive: nginx must never reuse a connection the app is closing
+    # (a write sent on it could not be retried and would come back 502).
+    keepalive_timeout 4s;
   }
   server {
     listen 127.0.0.1:${port};

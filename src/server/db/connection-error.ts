@@ -14,6 +14,8 @@ const MESSAGES = /Connection terminated|connection timeout|Timeout acquiring a c
  * either committed before the loss or was rolled back with its transaction.
  */
 export function isConnectionError(error: unknown): boolean {
+  // The HTTP client went away ("aborted", ECONNRESET on the request): not the database.
+  if ((error as { message?: unknown } | null)?.message === "aborted") return false;
   for (let e: unknown = error, depth = 0; e && typeof e === "object" && depth < 5; e = (e as { cause?: unknown }).cause, depth++) {
     const { code, message, name } = e as { code?: unknown; message?: unknown; name?: unknown };
     if (typeof code === "string" && (SQLSTATE.test(code) || NODE_CODES.has(code))) return true;
