@@ -10,6 +10,7 @@
 // It prints figures; it asserts nothing.
 import autocannon from "autocannon";
 import { createHash, randomBytes } from "node:crypto";
+import { readFileSync, readdirSync } from "node:fs";
 import { cpus, loadavg } from "node:os";
 import knexFactory, { type Knex } from "knex";
 import { clusterDir, databaseUrl, ensureBuild, ensureDatabase, ensureNodeModules, ensurePostgres, knex, restartCluster, startCluster, stopCluster } from "../scripts/lib/bootstrap.mjs";
@@ -22,10 +23,27 @@ const CLIENTS = Number(process.env.LOAD_CLIENTS ?? 50);
 const SECONDS = Number(process.env.LOAD_SECONDS ?? 60);
 const RESTART_AT = Number(process.env.LOAD_RESTART_AT ?? 20);
 const UPDATE_SECONDS = Number(process.env.LOAD_UPDATE_SECONDS ?? 20);
-const ROWS = Math.max(CLIENTS, 20);
+// Three rows per client: a client that autocannon reconnects gets a fresh context, and so a row of its own.
+const ROWS = Math.max(CLIENTS, 20) * 3;
 
 /** A row one client updates: the version to send next, and what happened to its writes. */
 type Row = { id: string; version: number; next: number; acked: number; inflight: boolean };
+
+/** CPU seconds used so far by the processes of these process groups (from /proc). */
+function groupsCpuSeconds(groups: number[]): number {
+  let ticks = 0;
+  for (const pid of readdirSync("/proc").filter((d) => /^\d+$/.test(d))) {
+    try {
+      const stat = readFileSync(`/proc/${pid}/stat`, "utf8");
+      const f = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+      if (groups.includes(Number(f[2]))) ticks += Number(f[11]) + Number(f[12]);
+    } catch {
+      // the process ended while we looked
+    }
+  }
+  return ticks / 100; // USER_HZ is 100 on Linux
+}
+let appGroups: number[] = [];
 
 const quantile = (xs: number[], q: number) => {
   const s = [...xs].sort((a, b) => a - b);
@@ -48,6 +66,7 @@ async function main() {
   try {
     const { project, rows, token } = await arrange(db);
     const headers = { authorization: `Bearer ${token}` };
+    appGroups = deployment.instanceGroups;
     console.log(`\nload benchmark, node ${process.version}: ${INSTANCES} instances + worker behind nginx (${deployment.balancer}), PostgreSQL 15 on :${PG_PORT}`);
     console.log(`machine: ${cpus().length} cores, load ${loadavg().map((l) => l.toFixed(1)).join(" ")} (shared: other work inflates latency)`);
 
@@ -83,13 +102,15 @@ async function arrange(db: Knex) {
   return { project, rows, token };
 }
 
-function report(title: string, latencies: number[], statuses: Map<number, number>, seconds: number) {
+function report(title: string, latencies: number[], statuses: Map<number, number>, seconds: number, cpuSeconds: number) {
   const non2xx = [...statuses].filter(([s]) => s < 200 || s > 299);
   console.log(title);
   console.log(
     `  ${latencies.length} requests, ${(latencies.length / seconds).toFixed(0)}/s; p50 ${quantile(latencies, 0.5).toFixed(0)} ms, p95 ${quantile(latencies, 0.95).toFixed(0)} ms, p99 ${quantile(latencies, 0.99).toFixed(0)} ms; ` +
       `non-2xx ${non2xx.reduce((n, [, c]) => n + c, 0)}${non2xx.length ? ` (${non2xx.map(([s, c]) => `${s}: ${c}`).join(", ")})` : ""}`,
   );
+  // CPU per request is what other work on a shared machine does not inflate.
+  console.log(`  app CPU ${((cpuSeconds * 1000) / Math.max(1, latencies.length)).toFixed(1)} ms per request (web instances); machine load ${loadavg()[0]!.toFixed(1)}`);
 }
 
 /**
@@ -169,10 +190,11 @@ async function mixed(title: string, base: string, headers: Record<string, string
     latencies.push(ms);
     statuses.set(status, (statuses.get(status) ?? 0) + 1);
   });
+  const cpu0 = groupsCpuSeconds(appGroups);
   const faulted = fault ? new Promise<void>((resolve, reject) => setTimeout(() => fault().then(resolve, reject), RESTART_AT * 1000)) : undefined;
   await instance;
   await faulted;
-  report(`${title}: ${CLIENTS} clients, ${SECONDS} s (GET row, PATCH row, GET zones, GET project)`, latencies, statuses, SECONDS);
+  report(`${title}: ${CLIENTS} clients, ${SECONDS} s (GET row, PATCH row, GET zones, GET project)`, latencies, statuses, SECONDS, groupsCpuSeconds(appGroups) - cpu0);
   await checkWrites(db, rows, refused);
 }
 
@@ -197,8 +219,9 @@ async function updatesOnly(base: string, headers: Record<string, string>, projec
     latencies.push(ms);
     statuses.set(status, (statuses.get(status) ?? 0) + 1);
   });
+  const cpu0 = groupsCpuSeconds(appGroups);
   await instance;
-  report(`single-row updates: 20 clients, ${UPDATE_SECONDS} s (goal p95 ≤ 50 ms)`, latencies, statuses, UPDATE_SECONDS);
+  report(`single-row updates: 20 clients, ${UPDATE_SECONDS} s (goal p95 ≤ 50 ms)`, latencies, statuses, UPDATE_SECONDS, groupsCpuSeconds(appGroups) - cpu0);
   await checkWrites(db, rows, refused);
 }
 

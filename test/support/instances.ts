@@ -27,6 +27,8 @@ export function nginxMissing(): string | undefined {
 export interface Deployment {
   balancer: string;
   instances: string[];
+  /** Process-group ids of the web instances (each `next start` and its children). */
+  instanceGroups: number[];
   worker: Service;
   /** Stops the worker alone (e.g. to kill it in the middle of a job); `signal` defaults to SIGKILL. */
   killWorker: (signal?: NodeJS.Signals) => Promise<void>;
@@ -64,6 +66,7 @@ export async function startDeployment(count: number, env: Record<string, string>
   return {
     balancer: `http://127.0.0.1:${front}`,
     instances: ports.map((p) => `http://127.0.0.1:${p}`),
+    instanceGroups: apps.map((a) => a.service.child.pid!),
     get worker() {
       return current as Service;
     },
