@@ -35,6 +35,9 @@ unix_socket_dir =
 auth_type = scram-sha-256
 auth_file = ${users}
 pool_mode = transaction
+; SHOW POOLS / SHOW STATS on the "pgbouncer" database (the tests read them)
+admin_users = ${DB_USER}
+stats_period = 2
 default_pool_size = ${poolSize}
 max_client_conn = 1000
 server_reset_query =
