@@ -38,6 +38,9 @@ pool_mode = transaction
 ; SHOW POOLS / SHOW STATS on the "pgbouncer" database (the tests read them)
 admin_users = ${DB_USER}
 stats_period = 2
+log_stats = 0
+log_connections = 0
+log_disconnections = 0
 default_pool_size = ${poolSize}
 max_client_conn = 1000
 server_reset_query =
@@ -47,8 +50,8 @@ pidfile = ${join(dir, "pgbouncer.pid")}
 `,
   );
   for (const f of [ini, users]) giveToPostgres(f, 0o600);
-  // PgBouncer refuses to run as root.
-  const [cmd, args] = isRoot ? ["runuser", ["-u", "postgres", "--", PGBOUNCER, ini]] : [PGBOUNCER, [ini]];
+  // PgBouncer refuses to run as root. -q: its log goes to the file only.
+  const [cmd, args] = isRoot ? ["runuser", ["-u", "postgres", "--", PGBOUNCER, "-q", ini]] : [PGBOUNCER, ["-q", ini]];
   const service = startService("pgbouncer", cmd, args, { cwd: "/" });
   const ready = async () => {
     const { connect } = await import("node:net");

@@ -1,6 +1,7 @@
 // The web instances behind PgBouncer in transaction mode (DATABASE_POOL_URL), the worker on its
 // direct connection: sign-in, reads, a versioned write and a report through the queue all work,
 // and PgBouncer's own statistics show the app's transactions went through it.
+import { rmSync } from "node:fs";
 import request from "supertest";
 import pg from "pg";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
@@ -24,6 +25,7 @@ if (missing) console.warn(`PgBouncer test skipped: ${missing}`);
 const direct = new URL(process.env.DATABASE_URL ?? "postgres://x@127.0.0.1:1/x");
 let bouncer: ReturnType<typeof startPgbouncer> | undefined;
 let bouncerPort: number;
+const dir = clusterDir(`pgbouncer-test-${process.pid}`);
 let d: Deployment;
 
 /** PgBouncer's transaction count for the test database, from its admin console. */
@@ -41,7 +43,7 @@ async function bouncedTransactions(): Promise<number> {
 beforeAll(async () => {
   if (missing) return;
   bouncerPort = await freeTcpPort();
-  bouncer = startPgbouncer({ port: bouncerPort, pgPort: Number(direct.port), dir: clusterDir(`pgbouncer-test-${process.pid}`), poolSize: 5 });
+  bouncer = startPgbouncer({ port: bouncerPort, pgPort: Number(direct.port), dir, poolSize: 5 });
   await bouncer.ready();
   d = await startDeployment(1, {
     DATABASE_URL: process.env.DATABASE_URL!,
@@ -53,6 +55,7 @@ beforeAll(async () => {
 afterAll(async () => {
   await d?.stop();
   if (bouncer) await stopService(bouncer.service);
+  rmSync(dir, { recursive: true, force: true });
   await closeTestDb();
 });
 

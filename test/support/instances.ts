@@ -1,5 +1,6 @@
 // Several app instances as separate processes (`next start` of the production build), a job
 // worker process and the nginx balancer in front: the deployment of docs/scaling.md, on loopback.
+import { rmSync } from "node:fs";
 import { createServer } from "node:net";
 import { startBalancer, ensureNginx } from "../../scripts/lib/balancer.mjs";
 import { stopService, type Service } from "../../scripts/lib/proc.mjs";
@@ -50,13 +51,16 @@ export async function startDeployment(count: number, env: Record<string, string>
   const apps = ports.map((port, i) => startApp(port, { ...appEnv, JOBS_WORKER: "off" }, { name: `next ${i + 1}` }));
   services.push(...apps.map((a) => a.service));
   let current = worker ? startWorker(appEnv).service : undefined;
+  let balancerDir: string | undefined;
   const stop = async () => {
     for (const s of [...services].reverse()) await stopService(s);
     if (current) await stopService(current);
+    if (balancerDir) rmSync(balancerDir, { recursive: true, force: true });
   };
   try {
     await Promise.all(apps.map((a) => a.ready()));
     const balancer = startBalancer(front, ports);
+    balancerDir = balancer.dir;
     services.push(balancer.service);
     await balancer.ready();
   } catch (error) {
