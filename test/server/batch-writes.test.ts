@@ -1,11 +1,12 @@
-// Many rows in one change are written set-based: a bulk update of 600 rows and a replace of a
-// 600-row sheet take a handful of statements, not one (or more) per row — counted on the real
+// Many rows in one change are written set-based: a bulk update of 600 rows, a checker accepting
+// them all and a replace of a 600-row sheet take a handful of statements, not one (or more) per row — counted on the real
 // PostgreSQL through Knex's query events — and the rows hold exactly what was sent.
 import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import type { Actor } from "@/server/auth/actor";
 import { db } from "@/server/db/knex";
 import { writeItems } from "@/server/schedule/write-items";
+import { acceptRows } from "@/server/services/accept-rows";
 import { grantPaidPlan } from "../support/billing";
 import { closeTestDb, testDb } from "../support/db";
 import { makeProject, SURFACE_VALUES, type FixtureProject } from "../support/schedule-fixtures";
@@ -58,6 +59,22 @@ describe("set-based writes", () => {
     const error = await db().transaction((trx) => writeItems(trx, actor, fx.projectId, changes)).catch((e: unknown) => e);
     expect(error).toMatchObject({ code: "conflict" });
     expect(await testDb()("surfaces").whereIn("id", ids.slice(0, 50)).where({ area_m2: 1 }).count({ n: "*" })).toEqual([{ n: "0" }]);
+  });
+
+  test(`a checker accepting ${N} rows takes a few statements, and each is accepted at its version`, async () => {
+    const checker = await testDb()("users").where({ email: "checker@demo.filmsheet.test" }).first("id", "name", "email");
+    const as: Actor = { ...actor, via: "session", userId: checker.id, name: checker.name, email: checker.email, roles: ["checker"] };
+    const rows = ids.map((id) => ({ sheet: "surfaces" as const, id, row_version: 2 }));
+    const { result, statements } = await counting(() => acceptRows(as, fx.projectId, { rows }));
+    expect(result).toEqual({ accepted: N });
+    expect(statements).toBeLessThan(20);
+    const checks = await testDb()("row_checks").where({ project_id: fx.projectId, sheet: "surfaces" }).whereIn("row_id", ids).select("state", "checked_by", "checked_row_version");
+    expect(checks).toHaveLength(N);
+    expect(checks.every((c) => c.state === "accepted" && c.checked_by === checker.id && c.checked_row_version === 2)).toBe(true);
+    // Accepting them again is refused, all of them named, none changed.
+    const again = await acceptRows(as, fx.projectId, { rows: rows.slice(0, 3) }).catch((e: unknown) => e);
+    expect(again).toMatchObject({ code: "conflict" });
+    expect((again as { details: unknown[] }).details).toHaveLength(3);
   });
 
   test(`deleting ${N} rows (what a replace-import does first) takes a few statements`, async () => {
