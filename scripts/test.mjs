@@ -23,6 +23,7 @@ import { startMailSink } from "./lib/mail-sink.mjs";
 import { assertPortFree, runAsync, step, stopService } from "./lib/proc.mjs";
 import { closingLine, countPlaywright, countVitest, readSuite, total } from "./lib/reports.mjs";
 import { ensureNginx } from "./lib/balancer.mjs";
+import { ensurePgbouncer } from "./lib/pgbouncer.mjs";
 import { DEFAULT_DEMO_PASSWORD, LOCAL_WEBHOOK_SECRET, authSecret, portFromEnv, startApp, startStripeStandIn, startWorker } from "./lib/services.mjs";
 
 process.env.NEXT_TELEMETRY_DISABLED = "1";
@@ -62,8 +63,10 @@ process.on("SIGTERM", () => finish({ passed: 0, failed: 1 }, ["terminated"]));
 async function bootstrap() {
   ensureNodeModules();
   ensureChromium();
-  // The two-instance integration test puts nginx in front of the app, as in production.
+  // The two-instance integration tests put nginx in front of the app, as in production, and one
+  // puts PgBouncer between the app and PostgreSQL.
   ensureNginx();
+  ensurePgbouncer();
   await assertPortFree(ports.app, "test app");
   await assertPortFree(ports.stripe, "test Stripe stand-in");
   let url = process.env.TEST_DATABASE_URL;
