@@ -22,7 +22,9 @@ import {
 import { startMailSink } from "./lib/mail-sink.mjs";
 import { assertPortFree, runAsync, step, stopService } from "./lib/proc.mjs";
 import { closingLine, countPlaywright, countVitest, readSuite, total } from "./lib/reports.mjs";
-import { DEFAULT_DEMO_PASSWORD, LOCAL_WEBHOOK_SECRET, authSecret, portFromEnv, startApp, startStripeStandIn } from "./lib/services.mjs";
+import { ensureNginx } from "./lib/balancer.mjs";
+import { ensurePgbouncer } from "./lib/pgbouncer.mjs";
+import { DEFAULT_DEMO_PASSWORD, LOCAL_WEBHOOK_SECRET, authSecret, portFromEnv, startApp, startStripeStandIn, startWorker } from "./lib/services.mjs";
 
 process.env.NEXT_TELEMETRY_DISABLED = "1";
 const ports = {
@@ -61,6 +63,10 @@ process.on("SIGTERM", () => finish({ passed: 0, failed: 1 }, ["terminated"]));
 async function bootstrap() {
   ensureNodeModules();
   ensureChromium();
+  // The two-instance integration tests put nginx in front of the app, as in production, and one
+  // puts PgBouncer between the app and PostgreSQL.
+  ensureNginx();
+  ensurePgbouncer();
   await assertPortFree(ports.app, "test app");
   await assertPortFree(ports.stripe, "test Stripe stand-in");
   let url = process.env.TEST_DATABASE_URL;
@@ -107,7 +113,7 @@ async function runPlaywright(dbEnv) {
   await stripe.ready();
   // The app's e-mail goes to a sink that writes each message into a folder the browser tests read.
   mailSink = await startMailSink(join(ROOT, ".data", "e2e-mail"));
-  const app = startApp(ports.app, {
+  const appEnv = {
     ...dbEnv,
     NODE_ENV: "production",
     APP_URL: `http://localhost:${ports.app}`,
@@ -115,8 +121,11 @@ async function runPlaywright(dbEnv) {
     AUTH_SECRET: authSecret(),
     STRIPE_API_URL: `http://127.0.0.1:${ports.stripe}`,
     STRIPE_WEBHOOK_SECRET: LOCAL_WEBHOOK_SECRET,
-  });
-  services.push(app.service);
+  };
+  // As `npm start` runs it: a web instance that only queues jobs, and a worker process that sends.
+  const app = startApp(ports.app, { ...appEnv, JOBS_WORKER: "off" });
+  const worker = startWorker(appEnv);
+  services.push(app.service, worker.service);
   await app.ready();
   const code = await runAsync(join(ROOT, "node_modules/.bin/playwright"), ["test", "--config", join(ROOT, "playwright.config.ts")], {
     cwd: ROOT,

@@ -10,3 +10,8 @@ export function databaseUrl(port: number, database: string): string;
 export function ensureDatabase(url: string, opts?: { fresh?: boolean }): Promise<void>;
 export function knex(args: string[], env: Record<string, string>): void;
 export function ensureBuild(): void;
+export function aptInstall(pkg: string): void;
+export function clusterRunning(dir: string): boolean;
+export function restartCluster(dir: string): Promise<void>;
+export const DB_USER: string;
+export const DB_PASSWORD: string;

@@ -65,10 +65,40 @@ export function startMaildev(smtpPort, webPort) {
 }
 
 /** `next start` on 127.0.0.1 with the given environment; ready when /api/health says ok. */
-export function startApp(port, env) {
-  const service = startService("next", join(ROOT, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(port)], {
+export function startApp(port, env, { name = "next" } = {}) {
+  const service = startService(name, join(ROOT, "node_modules/.bin/next"), ["start", "-H", "127.0.0.1", "-p", String(port)], {
     cwd: ROOT,
     env: baseEnv({ NODE_ENV: "production", PORT: String(port), ...env }),
   });
   return { service, ready: () => waitForHttp(`http://127.0.0.1:${port}/api/health`, { service, accept: (s) => s === 200, timeoutMs: 90000 }) };
+}
+
+/**
+ * The job worker as a process of its own (`npm run worker`: report builds, e-mail, prunes),
+ * with the app's environment. Ready once it says it is running.
+ */
+export function startWorker(env, { name = "worker" } = {}) {
+  const service = startService(name, process.execPath, ["--conditions=react-server", "--import", "tsx", join(ROOT, "scripts/worker.ts")], {
+    cwd: ROOT,
+    env: baseEnv({ NODE_ENV: "production", ...env, JOBS_WORKER: "on" }),
+  });
+  return { service };
+}
+
+/**
+ * Ports of the web instances: with one instance it listens on `port` itself; with more, the
+ * balancer takes `port` and the instances `port + 1` … `port + n`.
+ */
+export function instancePorts(port, count) {
+  return count <= 1 ? [port] : Array.from({ length: count }, (_, i) => port + 1 + i);
+}
+
+/** `--instances N` on the command line, else INSTANCES, else 1. */
+export function instancesFromArgs(argv = process.argv.slice(2)) {
+  const i = argv.indexOf("--instances");
+  const raw = i >= 0 ? argv[i + 1] : argv.find((a) => a.startsWith("--instances="))?.split("=")[1] ?? process.env.INSTANCES;
+  if (raw === undefined || raw === "") return 1;
+  const n = Number(raw);
+  if (!Number.isInteger(n) || n < 1 || n > 16) throw new Error(`--instances (or INSTANCES) must be a whole number from 1 to 16, got "${raw}"`);
+  return n;
 }

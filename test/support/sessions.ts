@@ -23,9 +23,10 @@ export interface SignInResult {
 
 /**
  * Signs in exactly as the browser form does: fetch the CSRF token, then post e-mail and password
- * to Auth.js's credentials callback. `address` is sent as X-Forwarded-For.
+ * to Auth.js's credentials callback. `address` is sent as X-Forwarded-For. `server` is an
+ * in-process server or the base URL of a running one.
  */
-export async function signInWithPassword(server: Server, email: string, password: string, address = "127.0.0.1"): Promise<SignInResult> {
+export async function signInWithPassword(server: Server | string, email: string, password: string, address = "127.0.0.1"): Promise<SignInResult> {
   const csrf = await request(server).get("/api/auth/csrf").set("x-forwarded-for", address);
   const jar = cookieHeader(csrf.headers["set-cookie"]);
   const res = await request(server)
@@ -46,7 +47,7 @@ export async function signInWithPassword(server: Server, email: string, password
 }
 
 /** Signs in and returns the Cookie header, failing the test if sign-in was refused. */
-export async function sessionCookie(server: Server, email: string, password: string): Promise<string> {
+export async function sessionCookie(server: Server | string, email: string, password: string): Promise<string> {
   const result = await signInWithPassword(server, email, password);
   if (!result.cookie) throw new Error(`Sign-in as ${email} failed: ${result.status} ${result.location}`);
   return result.cookie;

@@ -2,7 +2,7 @@ import "server-only";
 import PostgresAdapter from "@auth/pg-adapter";
 import type { Adapter, AdapterUser } from "next-auth/adapters";
 import pg from "pg";
-import { env } from "@/server/env";
+import { queryDatabaseUrl } from "@/server/env";
 
 const pools = ((globalThis as { __filmsheetAuthPools?: Map<string, pg.Pool> }).__filmsheetAuthPools ??= new Map());
 
@@ -16,7 +16,7 @@ function publicUser<T extends AdapterUser | null>(user: T): T {
 
 /** @auth/pg-adapter on its own small pool, with user rows cut down to their public columns. */
 export function filmsheetAdapter(): Adapter {
-  const url = env().DATABASE_URL;
+  const url = queryDatabaseUrl();
   let pool = pools.get(url);
   if (!pool) {
     pool = new pg.Pool({ connectionString: url, max: 3, connectionTimeoutMillis: 5000 });

@@ -1,14 +1,18 @@
 import "server-only";
 import knexFactory, { type Knex } from "knex";
-import { env } from "@/server/env";
+import { queryDatabaseUrl } from "@/server/env";
 
 // One pool per process (per URL, so tests can point a second app at another database);
 // kept on globalThis so module re-evaluation does not open new pools.
 const pools: Map<string, Knex> = ((globalThis as { __filmsheetPools?: Map<string, Knex> }).__filmsheetPools ??= new Map());
 
-/** The shared Knex instance for the configured DATABASE_URL. */
+/**
+ * The shared Knex instance for the configured database: DATABASE_POOL_URL (a transaction-mode
+ * pooler) when set, else DATABASE_URL. Nothing here relies on session state (no session SET, no
+ * LISTEN, no session advisory locks, no named prepared statements), so any pooler mode works.
+ */
 export function db(): Knex {
-  const url = env().DATABASE_URL;
+  const url = queryDatabaseUrl();
   let pool = pools.get(url);
   if (!pool) {
     pool = knexFactory({

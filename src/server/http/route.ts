@@ -4,6 +4,7 @@ import type { TRole } from "@/schemas/roles";
 import type { Actor } from "@/server/auth/actor";
 import { requireActor, type AuthMode } from "@/server/auth/require-actor";
 import { assertSameOrigin } from "@/server/auth/same-origin";
+import { isConnectionError, isNotConnectedError, waitForDatabase } from "@/server/db/connection-error";
 import { AppError } from "./app-error";
 import { readCappedBody } from "./read-bytes";
 import { internalMessage, logInternalError, requestIdOf } from "./internal-error";
@@ -84,7 +85,7 @@ export function route<TBody = undefined, TQuery = Record<string, string | string
 ): (req: Request, ctx?: { params?: Promise<Params> }) => Promise<Response> {
   const invalidStatus = options.invalidStatus ?? 422;
   const mode: AuthMode = options.auth ?? "required";
-  return async (req, ctx) => {
+  const attempt = async (req: Request, ctx?: { params?: Promise<Params> }): Promise<Response> => {
     try {
       // A bearer token is never sent by a browser on its own, so it needs no Origin check.
       if (mode === "public" || !req.headers.has("authorization")) assertSameOrigin(req);
@@ -105,6 +106,12 @@ export function route<TBody = undefined, TQuery = Record<string, string | string
     } catch (error) {
       if (error instanceof AppError) return errorResponse(error);
       if (error instanceof z.ZodError) return invalid(error, "input", invalidStatus);
+      // Handled by the caller below: a read is tried once more, anything else is refused (503).
+      if (isConnectionError(error)) throw new LostConnection(error);
+      // Stripe (or its stand-in) not answering is an outage of theirs, not a fault of ours.
+      if ((error as { type?: unknown } | null)?.type === "StripeConnectionError") {
+        return errorResponse(new AppError("unavailable", "Stripe, which takes our payments, cannot be reached just now. Nothing was changed; try again in a few minutes."));
+      }
       // The details go to the log under the request's id; the answer carries the id only.
       const id = logInternalError(`${req.method} ${new URL(req.url).pathname}`, error, requestIdOf(req.headers));
       const res = errorResponse(new AppError("internal", internalMessage(id), { requestId: id }));
@@ -112,4 +119,38 @@ export function route<TBody = undefined, TQuery = Record<string, string | string
       return res;
     }
   };
+  return async (req, ctx) => {
+    const safe = SAFE_METHODS.has(req.method);
+    // A write is tried again only when it never reached the database; keep its body for that.
+    const spare = safe ? undefined : req.clone();
+    try {
+      return await attempt(req, ctx);
+    } catch (first) {
+      if (!(first instanceof LostConnection)) throw first;
+      // A read that lost its database connection (PostgreSQL restarting, a failover) is run once
+      // more when the database answers again: nothing was changed, so repeating it is safe. So
+      // is a write that could not connect at all. A write whose connection went in the middle is
+      // not repeated: its transaction either committed or was rolled back with the connection.
+      const again = safe ? req : isNotConnectedError(first.cause) ? spare : undefined;
+      if (again && (await waitForDatabase(RETRY_WAIT_MS))) {
+        try {
+          return await attempt(again, ctx);
+        } catch (second) {
+          if (!(second instanceof LostConnection)) throw second;
+        }
+      }
+      console.warn(`${req.method} ${new URL(req.url).pathname}: database connection lost (${first.cause instanceof Error ? first.cause.message : String(first.cause)})`);
+      return errorResponse(new AppError("unavailable", "The database could not be reached just now. Try again in a moment."), 503);
+    }
+  };
+}
+
+const SAFE_METHODS = new Set(["GET", "HEAD"]);
+// Long enough for a fast restart of PostgreSQL (about 1–3 s here), short of a client's patience.
+const RETRY_WAIT_MS = 8000;
+
+class LostConnection extends Error {
+  constructor(readonly cause: unknown) {
+    super("database connection lost");
+  }
 }

@@ -4,6 +4,7 @@ import { db } from "@/server/db/knex";
 import { env } from "@/server/env";
 import { sendEmail } from "@/server/email/send-email";
 import { BUILD_REPORT_TASK } from "@/server/reports/report-builds";
+import { recoverStalledBuilds, stallSeconds } from "@/server/reports/recover-stalled-builds";
 import { runReportBuild } from "@/server/reports/run-report-build";
 import { openEmailJob } from "./enqueue-email";
 import { ensureJobSchema } from "./job-schema";
@@ -13,11 +14,13 @@ type Holder = { __filmsheetWorker?: Promise<Runner[]>; __filmsheetStopWorker?: (
 const holder = globalThis as Holder;
 
 /**
- * Starts the job workers inside this app instance (once per process): one for e-mail and the
- * housekeeping crons, one for report builds (see runner-options.ts). Every instance runs them;
- * PostgreSQL hands each job to exactly one worker. Failed jobs are retried with backoff.
+ * Starts the job workers in this process, once: inside an app instance (instrumentation.ts, unless
+ * JOBS_WORKER=off) or as a process of its own (`npm run worker`, scripts/worker.ts): one runner for
+ * e-mail and the housekeeping crons, one for report builds (see runner-options.ts). PostgreSQL
+ * hands each job to exactly one worker, however many run. Failed jobs are retried with backoff.
+ * With `retry` (the default) a worker that cannot reach the database tries again every 10 s.
  */
-export function startJobWorker(): Promise<Runner[]> {
+export function startJobWorker({ retry = true }: { retry?: boolean } = {}): Promise<Runner[]> {
   holder.__filmsheetWorker ??= (async () => {
     await ensureJobSchema();
     const options = jobRunnerOptions(
@@ -37,14 +40,19 @@ export function startJobWorker(): Promise<Runner[]> {
       "17 * * * * prune_sign_in_attempts\n23 * * * * prune_draft_reports",
     );
     const runners = await Promise.all(options.map((o) => run(o)));
+    // Report builds whose worker died are restarted by whichever worker notices first.
+    const watch = setInterval(() => void recoverStalledBuilds().catch(() => {}), (stallSeconds() * 1000) / 2);
+    watch.unref();
     holder.__filmsheetStopWorker = async () => {
+      clearInterval(watch);
       await Promise.all(runners.map((r) => r.stop()));
     };
     return runners;
   })().catch((error: unknown) => {
+    holder.__filmsheetWorker = undefined;
+    if (!retry) throw error;
     // The database may not be up yet: try again shortly rather than run without a worker.
     console.warn(`[jobs] worker did not start (${error instanceof Error ? error.message : String(error)}); retrying in 10 s`);
-    holder.__filmsheetWorker = undefined;
     setTimeout(() => void startJobWorker().catch(() => {}), 10_000).unref();
     throw error;
   });

@@ -7,6 +7,8 @@ import { draftReportSource } from "./report-inputs";
 import { assertReportSize, draftReportSize } from "./report-size";
 import { buildRevisionReport, REVISION_REPORT_COLUMNS } from "./revision-reports";
 
+const RESTARTED = "Restarted after its worker stopped · ";
+
 // Progress is written at most this often: enough for a smooth bar, few enough writes.
 const PROGRESS_EVERY_MS = 250;
 
@@ -19,9 +21,17 @@ export async function runReportBuild(buildId: string): Promise<void> {
   const q = db();
   const [build] = await q("report_builds")
     .where({ id: buildId, status: "queued" })
-    .update({ status: "running", stage: "Reading the schedule", started_at: q.fn.now(), updated_at: q.fn.now() })
-    .returning(["id", "firm_id", "project_id", "revision_id", "kind", "watermark", "requested_by_name"]);
+    // A build put back in the queue because its worker stopped (recover-stalled-builds.ts) says so
+    // on every stage until it is done, so the person following it sees why it started over.
+    .update({
+      status: "running",
+      stage: q.raw("CASE WHEN stage LIKE 'Restarting%' THEN ? ELSE 'Reading the schedule' END", [`${RESTARTED}Reading the schedule`]),
+      started_at: q.fn.now(),
+      updated_at: q.fn.now(),
+    })
+    .returning(["id", "firm_id", "project_id", "revision_id", "kind", "watermark", "requested_by_name", "stage"]);
   if (!build) return;
+  const prefix = String(build.stage).startsWith(RESTARTED) ? RESTARTED : "";
   try {
     const firm = await q("firms").where({ id: build.firm_id }).first("id", "name");
     let last = 0;
@@ -29,7 +39,7 @@ export async function runReportBuild(buildId: string): Promise<void> {
       const now = Date.now();
       if (now - last < PROGRESS_EVERY_MS || p.fraction >= 1) return;
       last = now;
-      await q("report_builds").where({ id: buildId }).update({ progress: Math.min(0.99, p.fraction), stage: p.stage, updated_at: q.fn.now() });
+      await q("report_builds").where({ id: buildId }).update({ progress: Math.min(0.99, p.fraction), stage: `${prefix}${p.stage}`, updated_at: q.fn.now() });
     };
     let done: { pages: number; pdf: Uint8Array; filename: string };
     if (build.kind === "revision") {

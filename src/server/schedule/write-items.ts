@@ -87,6 +87,39 @@ async function insertAll(trx: Knex.Transaction | Knex, actor: Actor, projectId: 
   return out;
 }
 
+// Sheets whose columns are all plain scalars, so jsonb_populate_recordset gives them their types.
+const SET_BASED: ReadonlySet<EntityName> = new Set<EntityName>(["surfaces", "duct_runs"]);
+
+/**
+ * Updates many rows of one sheet in one statement per 500 rows, each row guarded by the version
+ * it was read at: the new values travel as one JSON array that PostgreSQL turns into rows of the
+ * table's own type. A row that no longer has its version (changed meanwhile) refuses the whole
+ * change with 409, naming every such row with its current state.
+ */
+async function updateAll(trx: Knex.Transaction, actor: Actor, name: EntityName, updates: CheckedChange[]): Promise<Map<string, Record<string, unknown>>> {
+  const e = ENTITIES[name];
+  const out = new Map<string, Record<string, unknown>>();
+  const values = updates.map((u) => ({ ...columnsOf(u.parsed as Record<string, unknown>, name), id: u.id, version: u.current!.version }));
+  // Every update carries the whole merged row, so one column list serves them all.
+  const columns = [...new Set(values.flatMap((v) => Object.keys(v)))].filter((c) => c !== "id" && c !== "version");
+  const ident = (c: string) => `"${c.replaceAll('"', '""')}"`;
+  const returning = readColumns(e).map((c) => `t.${ident(c)}`).join(", ");
+  const sql = `UPDATE ${ident(e.table)} AS t SET (${[...columns.map(ident), "version", "updated_at"].join(", ")}) = (${[...columns.map((c) => `v.${ident(c)}`), "t.version + 1", "now()"].join(", ")})
+    FROM jsonb_populate_recordset(NULL::${ident(e.table)}, ?::jsonb) AS v
+    WHERE t.id = v.id AND t.version = v.version AND t.firm_id = ? RETURNING ${returning}`;
+  for (let i = 0; i < values.length; i += INSERT_CHUNK) {
+    const { rows } = await trx.raw(sql, [JSON.stringify(values.slice(i, i + INSERT_CHUNK)), actor.firm.id]);
+    for (const row of rows as Record<string, unknown>[]) out.set(row.id as string, row);
+  }
+  const stale = updates.filter((u) => !out.has(u.id as string));
+  if (stale.length) {
+    const now = await trx(e.table).whereIn("id", stale.map((u) => u.id as string)).where({ firm_id: actor.firm.id }).select(readColumns(e));
+    const byId = new Map(now.map((r: Record<string, unknown>) => [r.id as string, r]));
+    refuseConflicts(stale.map((u) => ({ row: u.row, sheet: u.entity, id: u.id as string, field: "version", message: `This ${e.noun} was changed by someone else meanwhile; nothing was saved`, current: byId.get(u.id as string) ?? null })));
+  }
+  return out;
+}
+
 /**
  * Applies creates, updates and deletes of one project's items in the caller's transaction, all
  * or nothing (a lone update of one row may be checked outside one; its write then opens its own):
@@ -141,7 +174,19 @@ async function writeChecked(trx: Knex.Transaction, actor: Actor, projectId: stri
     if (creates.some((c) => c.entity === "design_cases")) {
       await assertPlanAllows(trx, actor.firm.id, { designCases: async () => Number((await trx("design_cases").where({ project_id: projectId }).count({ n: "*" }))[0]!.n) });
     }
-    for (const u of checked.filter((c) => c.op === "update")) {
+    const updates = checked.filter((c) => c.op === "update");
+    // Many rows of a sheet (a bulk edit, a paste) are updated by one statement per sheet.
+    const setBased = updates.filter((u) => SET_BASED.has(u.entity) && updates.filter((o) => o.entity === u.entity).length > 1 && updates.filter((o) => o.id === u.id).length === 1);
+    for (const name of new Set(setBased.map((u) => u.entity))) {
+      const group = setBased.filter((u) => u.entity === name);
+      const rows = await updateAll(trx, actor, name, group);
+      for (const u of group) {
+        const after = rows.get(u.id as string)!;
+        result.updated.push({ sheet: u.entity, row: after });
+        noted.push({ entity: u.entity, op: "update", id: u.id as string, before: u.current ?? null, after });
+      }
+    }
+    for (const u of updates.filter((c) => !setBased.includes(c))) {
       const e = ENTITIES[u.entity];
       // Guarded by the version read: outside a transaction (a single-row edit) a write that
       // lands between the read and this update makes it match nothing, and the caller gets 409.

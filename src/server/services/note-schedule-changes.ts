@@ -32,6 +32,9 @@ async function projectRowIds(trx: Knex.Transaction, projectId: string, sheet: TC
  * surfaces of a changed build-up, the rows of a changed zone, every row for a design case or a
  * site change. A change that leaves every value as it was (a reorder, a no-op save) keeps checks.
  */
+// Ids per statement: far below PostgreSQL's 65,535 bind parameters.
+const ID_CHUNK = 10_000;
+
 export async function noteScheduleChanges(trx: Knex.Transaction, actor: Actor, projectId: string, changes: readonly ScheduleChange[]): Promise<void> {
   if (changes.length === 0) return;
   await recordAudit(trx, actor, changes.map((c) => ({ projectId, entity: c.entity, entityId: c.id, action: c.op, before: c.before ?? undefined, after: c.after ?? undefined })));
@@ -39,12 +42,13 @@ export async function noteScheduleChanges(trx: Knex.Transaction, actor: Actor, p
   const editor = await editorId(trx, actor);
   const direct: Record<TCheckSheet, string[]> = { surfaces: [], duct_runs: [] };
   const indirect: { sheet: TCheckSheet; where?: Record<string, string>; reason: string }[] = [];
+  const deleted: Record<TCheckSheet, string[]> = { surfaces: [], duct_runs: [] };
   for (const c of changes) {
     const changed = c.op !== "update" || fieldChanges(c.before ?? {}, c.after ?? {}).length > 0;
     if (!changed) continue;
     if (SHEETS.has(c.entity)) {
       const sheet = c.entity as TCheckSheet;
-      if (c.op === "delete") await trx("row_checks").where({ project_id: projectId, sheet, row_id: c.id }).delete();
+      if (c.op === "delete") deleted[sheet].push(c.id);
       else direct[sheet].push(c.id);
     } else if (c.entity === "buildups" && c.op === "update") {
       indirect.push({ sheet: "surfaces", where: { buildup_id: c.id }, reason: `build-up ${String(c.after?.name ?? c.id)} changed` });
@@ -59,6 +63,10 @@ export async function noteScheduleChanges(trx: Knex.Transaction, actor: Actor, p
     }
   }
   for (const sheet of ["surfaces", "duct_runs"] as const) {
+    // One statement per sheet, however many rows (a replace-import deletes a whole sheet).
+    for (let i = 0; i < deleted[sheet].length; i += ID_CHUNK) {
+      await trx("row_checks").where({ project_id: projectId, sheet }).whereIn("row_id", deleted[sheet].slice(i, i + ID_CHUNK)).delete();
+    }
     if (direct[sheet].length > 0) await resetChecks(trx, actor, projectId, sheet, direct[sheet], editor, `${sheet === "surfaces" ? "surface" : "duct run"} changed`);
   }
   for (const i of indirect) await resetChecks(trx, actor, projectId, i.sheet, await projectRowIds(trx, projectId, i.sheet, i.where), editor, i.reason);
