@@ -21,6 +21,9 @@ export type CellResult = { ok: true; value: unknown } | { ok: false; message: st
 // A plain decimal number, optionally signed, with an optional exponent; no thousands separators.
 const NUMBER = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
 
+const FLAG_TRUE = new Set(["yes", "y", "true", "1"]);
+const FLAG_FALSE = new Set(["no", "n", "false", "0"]);
+
 const isBlank = (raw: unknown) => raw === null || raw === undefined || (typeof raw === "string" && raw.trim() === "");
 
 function findNamed(list: readonly Named[], text: string): Named | undefined {
@@ -34,7 +37,7 @@ export function parseCell(col: SheetColumn, raw: unknown, units: ColumnUnits, lo
   const header = columnHeader(col, system);
   if (isBlank(raw)) {
     if (col.kind === "text") return { ok: true, value: "" };
-    return { ok: true, value: null };
+    return { ok: true, value: col.blankValue ?? null };
   }
   const text = typeof raw === "string" ? raw.trim() : String(raw);
   switch (col.kind) {
@@ -59,6 +62,14 @@ export function parseCell(col: SheetColumn, raw: unknown, units: ColumnUnits, lo
       if (found) return { ok: true, value: found.value };
       if (col.blankLabel && key === col.blankLabel.toLowerCase()) return { ok: true, value: null };
       return { ok: false, message: `${header} must be one of: ${col.options!.map((o) => o.label).join(", ")}` };
+    }
+    case "flag": {
+      // A spreadsheet's TRUE/FALSE cell arrives as a boolean; typed text in the usual spellings.
+      if (typeof raw === "boolean") return { ok: true, value: raw };
+      const key = text.toLowerCase();
+      if (FLAG_TRUE.has(key)) return { ok: true, value: true };
+      if (FLAG_FALSE.has(key)) return { ok: true, value: false };
+      return { ok: false, message: `${header} must be Yes or No` };
     }
   }
 }

@@ -89,12 +89,12 @@ describe("migrations round trip", () => {
     expect(roles).toContainEqual({ email: "admin@other.filmsheet.test", role: "admin", slug: "ostrander-mechanical" });
   });
 
-  test("the demo schedule: at least 3 zones, 40 surfaces on several orientations and heights, 8 duct runs, 3 design cases; a second run adds nothing", async () => {
+  test("the demo schedule: at least 3 zones, 40 surfaces on several orientations and heights, 9 duct runs, 4 design cases; a second run adds nothing", async () => {
     const n = async (table: string) => Number((await db(table).count({ n: "*" }))[0]!.n);
     const expected = { zones: DEMO_ZONES.length, surfaces: DEMO_SURFACE_COUNT, duct_runs: DEMO_DUCT_RUNS.length, design_cases: DEMO_CASES.length };
     expect(expected.zones).toBeGreaterThanOrEqual(3);
     expect(expected.surfaces).toBeGreaterThanOrEqual(40);
-    expect(expected).toMatchObject({ duct_runs: 8, design_cases: 3 });
+    expect(expected).toMatchObject({ duct_runs: 9, design_cases: 4 });
     const counts = async () => ({ zones: await n("zones"), surfaces: await n("surfaces"), duct_runs: await n("duct_runs"), design_cases: await n("design_cases") });
     expect(await counts()).toEqual(expected);
     const orientations = await db("surfaces").where({ tilt_deg: 90 }).distinct("azimuth_deg");
@@ -105,10 +105,16 @@ describe("migrations round trip", () => {
     expect(await db("duct_runs").where({ location: "indoor" }).whereNotNull("T_surround_C").count({ n: "*" })).not.toEqual([{ n: "0" }]);
     // Ceiling voids are warmer in summer: the seed's void runs carry a cooling surround above their
     // heating one, the roof runs leave both blank (the outdoor air).
-    const voids = await db("duct_runs").where({ location: "indoor" }).select("T_surround_C", "T_surround_cooling_C");
+    const voids = await db("duct_runs").where({ location: "indoor", in_served_zone: false }).select("T_surround_C", "T_surround_cooling_C");
     expect(voids.length).toBeGreaterThan(0);
     for (const v of voids) expect(v.T_surround_cooling_C).toBeGreaterThan(v.T_surround_C);
     expect(await db("duct_runs").where({ location: "outdoor" }).whereNotNull("T_surround_cooling_C").count({ n: "*" })).toEqual([{ n: "0" }]);
+    // The v2 inputs: clear and overcast skies, a surface over the ground, a run inside the zone it
+    // serves (its surrounds blank: it crosses that zone's air), roof runs with a jacket absorptance.
+    expect((await db("design_cases").orderBy("cloud_cover").pluck("cloud_cover")).map(Number)).toEqual([0, 0, 0.2, 0.8]);
+    expect(await db("surfaces").where({ exposed_to: "ground" }).pluck("label")).toEqual(["RR ground-floor slab"]);
+    expect(await db("duct_runs").where({ in_served_zone: true }).select("location", "T_surround_C", "T_surround_cooling_C")).toEqual([{ location: "indoor", T_surround_C: null, T_surround_cooling_C: null }]);
+    expect(await db("duct_runs").where({ location: "outdoor" }).whereNotNull("jacket_absorptance").count({ n: "*" })).not.toEqual([{ n: "0" }]);
     // Edits made during a demo survive the next start (rows are inserted only when missing).
     await db("zones").where({ name: "Reading room" }).update({ floor_area_m2: 999 });
     expect(cli(["seed:run"]).status).toBe(0);
@@ -164,6 +170,44 @@ describe("migrations round trip", () => {
     const up = cli(["migrate:latest"]);
     expect(up.status, up.output).toBe(0);
     expect(await column()).toEqual({ data_type: "double precision", is_nullable: "YES" });
+  });
+
+  test("the v2 inputs: typed columns with defaults for the rows already stored, refused out of range by the database, and an exact down()", async () => {
+    const cols = async () =>
+      db("information_schema.columns")
+        .where({ table_schema: "public" })
+        .whereIn(["table_name", "column_name"], [["design_cases", "cloud_cover"], ["surfaces", "exposed_to"], ["duct_runs", "in_served_zone"], ["duct_runs", "jacket_absorptance"]])
+        .orderBy(["table_name", "column_name"])
+        .select("table_name", "column_name", "data_type", "is_nullable", "column_default");
+    const expected = [
+      { table_name: "design_cases", column_name: "cloud_cover", data_type: "double precision", is_nullable: "NO", column_default: "'0'::double precision" },
+      { table_name: "duct_runs", column_name: "in_served_zone", data_type: "boolean", is_nullable: "NO", column_default: "false" },
+      { table_name: "duct_runs", column_name: "jacket_absorptance", data_type: "double precision", is_nullable: "YES", column_default: null },
+      { table_name: "surfaces", column_name: "exposed_to", data_type: "text", is_nullable: "NO", column_default: "'outside_air'::text" },
+    ];
+    expect(await cols()).toEqual(expected);
+    const dc = await db("design_cases").first("id");
+    const surface = await db("surfaces").first("id");
+    const duct = await db("duct_runs").first("id");
+    await expect(db("design_cases").where(dc).update({ cloud_cover: 1.01 })).rejects.toThrow(/design_cases_cloud_cover_fraction/);
+    await expect(db("design_cases").where(dc).update({ cloud_cover: -0.1 })).rejects.toThrow(/design_cases_cloud_cover_fraction/);
+    await expect(db("surfaces").where(surface).update({ exposed_to: "water" })).rejects.toThrow(/surfaces_exposed_to_known/);
+    await expect(db("duct_runs").where(duct).update({ jacket_absorptance: 1.5 })).rejects.toThrow(/duct_runs_jacket_absorptance_fraction/);
+    await expect(db("duct_runs").where(duct).update({ in_served_zone: null })).rejects.toThrow(/not-null|null value/);
+
+    const before = { surfaces: await db("surfaces").count({ n: "*" }), duct_runs: await db("duct_runs").count({ n: "*" }) };
+    const down = cli(["migrate:down", "20261213000000_engine_v2_inputs.ts"]);
+    expect(down.status, down.output).toBe(0);
+    expect(await cols()).toEqual([]);
+    const { rows: checks } = await db.raw<{ rows: unknown[] }>("select conname from pg_constraint where conname in ('design_cases_cloud_cover_fraction', 'surfaces_exposed_to_known', 'duct_runs_jacket_absorptance_fraction')");
+    expect(checks).toEqual([]);
+    expect({ surfaces: await db("surfaces").count({ n: "*" }), duct_runs: await db("duct_runs").count({ n: "*" }) }).toEqual(before);
+    // Up again on rows written without the columns: each takes its default.
+    const up = cli(["migrate:latest"]);
+    expect(up.status, up.output).toBe(0);
+    expect(await cols()).toEqual(expected);
+    expect(await db("surfaces").whereNot({ exposed_to: "outside_air" }).count({ n: "*" })).toEqual([{ n: "0" }]);
+    expect(await db("design_cases").whereNot({ cloud_cover: 0 }).count({ n: "*" })).toEqual([{ n: "0" }]);
   });
 
   test("migrate:rollback --all drops every table, migrate:latest brings them back", async () => {
