@@ -268,3 +268,38 @@ describe("import and export of the v2 inputs", () => {
     );
   });
 });
+
+describe("a revision issued before the v2 inputs existed", () => {
+  test("reads with the defaults their absence means, and compares with a later revision without phantom changes", async () => {
+    const { buildSnapshot } = await import("../../src/checking/build-snapshot");
+    const { loadSnapshotInputs } = await import("../../src/server/repositories/snapshot-inputs");
+    const p = await makeProject("tarnbrook-sill");
+    const inputs = (await loadSnapshotInputs(testDb(), p.firmId, p.projectId))!;
+    // Revision A as it was frozen before the migration: the same rows without the v2 keys.
+    const drop = <T extends object>(rows: T[], keys: string[]) => rows.map((r) => Object.fromEntries(Object.entries(r).filter(([k]) => !keys.includes(k))));
+    const old = {
+      ...inputs,
+      design_cases: drop(inputs.design_cases, ["cloud_cover"]),
+      surfaces: drop(inputs.surfaces, ["exposed_to"]),
+      duct_runs: drop(inputs.duct_runs, ["in_served_zone", "jacket_absorptance"]),
+    } as unknown as typeof inputs;
+    const a = buildSnapshot(old);
+    expect(JSON.stringify(a)).not.toMatch(/cloud_cover|exposed_to|in_served_zone|jacket_absorptance/);
+    const b = buildSnapshot(inputs);
+    await testDb()("revisions").insert([
+      { firm_id: p.firmId, project_id: p.projectId, sequence: 1, letter: "A", issued_by_name: "Test", note: "", snapshot: JSON.stringify(a) },
+      { firm_id: p.firmId, project_id: p.projectId, sequence: 2, letter: "B", issued_by_name: "Test", note: "", snapshot: JSON.stringify(b) },
+    ]);
+    const rev = await as("get", `/api/projects/${p.projectId}/revisions/A`);
+    expect(rev.status, rev.text).toBe(200);
+    expect(rev.body.snapshot.design_cases.map((d: { cloud_cover: number }) => d.cloud_cover)).toEqual([0, 0]);
+    expect(rev.body.snapshot.surfaces.map((s: { exposed_to: string }) => s.exposed_to)).toEqual(["outside_air", "outside_air", "outside_air"]);
+    expect(rev.body.snapshot.duct_runs.map((d: Record<string, unknown>) => [d.in_served_zone, d.jacket_absorptance])).toEqual([[false, null], [false, null]]);
+    // The stored revision itself is as it was issued.
+    expect(JSON.stringify((await testDb()("revisions").where({ project_id: p.projectId, letter: "A" }).first("snapshot")).snapshot)).not.toContain("cloud_cover");
+    const cmp = await as("get", `/api/projects/${p.projectId}/revisions/compare?from=A&to=B`);
+    expect(cmp.status, cmp.text).toBe(200);
+    expect(cmp.body.rows.changed.filter((r: { fields: unknown[] }) => r.fields.length > 0)).toEqual([]);
+    expect(cmp.body.settings).toEqual([]);
+  });
+});
