@@ -5,6 +5,8 @@ import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { DEFAULT_DEMO_PASSWORD, DEMO_USERS } from "../../db/seeds/01_demo_firms";
 import { DEMO_CASES, DEMO_DUCT_RUNS, DEMO_SURFACE_COUNT, DEMO_ZONES } from "../../db/seeds/02_demo_schedule";
 import { createScratchDatabase, dropScratchDatabase, knexCli } from "../support/database";
+import { resultsFor } from "../../src/schedule/engine-schedule";
+import type { TSchedule } from "../../src/schemas/schedule";
 
 const NAME = "filmsheet_test_migrations";
 const TABLES = [
@@ -120,6 +122,36 @@ describe("migrations round trip", () => {
     expect(cli(["seed:run"]).status).toBe(0);
     expect(await counts()).toEqual(expected);
     expect((await db("zones").where({ name: "Reading room" }).first()).floor_area_m2).toBe(999);
+  });
+
+  test("the demo shows what contract v2 flags, as the engine computes it", async () => {
+    const project = await db("projects").where({ reference: "TS-2417" }).first();
+    const of = (t: string) => db(t).where({ project_id: project.id });
+    const buildups = await of("buildups");
+    for (const b of buildups) b.layers = await db("buildup_layers").where({ buildup_id: b.id }).orderBy("position").select("material", "thickness_m", "k_W_mK");
+    const s = { project, design_cases: await of("design_cases"), zones: await of("zones"), buildups, surfaces: await of("surfaces").orderBy("position"), duct_runs: await of("duct_runs").orderBy("position") } as unknown as TSchedule;
+    const run = (name: string) => resultsFor(s, s.design_cases.find((d) => d.name === name)!);
+    const label = (id: string) => [...s.surfaces, ...s.duct_runs].find((r) => r.id === id)!.label;
+    const winter = run("Winter design day, windy");
+    const summer = run("Summer design day, sunny");
+    // Mould and condensation on the inside of the retained single pane in winter, nowhere else.
+    expect(winter.surfaces.filter((r) => r.inside?.mould_risk).map((r) => label(r.row_id))).toEqual(["EL retained spandrel"]);
+    // The slab over the ground is not computed in any case.
+    for (const r of [winter, summer]) expect(r.surfaces.filter((x) => !x.result.ok).map((x) => [label(x.row_id), (x.result as { error: { code: string } }).error.code])).toEqual([["RR ground-floor slab", "not_computed"]]);
+    // The sunlit flat roofs are method-sensitive in summer.
+    const roofs = summer.surfaces.filter((r) => /roof/.test(label(r.row_id)));
+    expect(roofs.length).toBeGreaterThan(0);
+    for (const r of roofs) expect(r.spread?.sensitive, label(r.row_id)).toBe(true);
+    // The spiral duct inside the reading room gives its heat to the room: reported on its own.
+    const rr = winter.zones.find((z) => z.name === "Reading room")!;
+    expect(rr.ducts_in_zone_W).toBeGreaterThan(0);
+    // Cloud warms the sky: the same roof run loses less heat under the overcast case's 0.8 than a
+    // clear sky would give it on that day.
+    const overcast = s.design_cases.find((d) => d.name === "Winter overcast day, mild")!;
+    const roofRun = s.duct_runs.find((d) => d.label === "AHU-1 supply, roof run to gallery drop")!.id;
+    const q = (dc: typeof overcast) => (resultsFor(s, dc).duct_runs.find((d) => d.row_id === roofRun)!.result as unknown as { Q_W: number }).Q_W;
+    expect(overcast.cloud_cover).toBe(0.8);
+    expect(q(overcast)).toBeGreaterThan(q({ ...overcast, cloud_cover: 0 }));
   });
 
   test("a surface cannot point at another project's zone, nor sit in another firm's project", async () => {
