@@ -1,6 +1,7 @@
 // The demo schedule of Tarnbrook & Sill's (invented) Larchfield Community Library extension: four
-// zones, seven build-ups, 42 surfaces on every side and at several heights, eight duct runs (on
-// the roof and in ceiling voids) and three design cases. Fixed ids derived from names make it
+// zones, nine build-ups, 44 surfaces on every side and at several heights (one over the ground),
+// nine duct runs (on the roof in the sun, in ceiling voids, one bare in the room it serves) and
+// four design cases (clear and overcast). Fixed ids derived from names make it
 // idempotent: rows already there (perhaps edited during a demo) are left as they are.
 import { createHash } from "node:crypto";
 import type { Knex } from "knex";
@@ -16,10 +17,14 @@ const SITE = { altitude_m: 212, terrain: "open", wind_law: "power", unit_system:
 
 const SOLAR_SUNNY = { N: 115, NE: 290, E: 470, SE: 445, S: 350, SW: 445, W: 470, NW: 290, horizontal: 850 };
 const SOLAR_STILL = { N: 100, NE: 105, E: 110, SE: 230, S: 370, SW: 520, W: 590, NW: 370, horizontal: 720 };
+// Clear skies (cloud cover 0) for the design days, the cautious choice; a hazy still afternoon; and
+// a mild, overcast winter day, when the cloud keeps the roofs and the ducts outdoors warmer.
 export const DEMO_CASES = [
-  { name: "Winter design day, windy", kind: "heating", T_outdoor_C: -5, RH_outdoor_pct: 90, V_met_m_s: 11, wind_from_deg: 240, solar_W_m2: {} },
-  { name: "Summer design day, sunny", kind: "cooling", T_outdoor_C: 28, RH_outdoor_pct: 45, V_met_m_s: 4, wind_from_deg: 200, solar_W_m2: SOLAR_SUNNY },
-  { name: "Still summer afternoon", kind: "cooling", T_outdoor_C: 29, RH_outdoor_pct: 50, V_met_m_s: 0.5, wind_from_deg: 90, solar_W_m2: SOLAR_STILL },
+  { name: "Winter design day, windy", kind: "heating", T_outdoor_C: -5, RH_outdoor_pct: 90, V_met_m_s: 11, wind_from_deg: 240, cloud_cover: 0, solar_W_m2: {} },
+  { name: "Summer design day, sunny", kind: "cooling", T_outdoor_C: 28, RH_outdoor_pct: 45, V_met_m_s: 4, wind_from_deg: 200, cloud_cover: 0, solar_W_m2: SOLAR_SUNNY },
+  { name: "Still summer afternoon", kind: "cooling", T_outdoor_C: 29, RH_outdoor_pct: 50, V_met_m_s: 0.5, wind_from_deg: 90, cloud_cover: 0.2, solar_W_m2: SOLAR_STILL },
+  // Named to sort after the winter design day, which the grid opens on (the first heating case).
+  { name: "Winter overcast day, mild", kind: "heating", T_outdoor_C: 7, RH_outdoor_pct: 92, V_met_m_s: 6, wind_from_deg: 220, cloud_cover: 0.8, solar_W_m2: {} },
 ];
 
 export const DEMO_ZONES = [
@@ -38,10 +43,14 @@ const BUILDUPS: { name: string; layers: L[]; R?: number; absorptance: number; em
   { name: "Curtain-wall spandrel panel", absorptance: 0.8, emissivity: 0.84, layers: [], R: 2.2 },
   { name: "Entrance door panel", absorptance: 0.45, emissivity: 0.85, layers: [], R: 0.9 },
   { name: "Ventilated soffit", absorptance: 0.3, emissivity: 0.9, layers: [["Cement particle board", 0.012, 0.35], ["Mineral wool", 0.15, 0.035], ["Plywood", 0.018, 0.13]] },
+  { name: "Ground-bearing floor slab", absorptance: 0.5, emissivity: 0.9, layers: [["Sand-cement screed", 0.065, 1.15], ["PIR floor board", 0.1, 0.022], ["Reinforced concrete slab", 0.15, 2.3]] },
+  // Where the extension meets the old lodge: a back-painted single pane kept as an opaque panel,
+  // with nothing behind it. Its inside face runs cold in winter (mould and condensation risk).
+  { name: "Retained single-glazed spandrel", absorptance: 0.7, emissivity: 0.84, layers: [["Back-painted float glass", 0.006, 1.0]] },
 ];
 
-// [label, zone, build-up, count, area m², tilt °, azimuth °, centroid height m, length along wind m, panel height m]
-type S = [string, string, string, number, number, number, number, number, number, number];
+// [label, zone, build-up, count, area m², tilt °, azimuth °, centroid height m, length along wind m, panel height m, outside of it]
+type S = [string, string, string, number, number, number, number, number, number, number, ("outside_air" | "ground")?];
 const SURFACE_GROUPS: S[] = [
   ["RR south wall", "Reading room", "Rainscreen timber-frame wall", 4, 14.4, 90, 180, 2, 6, 4],
   ["RR south spandrel", "Reading room", "Curtain-wall spandrel panel", 2, 4.8, 90, 180, 3.6, 4, 1.2],
@@ -62,22 +71,29 @@ const SURFACE_GROUPS: S[] = [
   ["EL south-east side panel", "Entrance lobby", "Rainscreen timber-frame wall", 1, 7.5, 90, 135, 1.6, 3, 3.2],
   ["EL soffit", "Entrance lobby", "Ventilated soffit", 1, 9, 180, 0, 3.2, 3, 1],
   ["EL roof", "Entrance lobby", "Warm-deck flat roof", 1, 30, 0, 0, 3.6, 6, 1.3],
+  ["EL retained spandrel", "Entrance lobby", "Retained single-glazed spandrel", 1, 2.4, 90, 45, 2.8, 2, 0.8],
+  // Over the ground: recorded with the fabric but not computed (ISO 13370), so out of the totals.
+  ["RR ground-floor slab", "Reading room", "Ground-bearing floor slab", 1, 210, 180, 0, 0, 15, 14, "ground"],
 ];
 
-const ROOF = { location: "outdoor", T_surround_C: null, T_surround_cooling_C: null, RH_surround_pct: null, insulation_k_W_mK: 0.035, jacket_emissivity: 0.1, margin_K: 1 } as const;
+// Roof runs in the sun, clad in bright aluminium (absorptance 0.25), but for the painted one below.
+const ROOF = { location: "outdoor", in_served_zone: false, T_surround_C: null, T_surround_cooling_C: null, RH_surround_pct: null, insulation_k_W_mK: 0.035, jacket_emissivity: 0.1, jacket_absorptance: 0.25, margin_K: 1 } as const;
 // Ceiling voids sit near the rooms in winter and warm up under the roof in summer (27–29 °C).
-const VOID = { location: "indoor", elevation_m: null, insulation_k_W_mK: 0.037, margin_K: 1 } as const;
+const VOID = { location: "indoor", in_served_zone: false, elevation_m: null, insulation_k_W_mK: 0.037, jacket_absorptance: null, margin_K: 1 } as const;
 const round = (d: number) => ({ shape: "round", diameter_m: d, width_m: null, height_m: null }) as const;
 const rect = (w: number, h: number) => ({ shape: "rect", diameter_m: null, width_m: w, height_m: h }) as const;
 export const DEMO_DUCT_RUNS = [
   { label: "AHU-1 supply, roof run to gallery drop", zone: "Study gallery", ...round(0.5), ...ROOF, length_m: 14, flow_m3_s: 1.1, T_entering_heating_C: 32, T_entering_cooling_C: 13, elevation_m: 8.6, insulation_thickness_m: 0.05 },
   { label: "AHU-1 supply, roof run to reading room", zone: "Reading room", ...rect(0.8, 0.4), ...ROOF, length_m: 22, flow_m3_s: 1.6, T_entering_heating_C: 32, T_entering_cooling_C: 13, elevation_m: 8.6, insulation_thickness_m: 0.05 },
   { label: "AHU-1 extract, roof run", zone: "Reading room", ...rect(0.7, 0.4), ...ROOF, length_m: 18, flow_m3_s: 1.4, T_entering_heating_C: 21, T_entering_cooling_C: 24, elevation_m: 8.6, insulation_thickness_m: 0.025 },
-  { label: "Community room supply, low-roof run", zone: "Community room", ...round(0.315), ...ROOF, length_m: 9, flow_m3_s: 0.45, T_entering_heating_C: 30, T_entering_cooling_C: 14, elevation_m: 4.6, insulation_thickness_m: 0.05, jacket_emissivity: 0.9 },
+  { label: "Community room supply, low-roof run", zone: "Community room", ...round(0.315), ...ROOF, length_m: 9, flow_m3_s: 0.45, T_entering_heating_C: 30, T_entering_cooling_C: 14, elevation_m: 4.6, insulation_thickness_m: 0.05, jacket_emissivity: 0.9, jacket_absorptance: null },
   { label: "Reading room supply, ceiling void", zone: "Reading room", ...rect(0.6, 0.3), ...VOID, length_m: 26, flow_m3_s: 1.2, T_entering_heating_C: 32, T_entering_cooling_C: 13, T_surround_C: 19, T_surround_cooling_C: 28, RH_surround_pct: null, insulation_thickness_m: 0.025, jacket_emissivity: 0.1 },
   { label: "Gallery supply, ceiling void", zone: "Study gallery", ...round(0.4), ...VOID, length_m: 16, flow_m3_s: 0.8, T_entering_heating_C: 32, T_entering_cooling_C: 13, T_surround_C: 20, T_surround_cooling_C: 28, RH_surround_pct: null, insulation_thickness_m: 0.025, jacket_emissivity: 0.1 },
   { label: "Lobby supply, void over entrance (bare)", zone: "Entrance lobby", ...round(0.25), ...VOID, length_m: 8, flow_m3_s: 0.2, T_entering_heating_C: 30, T_entering_cooling_C: 13, T_surround_C: 22, T_surround_cooling_C: 29, RH_surround_pct: 70, insulation_thickness_m: 0, jacket_emissivity: 0.3 },
   { label: "Community room supply, ceiling void", zone: "Community room", ...rect(0.4, 0.25), ...VOID, length_m: 12, flow_m3_s: 0.45, T_entering_heating_C: 30, T_entering_cooling_C: 14, T_surround_C: 20, T_surround_cooling_C: 27, RH_surround_pct: null, insulation_thickness_m: 0.025, jacket_emissivity: 0.9, margin_K: 0.5 },
+  // Spiral duct left bare in the reading room it supplies: its heat stays in the room, so the
+  // zone's totals leave it out and show it for reference.
+  { label: "Reading room supply, exposed spiral duct", zone: "Reading room", ...round(0.45), ...VOID, in_served_zone: true, length_m: 18, flow_m3_s: 0.6, T_entering_heating_C: 32, T_entering_cooling_C: 14, T_surround_C: null, T_surround_cooling_C: null, RH_surround_pct: null, insulation_thickness_m: 0, jacket_emissivity: 0.3 },
 ];
 
 export const DEMO_SURFACE_COUNT = SURFACE_GROUPS.reduce((n, g) => n + g[3], 0);
@@ -102,10 +118,10 @@ export async function seed(knex: Knex): Promise<void> {
     await ignore("buildup_layers", layers, ["buildup_id", "position"]);
 
     let position = 0;
-    const surfaces = SURFACE_GROUPS.flatMap(([label, zone, buildup, count, area_m2, tilt_deg, azimuth_deg, height_m, length_m, panel_height_m]) =>
+    const surfaces = SURFACE_GROUPS.flatMap(([label, zone, buildup, count, area_m2, tilt_deg, azimuth_deg, height_m, length_m, panel_height_m, exposed_to = "outside_air"]) =>
       Array.from({ length: count }, (_, i) => {
         const name = count > 1 ? `${label} ${i + 1}` : label;
-        return { ...own, id: id("surface", name), position: position++, label: name, zone_id: id("zone", zone), buildup_id: id("buildup", buildup), area_m2, tilt_deg, azimuth_deg, height_m, length_m, panel_height_m, method: null, absorptance: null, emissivity: null };
+        return { ...own, id: id("surface", name), position: position++, label: name, zone_id: id("zone", zone), buildup_id: id("buildup", buildup), area_m2, tilt_deg, azimuth_deg, height_m, length_m, panel_height_m, method: null, absorptance: null, emissivity: null, exposed_to };
       }),
     );
     await ignore("surfaces", surfaces);

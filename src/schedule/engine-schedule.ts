@@ -18,7 +18,7 @@ export function engineSchedule(s: Pick<TSchedule, "project" | "zones" | "buildup
 }
 
 export function engineDesignCase(dc: TDesignCase): DesignCase {
-  return { id: dc.id, name: dc.name, kind: dc.kind, T_outdoor_C: dc.T_outdoor_C, RH_outdoor_pct: dc.RH_outdoor_pct, V_met_m_s: dc.V_met_m_s, wind_from_deg: dc.wind_from_deg, solar_W_m2: dc.solar_W_m2 };
+  return { id: dc.id, name: dc.name, kind: dc.kind, T_outdoor_C: dc.T_outdoor_C, RH_outdoor_pct: dc.RH_outdoor_pct, V_met_m_s: dc.V_met_m_s, wind_from_deg: dc.wind_from_deg, solar_W_m2: dc.solar_W_m2, cloud_cover: dc.cloud_cover };
 }
 
 /** Every row's results and the zone totals of one design case. */

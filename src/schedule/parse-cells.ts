@@ -37,6 +37,9 @@ export function isPlainNumber(text: string): boolean {
   return NUMBER.test(text);
 }
 
+const FLAG_TRUE = new Set(["yes", "y", "true", "1"]);
+const FLAG_FALSE = new Set(["no", "n", "false", "0"]);
+
 const isBlank = (raw: unknown) => raw === null || raw === undefined || (typeof raw === "string" && raw.trim() === "");
 
 function findNamed(list: readonly Named[], text: string): Named | undefined {
@@ -50,7 +53,7 @@ export function parseCell(col: SheetColumn, raw: unknown, units: ColumnUnits, lo
   const header = columnHeader(col, system);
   if (isBlank(raw)) {
     if (col.kind === "text") return { ok: true, value: "" };
-    return { ok: true, value: null };
+    return { ok: true, value: col.blankValue ?? null };
   }
   const limit = col.kind === "number" ? MAX_NUMBER_CELL_CHARS : MAX_TEXT_CELL_CHARS;
   // Checked on the raw length, before trimming or matching, so a huge cell costs nothing more.
@@ -80,6 +83,14 @@ export function parseCell(col: SheetColumn, raw: unknown, units: ColumnUnits, lo
       if (found) return { ok: true, value: found.value };
       if (col.blankLabel && key === col.blankLabel.toLowerCase()) return { ok: true, value: null };
       return { ok: false, message: `${header} must be one of: ${col.options!.map((o) => o.label).join(", ")}` };
+    }
+    case "flag": {
+      // A spreadsheet's TRUE/FALSE cell arrives as a boolean; typed text in the usual spellings.
+      if (typeof raw === "boolean") return { ok: true, value: raw };
+      const key = text.toLowerCase();
+      if (FLAG_TRUE.has(key)) return { ok: true, value: true };
+      if (FLAG_FALSE.has(key)) return { ok: true, value: false };
+      return { ok: false, message: `${header} must be Yes or No` };
     }
   }
 }

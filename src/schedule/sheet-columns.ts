@@ -4,10 +4,14 @@
  */
 import {
   DUCT_RUN_NUMBERS,
+  EXPOSED_TO_LABEL,
+  EXPOSURE_OPTIONS,
+  IN_SERVED_ZONE_LABEL,
   LOCATION_OPTIONS,
   METHOD_OPTIONS,
   SHAPE_OPTIONS,
   SURFACE_NUMBERS,
+  YES_NO_OPTIONS,
   unitSuffix,
   type NumberSpec,
   type Option,
@@ -15,7 +19,8 @@ import {
 import type { TSheet } from "@/schemas/schedule";
 import { unitLabel, type UnitSystem } from "@/units/units";
 
-export type ColumnKind = "text" | "number" | "zone" | "buildup" | "choice";
+/** "flag": a yes/no input, stored as a boolean, written Yes/No (options are YES_NO_OPTIONS). */
+export type ColumnKind = "text" | "number" | "zone" | "buildup" | "choice" | "flag";
 
 export interface SheetColumn {
   field: string;
@@ -28,6 +33,11 @@ export interface SheetColumn {
   optional: boolean;
   /** What a blank choice means. */
   blankLabel?: string;
+  /**
+   * What a blank cell stores, for choices and flags that are never blank (v2 inputs): a file or
+   * a paste from before the column existed reads as the default rather than failing.
+   */
+  blankValue?: string | boolean;
 }
 
 const num = (field: string, spec: NumberSpec): SheetColumn => ({ field, title: spec.label, kind: "number", spec, optional: spec.blank !== undefined });
@@ -36,6 +46,7 @@ export const SURFACE_COLUMNS: readonly SheetColumn[] = [
   { field: "label", title: "Label", kind: "text", optional: false },
   { field: "zone_id", title: "Zone", kind: "zone", optional: false },
   { field: "buildup_id", title: "Build-up", kind: "buildup", optional: false },
+  { field: "exposed_to", title: EXPOSED_TO_LABEL, kind: "choice", options: EXPOSURE_OPTIONS, optional: true, blankValue: "outside_air" },
   ...(["area_m2", "tilt_deg", "azimuth_deg", "height_m", "length_m", "panel_height_m"] as const).map((f) => num(f, SURFACE_NUMBERS[f])),
   { field: "method", title: "Method", kind: "choice", options: METHOD_OPTIONS, optional: true, blankLabel: "Project default" },
   num("absorptance", SURFACE_NUMBERS.absorptance),
@@ -48,13 +59,17 @@ export const DUCT_RUN_COLUMNS: readonly SheetColumn[] = [
   { field: "shape", title: "Shape", kind: "choice", options: SHAPE_OPTIONS, optional: false },
   ...(["diameter_m", "width_m", "height_m", "length_m", "flow_m3_s", "T_entering_heating_C", "T_entering_cooling_C"] as const).map((f) => num(f, DUCT_RUN_NUMBERS[f])),
   { field: "location", title: "Location", kind: "choice", options: LOCATION_OPTIONS, optional: false },
-  ...(["T_surround_C", "T_surround_cooling_C", "RH_surround_pct", "elevation_m", "insulation_thickness_m", "insulation_k_W_mK", "jacket_emissivity", "margin_K"] as const).map((f) =>
-    num(f, DUCT_RUN_NUMBERS[f]),
-  ),
+  { field: "in_served_zone", title: IN_SERVED_ZONE_LABEL, kind: "flag", options: YES_NO_OPTIONS, optional: true, blankValue: false },
+  ...(
+    ["T_surround_C", "T_surround_cooling_C", "RH_surround_pct", "elevation_m", "insulation_thickness_m", "insulation_k_W_mK", "jacket_emissivity", "jacket_absorptance", "margin_K"] as const
+  ).map((f) => num(f, DUCT_RUN_NUMBERS[f])),
 ];
 
 export const SHEET_COLUMNS: Record<TSheet, readonly SheetColumn[]> = { surfaces: SURFACE_COLUMNS, duct_runs: DUCT_RUN_COLUMNS };
 export const SHEET_TITLES: Record<TSheet, string> = { surfaces: "Surfaces", duct_runs: "Duct runs" };
+
+/** A flag's stored value as written in cells and files ("Yes"/"No"). */
+export const flagLabel = (v: unknown) => (v === true ? "Yes" : "No");
 
 /** "Area (m²)", "Label", "Absorptance": the heading in a unit system. */
 export function columnHeader(col: SheetColumn, system: UnitSystem): string {

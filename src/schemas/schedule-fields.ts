@@ -4,6 +4,7 @@
  * importer all read these, so a field's rule and its message are written once. Bounds are in SI;
  * messages come out in the unit system the person works in.
  */
+import { DEFAULT_JACKET_ABSORPTANCE } from "@/calc/schedule/types";
 import { displayBound, unitLabel, type Quantity, type UnitSystem } from "@/units/units";
 
 export interface NumberSpec {
@@ -19,6 +20,8 @@ export interface NumberSpec {
   blank?: string;
   /** Decimals shown in the grid, per unit system. */
   digits: number;
+  /** A line under the field in forms, for inputs whose meaning is not plain from the label. */
+  hint?: string;
 }
 
 export const TERRAIN_OPTIONS = [
@@ -53,6 +56,17 @@ export const LOCATION_OPTIONS = [
   { value: "outdoor", label: "Outdoors" },
 ] as const;
 
+/** What lies outside a surface (v2): only outside air is computed; the ground needs ISO 13370. */
+export const EXPOSURE_OPTIONS = [
+  { value: "outside_air", label: "Outside air" },
+  { value: "ground", label: "Ground" },
+] as const;
+/** A yes/no input as it is written in the sheets, files and pastes; stored as a boolean. */
+export const YES_NO_OPTIONS = [
+  { value: "yes", label: "Yes" },
+  { value: "no", label: "No" },
+] as const;
+
 export type Option = { readonly value: string; readonly label: string };
 export const values = <T extends readonly Option[]>(o: T) => o.map((x) => x.value) as unknown as [T[number]["value"], ...T[number]["value"][]];
 export const labelOf = (o: readonly Option[], v: string | null | undefined) => o.find((x) => x.value === v)?.label ?? v ?? "";
@@ -70,6 +84,12 @@ export const DESIGN_CASE_NUMBERS = {
   RH_outdoor_pct: { ...RH, label: "Outdoor RH" },
   V_met_m_s: { label: "Wind at the met mast", quantity: "speed", min: 0, max: 60, digits: 1 },
   wind_from_deg: { label: "Wind from", quantity: "angle", min: 0, max: 360, digits: 0 },
+  cloud_cover: {
+    ...FRACTION,
+    digits: 1,
+    label: "Cloud cover",
+    hint: "0 clear sky … 1 overcast. Cloud warms the sky a surface radiates to; clear (0) is the cautious choice for heating and for condensation on ducts outdoors",
+  },
 } satisfies Record<string, NumberSpec>;
 
 export const SOLAR_SPEC: NumberSpec = { label: "Solar irradiance", quantity: "heat_flux", min: 0, max: 1400, digits: 0 };
@@ -91,6 +111,10 @@ export const LAYER_NUMBERS = {
   thickness_m: { label: "Thickness", quantity: "thickness", gt: 0, max: 2, digits: 1 },
   k_W_mK: { label: "Conductivity", quantity: "conductivity", gt: 0, max: 500, digits: 3 },
 } satisfies Record<string, NumberSpec>;
+
+/** Labels of the v2 inputs that are not numbers (the sheets, forms and messages share them). */
+export const EXPOSED_TO_LABEL = "Outside of surface";
+export const IN_SERVED_ZONE_LABEL = "Inside the zone it serves";
 
 export const SURFACE_NUMBERS = {
   area_m2: { label: "Area", quantity: "area", gt: 0, max: 1e5, digits: 2 },
@@ -120,6 +144,8 @@ export const DUCT_RUN_NUMBERS = {
   insulation_k_W_mK: { label: "Insulation conductivity", quantity: "conductivity", gt: 0, max: 5, digits: 3 },
   jacket_emissivity: { ...FRACTION, label: "Jacket emissivity" },
   margin_K: { label: "Condensation margin", quantity: "temperature_difference", min: 0, max: 20, digits: 1 },
+  // Sun on a run out of doors: bright aluminium ≈ 0.2, weathered or painted metal ≈ 0.6, black ≈ 0.9.
+  jacket_absorptance: { ...FRACTION, label: "Jacket solar absorptance", blank: String(DEFAULT_JACKET_ABSORPTANCE) },
 } satisfies Record<string, NumberSpec>;
 
 /** A unit suffix as written after a number ("" for fractions, no space before ° and %). */

@@ -11,6 +11,9 @@ import {
   CASE_KIND_OPTIONS,
   DESIGN_CASE_NUMBERS,
   DUCT_RUN_NUMBERS,
+  EXPOSED_TO_LABEL,
+  EXPOSURE_OPTIONS,
+  IN_SERVED_ZONE_LABEL,
   LAYER_NUMBERS,
   LOCATION_OPTIONS,
   METHOD_OPTIONS,
@@ -49,13 +52,30 @@ type Specs = Record<string, NumberSpec>;
 const numbers = <S extends Specs>(specs: S) =>
   Object.fromEntries(Object.entries(specs).map(([k, s]) => [k, zNumber(s)])) as { [K in keyof S]: S[K] extends { blank: string } ? z.ZodNullable<z.ZodNumber> : z.ZodNumber };
 
-/** Blanks for a create's left-out nullable fields: numbers with a blank meaning, and `extra` (e.g. method). */
-export function withBlanks(specs: Specs, input: Record<string, unknown>, extra: readonly string[] = []): Record<string, unknown> {
+/** A yes/no input; a string or a number is refused rather than read as truthy. */
+export const zFlag = (label: string) => z.boolean({ error: `${label} must be true or false` });
+
+/**
+ * Blanks for a create's left-out nullable fields: numbers with a blank meaning, and `extra` (e.g.
+ * method); then `defaults` for left-out fields that are never blank (the v2 inputs: a client or a
+ * file from before them still creates rows, as the database's column defaults would).
+ */
+export function withBlanks(specs: Specs, input: Record<string, unknown>, extra: readonly string[] = [], defaults: Record<string, unknown> = {}): Record<string, unknown> {
   const out: Record<string, unknown> = { ...input };
   for (const [k, s] of Object.entries(specs)) if (s.blank !== undefined && out[k] === undefined) out[k] = null;
   for (const k of extra) if (out[k] === undefined) out[k] = null;
+  for (const [k, v] of Object.entries(defaults)) if (out[k] === undefined) out[k] = v;
   return out;
 }
+
+/** What a create that leaves out a v2 input gets: the same values as the migration's column defaults. */
+export const CREATE_DEFAULTS = {
+  design_cases: { cloud_cover: 0 },
+  zones: {},
+  buildups: {},
+  surfaces: { exposed_to: "outside_air" },
+  duct_runs: { in_served_zone: false },
+} as const satisfies Record<string, Record<string, unknown>>;
 
 // ---------------------------------------------------------------- design cases
 
@@ -100,6 +120,7 @@ export const ZSurfaceValues = z.strictObject({
   buildup_id: zRef("Build-up"),
   ...numbers(SURFACE_NUMBERS),
   method: zOneOf("Method", METHOD_OPTIONS).nullable(),
+  exposed_to: zOneOf(EXPOSED_TO_LABEL, EXPOSURE_OPTIONS),
 });
 export type TSurfaceValues = z.infer<typeof ZSurfaceValues>;
 
@@ -112,6 +133,7 @@ export const ZDuctRunValues = z
     shape: zOneOf("Shape", SHAPE_OPTIONS),
     location: zOneOf("Location", LOCATION_OPTIONS),
     ...numbers(DUCT_RUN_NUMBERS),
+    in_served_zone: zFlag(IN_SERVED_ZONE_LABEL),
   })
   .superRefine((d, ctx) => {
     const need = (field: "diameter_m" | "width_m" | "height_m", what: string) => {

@@ -144,6 +144,11 @@ describe("a changed row returns to unchecked", () => {
     ["its zone", (fx) => ["patch", `/api/projects/${fx.projectId}/zones/${fx.zoneIds[0]}`, { version: 1, T_heating_C: 22 }], [0, 1], [0]],
     ["a design case", (fx) => ["patch", `/api/projects/${fx.projectId}/design-cases/${fx.caseIds.heating}`, { version: 1, V_met_m_s: 12 }], [0, 1, 2], [0, 1]],
     ["the site", (fx) => ["patch", `/api/projects/${fx.projectId}`, { version: 1, altitude_m: 300 }], [0, 1, 2], [0, 1]],
+    // The v2 inputs are inputs like any other.
+    ["what lies outside the surface", (fx) => ["patch", rowPath(fx), { version: 1, exposed_to: "ground" }], [0], []],
+    ["whether a duct run is inside its zone", (fx) => ["patch", `/api/projects/${fx.projectId}/duct-runs/${fx.ductRunIds[0]}`, { version: 1, in_served_zone: true }], [], [0]],
+    ["a duct run's jacket absorptance", (fx) => ["patch", `/api/projects/${fx.projectId}/duct-runs/${fx.ductRunIds[1]}`, { version: 1, jacket_absorptance: 0.3 }], [], [1]],
+    ["a design case's cloud cover", (fx) => ["patch", `/api/projects/${fx.projectId}/design-cases/${fx.caseIds.cooling}`, { version: 1, cloud_cover: 0.8 }], [0, 1, 2], [0, 1]],
   ];
 
   test.each(CHANGES)("changing %s resets the rows it feeds, with an audit row saying why", async (_what, req, surfaces, ducts) => {

@@ -5,6 +5,8 @@ import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { DEFAULT_DEMO_PASSWORD, DEMO_USERS } from "../../db/seeds/01_demo_firms";
 import { DEMO_CASES, DEMO_DUCT_RUNS, DEMO_SURFACE_COUNT, DEMO_ZONES } from "../../db/seeds/02_demo_schedule";
 import { createScratchDatabase, dropScratchDatabase, knexCli } from "../support/database";
+import { resultsFor } from "../../src/schedule/engine-schedule";
+import type { TSchedule } from "../../src/schemas/schedule";
 
 const NAME = "filmsheet_test_migrations";
 const TABLES = [
@@ -90,12 +92,12 @@ describe("migrations round trip", () => {
     expect(roles).toContainEqual({ email: "admin@other.filmsheet.test", role: "admin", slug: "ostrander-mechanical" });
   });
 
-  test("the demo schedule: at least 3 zones, 40 surfaces on several orientations and heights, 8 duct runs, 3 design cases; a second run adds nothing", async () => {
+  test("the demo schedule: at least 3 zones, 40 surfaces on several orientations and heights, 9 duct runs, 4 design cases; a second run adds nothing", async () => {
     const n = async (table: string) => Number((await db(table).count({ n: "*" }))[0]!.n);
     const expected = { zones: DEMO_ZONES.length, surfaces: DEMO_SURFACE_COUNT, duct_runs: DEMO_DUCT_RUNS.length, design_cases: DEMO_CASES.length };
     expect(expected.zones).toBeGreaterThanOrEqual(3);
     expect(expected.surfaces).toBeGreaterThanOrEqual(40);
-    expect(expected).toMatchObject({ duct_runs: 8, design_cases: 3 });
+    expect(expected).toMatchObject({ duct_runs: 9, design_cases: 4 });
     const counts = async () => ({ zones: await n("zones"), surfaces: await n("surfaces"), duct_runs: await n("duct_runs"), design_cases: await n("design_cases") });
     expect(await counts()).toEqual(expected);
     const orientations = await db("surfaces").where({ tilt_deg: 90 }).distinct("azimuth_deg");
@@ -106,15 +108,51 @@ describe("migrations round trip", () => {
     expect(await db("duct_runs").where({ location: "indoor" }).whereNotNull("T_surround_C").count({ n: "*" })).not.toEqual([{ n: "0" }]);
     // Ceiling voids are warmer in summer: the seed's void runs carry a cooling surround above their
     // heating one, the roof runs leave both blank (the outdoor air).
-    const voids = await db("duct_runs").where({ location: "indoor" }).select("T_surround_C", "T_surround_cooling_C");
+    const voids = await db("duct_runs").where({ location: "indoor", in_served_zone: false }).select("T_surround_C", "T_surround_cooling_C");
     expect(voids.length).toBeGreaterThan(0);
     for (const v of voids) expect(v.T_surround_cooling_C).toBeGreaterThan(v.T_surround_C);
     expect(await db("duct_runs").where({ location: "outdoor" }).whereNotNull("T_surround_cooling_C").count({ n: "*" })).toEqual([{ n: "0" }]);
+    // The v2 inputs: clear and overcast skies, a surface over the ground, a run inside the zone it
+    // serves (its surrounds blank: it crosses that zone's air), roof runs with a jacket absorptance.
+    expect((await db("design_cases").orderBy("cloud_cover").pluck("cloud_cover")).map(Number)).toEqual([0, 0, 0.2, 0.8]);
+    expect(await db("surfaces").where({ exposed_to: "ground" }).pluck("label")).toEqual(["RR ground-floor slab"]);
+    expect(await db("duct_runs").where({ in_served_zone: true }).select("location", "T_surround_C", "T_surround_cooling_C")).toEqual([{ location: "indoor", T_surround_C: null, T_surround_cooling_C: null }]);
+    expect(await db("duct_runs").where({ location: "outdoor" }).whereNotNull("jacket_absorptance").count({ n: "*" })).not.toEqual([{ n: "0" }]);
     // Edits made during a demo survive the next start (rows are inserted only when missing).
     await db("zones").where({ name: "Reading room" }).update({ floor_area_m2: 999 });
     expect(cli(["seed:run"]).status).toBe(0);
     expect(await counts()).toEqual(expected);
     expect((await db("zones").where({ name: "Reading room" }).first()).floor_area_m2).toBe(999);
+  });
+
+  test("the demo shows what contract v2 flags, as the engine computes it", async () => {
+    const project = await db("projects").where({ reference: "TS-2417" }).first();
+    const of = (t: string) => db(t).where({ project_id: project.id });
+    const buildups = await of("buildups");
+    for (const b of buildups) b.layers = await db("buildup_layers").where({ buildup_id: b.id }).orderBy("position").select("material", "thickness_m", "k_W_mK");
+    const s = { project, design_cases: await of("design_cases"), zones: await of("zones"), buildups, surfaces: await of("surfaces").orderBy("position"), duct_runs: await of("duct_runs").orderBy("position") } as unknown as TSchedule;
+    const run = (name: string) => resultsFor(s, s.design_cases.find((d) => d.name === name)!);
+    const label = (id: string) => [...s.surfaces, ...s.duct_runs].find((r) => r.id === id)!.label;
+    const winter = run("Winter design day, windy");
+    const summer = run("Summer design day, sunny");
+    // Mould and condensation on the inside of the retained single pane in winter, nowhere else.
+    expect(winter.surfaces.filter((r) => r.inside?.mould_risk).map((r) => label(r.row_id))).toEqual(["EL retained spandrel"]);
+    // The slab over the ground is not computed in any case.
+    for (const r of [winter, summer]) expect(r.surfaces.filter((x) => !x.result.ok).map((x) => [label(x.row_id), (x.result as { error: { code: string } }).error.code])).toEqual([["RR ground-floor slab", "not_computed"]]);
+    // The sunlit flat roofs are method-sensitive in summer.
+    const roofs = summer.surfaces.filter((r) => /roof/.test(label(r.row_id)));
+    expect(roofs.length).toBeGreaterThan(0);
+    for (const r of roofs) expect(r.spread?.sensitive, label(r.row_id)).toBe(true);
+    // The spiral duct inside the reading room gives its heat to the room: reported on its own.
+    const rr = winter.zones.find((z) => z.name === "Reading room")!;
+    expect(rr.ducts_in_zone_W).toBeGreaterThan(0);
+    // Cloud warms the sky: the same roof run loses less heat under the overcast case's 0.8 than a
+    // clear sky would give it on that day.
+    const overcast = s.design_cases.find((d) => d.name === "Winter overcast day, mild")!;
+    const roofRun = s.duct_runs.find((d) => d.label === "AHU-1 supply, roof run to gallery drop")!.id;
+    const q = (dc: typeof overcast) => (resultsFor(s, dc).duct_runs.find((d) => d.row_id === roofRun)!.result as unknown as { Q_W: number }).Q_W;
+    expect(overcast.cloud_cover).toBe(0.8);
+    expect(q(overcast)).toBeGreaterThan(q({ ...overcast, cloud_cover: 0 }));
   });
 
   test("a surface cannot point at another project's zone, nor sit in another firm's project", async () => {
@@ -183,6 +221,44 @@ describe("migrations round trip", () => {
     const up = cli(["migrate:latest"]);
     expect(up.status, up.output).toBe(0);
     expect(await column()).toEqual({ data_type: "double precision", is_nullable: "YES" });
+  });
+
+  test("the v2 inputs: typed columns with defaults for the rows already stored, refused out of range by the database, and an exact down()", async () => {
+    const cols = async () =>
+      db("information_schema.columns")
+        .where({ table_schema: "public" })
+        .whereIn(["table_name", "column_name"], [["design_cases", "cloud_cover"], ["surfaces", "exposed_to"], ["duct_runs", "in_served_zone"], ["duct_runs", "jacket_absorptance"]])
+        .orderBy(["table_name", "column_name"])
+        .select("table_name", "column_name", "data_type", "is_nullable", "column_default");
+    const expected = [
+      { table_name: "design_cases", column_name: "cloud_cover", data_type: "double precision", is_nullable: "NO", column_default: "'0'::double precision" },
+      { table_name: "duct_runs", column_name: "in_served_zone", data_type: "boolean", is_nullable: "NO", column_default: "false" },
+      { table_name: "duct_runs", column_name: "jacket_absorptance", data_type: "double precision", is_nullable: "YES", column_default: null },
+      { table_name: "surfaces", column_name: "exposed_to", data_type: "text", is_nullable: "NO", column_default: "'outside_air'::text" },
+    ];
+    expect(await cols()).toEqual(expected);
+    const dc = await db("design_cases").first("id");
+    const surface = await db("surfaces").first("id");
+    const duct = await db("duct_runs").first("id");
+    await expect(db("design_cases").where(dc).update({ cloud_cover: 1.01 })).rejects.toThrow(/design_cases_cloud_cover_fraction/);
+    await expect(db("design_cases").where(dc).update({ cloud_cover: -0.1 })).rejects.toThrow(/design_cases_cloud_cover_fraction/);
+    await expect(db("surfaces").where(surface).update({ exposed_to: "water" })).rejects.toThrow(/surfaces_exposed_to_known/);
+    await expect(db("duct_runs").where(duct).update({ jacket_absorptance: 1.5 })).rejects.toThrow(/duct_runs_jacket_absorptance_fraction/);
+    await expect(db("duct_runs").where(duct).update({ in_served_zone: null })).rejects.toThrow(/not-null|null value/);
+
+    const before = { surfaces: await db("surfaces").count({ n: "*" }), duct_runs: await db("duct_runs").count({ n: "*" }) };
+    const down = cli(["migrate:down", "20261213000000_engine_v2_inputs.ts"]);
+    expect(down.status, down.output).toBe(0);
+    expect(await cols()).toEqual([]);
+    const { rows: checks } = await db.raw<{ rows: unknown[] }>("select conname from pg_constraint where conname in ('design_cases_cloud_cover_fraction', 'surfaces_exposed_to_known', 'duct_runs_jacket_absorptance_fraction')");
+    expect(checks).toEqual([]);
+    expect({ surfaces: await db("surfaces").count({ n: "*" }), duct_runs: await db("duct_runs").count({ n: "*" }) }).toEqual(before);
+    // Up again on rows written without the columns: each takes its default.
+    const up = cli(["migrate:latest"]);
+    expect(up.status, up.output).toBe(0);
+    expect(await cols()).toEqual(expected);
+    expect(await db("surfaces").whereNot({ exposed_to: "outside_air" }).count({ n: "*" })).toEqual([{ n: "0" }]);
+    expect(await db("design_cases").whereNot({ cloud_cover: 0 }).count({ n: "*" })).toEqual([{ n: "0" }]);
   });
 
   test("migrate:rollback --all drops every table, migrate:latest brings them back", async () => {

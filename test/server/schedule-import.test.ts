@@ -148,7 +148,8 @@ describe("XLSX import, export and templates", () => {
     await wb.xlsx.load(template.body as unknown as ArrayBuffer);
     expect(wb.worksheets.map((w) => w.name)).toEqual(["Surfaces", "Duct runs", "Read me"]);
     expect(wb.getWorksheet("Surfaces")!.rowCount).toBe(1);
-    expect(wb.getWorksheet("Surfaces")!.getRow(1).getCell(4).value).toBe("Area (m²)");
+    // Label, Zone, Build-up, Outside of surface, then the numbers.
+    expect(wb.getWorksheet("Surfaces")!.getRow(1).getCell(5).value).toBe("Area (m²)");
     expect((wb.getWorksheet("Duct runs")!.getRow(1).values as string[]).slice(1)).toContain("Surrounding air, cooling (°C)");
     const readMe = wb.getWorksheet("Read me")!.getSheetValues().map((r) => (Array.isArray(r) ? r.slice(1) : []));
     expect(readMe).toContainEqual(["Duct runs: Surrounding air, cooling (°C)", "blank = as heating"]);

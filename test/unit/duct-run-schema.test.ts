@@ -12,7 +12,7 @@ const ZONE = "11111111-1111-4111-8111-111111111111";
 const run = {
   label: "Void supply", zone_id: ZONE, shape: "round", diameter_m: 0.4, width_m: null, height_m: null, length_m: 12, flow_m3_s: 0.8,
   T_entering_heating_C: 32, T_entering_cooling_C: 13, location: "indoor", T_surround_C: 19, T_surround_cooling_C: 28, RH_surround_pct: null,
-  elevation_m: null, insulation_thickness_m: 0.025, insulation_k_W_mK: 0.035, jacket_emissivity: 0.1, margin_K: 1,
+  elevation_m: null, insulation_thickness_m: 0.025, insulation_k_W_mK: 0.035, jacket_emissivity: 0.1, margin_K: 1, in_served_zone: false, jacket_absorptance: null,
 };
 const issues = (value: unknown) => {
   const r = ZDuctRunValues.safeParse({ ...run, T_surround_cooling_C: value });

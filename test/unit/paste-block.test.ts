@@ -27,6 +27,7 @@ const surface = (i: number): Row => ({
   method: null,
   absorptance: null,
   emissivity: null,
+  exposed_to: "outside_air",
 });
 const rows = [surface(1), surface(2), surface(3), surface(4)];
 const columnIds = SURFACE_COLUMNS.map((c) => c.field).concat(["r:Q_W"]);

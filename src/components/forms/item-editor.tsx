@@ -17,9 +17,11 @@ const btn = "rounded-chip px-3 py-1.5 text-small font-semibold disabled:opacity-
  * One design case, zone or build-up as a form (or a blank one to add): saved with the version
  * read, field errors shown under each field, a stale version answered with the current values.
  */
-export function ItemEditor({ table, item, fields, extra, title, noun, gridClass }: {
+export function ItemEditor({ table, item, initial, fields, extra, title, noun, gridClass }: {
   table: "design_cases" | "zones" | "buildups";
   item: (Record<string, unknown> & { id: string; version: number }) | null;
+  /** What the blank form (item null) starts with. */
+  initial?: Record<string, unknown>;
   fields: readonly FieldDef[];
   extra?: Extra;
   title: ReactNode;
@@ -31,7 +33,7 @@ export function ItemEditor({ table, item, fields, extra, title, noun, gridClass 
   const s = useSaveState();
   const [confirming, setConfirming] = useState(false);
   const [formKey, setFormKey] = useState(0);
-  const values = item ?? {};
+  const values = item ?? initial ?? {};
 
   async function submit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();

@@ -35,7 +35,8 @@ export function storedValue(col: SheetColumn, shown: unknown, system: UnitSystem
     return Number.isFinite(n) ? fromDisplay(col.spec!.quantity, n, system) : Number.NaN;
   }
   if (col.kind === "text") return String(shown ?? "").trim();
-  if (col.kind === "choice") return shown === "" || shown === null || shown === undefined ? null : String(shown);
+  if (col.kind === "flag") return shown === true || shown === "yes";
+  if (col.kind === "choice") return shown === "" || shown === null || shown === undefined ? (col.blankValue ?? null) : String(shown);
   return shown === null || shown === undefined ? "" : String(shown);
 }
 

@@ -90,6 +90,19 @@ function inputColumn(col: SheetColumn, s: TSchedule, system: UnitSystem): ColDef
         cellEditorParams: { values: Object.keys(refData) },
       };
     }
+    case "flag": {
+      // Shown and picked as Yes/No; the stored boolean goes through "yes"/"no" (storedValue).
+      const refData = Object.fromEntries(col.options!.map((o) => [o.value, o.label]));
+      return {
+        ...base,
+        width: 120,
+        refData,
+        filter: "agTextColumnFilter",
+        valueGetter: (p: P) => (isTotals(p) || !p.data ? null : p.data[col.field] === true ? "yes" : "no"),
+        cellEditor: "agSelectCellEditor",
+        cellEditorParams: { values: Object.keys(refData) },
+      };
+    }
   }
 }
 

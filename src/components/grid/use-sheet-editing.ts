@@ -21,11 +21,11 @@ function blankRow(sheet: TSheet, s: TSchedule): Row | null {
   if (sheet === "surfaces") {
     const b = s.buildups[0];
     if (!b) return null;
-    return { id: newId(), version: 0, position: Number.MAX_SAFE_INTEGER, label: "New surface", zone_id: zone.id, buildup_id: b.id, area_m2: 10, tilt_deg: 90, azimuth_deg: 180, height_m: 1.5, length_m: 4, panel_height_m: 3, method: null, absorptance: null, emissivity: null };
+    return { id: newId(), version: 0, position: Number.MAX_SAFE_INTEGER, label: "New surface", zone_id: zone.id, buildup_id: b.id, area_m2: 10, tilt_deg: 90, azimuth_deg: 180, height_m: 1.5, length_m: 4, panel_height_m: 3, method: null, absorptance: null, emissivity: null, exposed_to: "outside_air" };
   }
   return {
     id: newId(), version: 0, position: Number.MAX_SAFE_INTEGER, label: "New duct run", zone_id: zone.id, shape: "round", diameter_m: 0.3, width_m: null, height_m: null, length_m: 10, flow_m3_s: 0.3,
-    T_entering_heating_C: 30, T_entering_cooling_C: 14, location: "indoor", T_surround_C: 18, T_surround_cooling_C: null, RH_surround_pct: null, elevation_m: null, insulation_thickness_m: 0.025, insulation_k_W_mK: 0.035, jacket_emissivity: 0.9, margin_K: 0,
+    T_entering_heating_C: 30, T_entering_cooling_C: 14, location: "indoor", T_surround_C: 18, T_surround_cooling_C: null, RH_surround_pct: null, elevation_m: null, insulation_thickness_m: 0.025, insulation_k_W_mK: 0.035, jacket_emissivity: 0.9, jacket_absorptance: null, margin_K: 0, in_served_zone: false,
   };
 }
 

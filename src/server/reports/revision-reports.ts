@@ -1,6 +1,6 @@
 import "server-only";
 import type { Knex } from "knex";
-import type { RevisionSnapshot } from "@/checking/snapshot";
+import { withInputDefaults, type RevisionSnapshot } from "@/checking/snapshot";
 import { buildReportAsync, type BuiltReport, type ReportProgress } from "@/report/build-report";
 import { getPlan } from "@/server/services/get-plan";
 import { revisionReportSource, type RevisionRecord } from "./report-inputs";
@@ -57,7 +57,7 @@ export async function buildRevisionReport(
   watermark: boolean,
   onProgress?: (p: ReportProgress) => void | Promise<void>,
 ): Promise<StoredReport> {
-  const source = revisionReportSource(firm, { ...r, snapshot: r.snapshot as RevisionSnapshot }, watermark);
+  const source = revisionReportSource(firm, { ...r, snapshot: withInputDefaults(r.snapshot as RevisionSnapshot) }, watermark);
   const built = await buildReportAsync(source.input, onProgress);
   return storeRevisionReport(q, r, built, source.filename, watermark);
 }

@@ -99,7 +99,7 @@ export async function checkChanges(
     let merged: Record<string, unknown>;
     if (change.op === "create") {
       if (change.id !== undefined && current.has(change.id)) problems.push({ ...base, field: "id", message: `A ${e.noun} with this id already exists` });
-      merged = withBlanks(e.numbers, change.values ?? {}, e.blanks);
+      merged = withBlanks(e.numbers, change.values ?? {}, e.blanks, e.defaults);
     } else {
       const stored = current.get(change.id as string);
       if (!stored || stored.version !== change.version) {

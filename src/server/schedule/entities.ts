@@ -8,7 +8,7 @@ import {
   ZONE_NUMBERS,
   type NumberSpec,
 } from "@/schemas/schedule-fields";
-import { ZBuildupValues, ZDesignCaseValues, ZDuctRunValues, ZSurfaceValues, ZZoneValues } from "@/schemas/schedule";
+import { CREATE_DEFAULTS, ZBuildupValues, ZDesignCaseValues, ZDuctRunValues, ZSurfaceValues, ZZoneValues } from "@/schemas/schedule";
 
 export const ENTITY_NAMES = ["design_cases", "zones", "buildups", "surfaces", "duct_runs"] as const;
 export type EntityName = (typeof ENTITY_NAMES)[number];
@@ -29,6 +29,8 @@ export interface Entity {
   numbers: Record<string, NumberSpec>;
   /** Nullable fields besides the numbers, blank (null) when a create leaves them out. */
   blanks: readonly string[];
+  /** Values a create that leaves these fields out gets (fields never blank, added after v1). */
+  defaults: Readonly<Record<string, unknown>>;
   /** Rows of the schedule keep an order (position); the other tables sort by name. */
   positioned: boolean;
   references: readonly Reference[];
@@ -47,6 +49,7 @@ export const ENTITIES: Record<EntityName, Entity> = {
     fields: shapeKeys(ZDesignCaseValues),
     numbers: DESIGN_CASE_NUMBERS,
     blanks: [],
+    defaults: CREATE_DEFAULTS.design_cases,
     positioned: false,
     references: [],
     usedBy: [],
@@ -58,6 +61,7 @@ export const ENTITIES: Record<EntityName, Entity> = {
     fields: shapeKeys(ZZoneValues),
     numbers: ZONE_NUMBERS,
     blanks: [],
+    defaults: CREATE_DEFAULTS.zones,
     positioned: false,
     references: [],
     usedBy: [
@@ -72,6 +76,7 @@ export const ENTITIES: Record<EntityName, Entity> = {
     fields: shapeKeys(ZBuildupValues),
     numbers: BUILDUP_NUMBERS,
     blanks: [],
+    defaults: CREATE_DEFAULTS.buildups,
     positioned: false,
     references: [],
     usedBy: [{ table: "surfaces", field: "buildup_id", noun: "surfaces" }],
@@ -83,6 +88,7 @@ export const ENTITIES: Record<EntityName, Entity> = {
     fields: shapeKeys(ZSurfaceValues),
     numbers: SURFACE_NUMBERS,
     blanks: ["method"],
+    defaults: CREATE_DEFAULTS.surfaces,
     positioned: true,
     references: [ZONE_REF, { field: "buildup_id", table: "buildups", noun: "Build-up" }],
     usedBy: [],
@@ -94,6 +100,7 @@ export const ENTITIES: Record<EntityName, Entity> = {
     fields: shapeKeys(ZDuctRunValues),
     numbers: DUCT_RUN_NUMBERS,
     blanks: [],
+    defaults: CREATE_DEFAULTS.duct_runs,
     positioned: true,
     references: [ZONE_REF],
     usedBy: [],

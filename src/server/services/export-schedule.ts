@@ -8,7 +8,7 @@ import type { TSchedule, TSheet } from "@/schemas/schedule";
 import { CSV_ESCAPE_FORMULAE } from "@/schedule/csv-formulae";
 import { resultsFor } from "@/schedule/engine-schedule";
 import { RESULT_COLUMNS, resultHeader, resultValue } from "@/schedule/result-columns";
-import { SHEET_COLUMNS, SHEET_TITLES, columnHeader, type SheetColumn } from "@/schedule/sheet-columns";
+import { SHEET_COLUMNS, SHEET_TITLES, columnHeader, flagLabel, type SheetColumn } from "@/schedule/sheet-columns";
 import type { Actor } from "@/server/auth/actor";
 import { AppError } from "@/server/http/app-error";
 import { toDisplay, type UnitSystem } from "@/units/units";
@@ -44,6 +44,8 @@ function inputCell(col: SheetColumn, row: Record<string, unknown>, system: UnitS
       return names.get(v as string) ?? String(v);
     case "choice":
       return labelOf(col.options!, v as string);
+    case "flag":
+      return flagLabel(v);
     default:
       return String(v);
   }
@@ -80,7 +82,8 @@ function readMe(ws: ExcelJS.Worksheet, s: TSchedule): void {
   ];
   for (const sheet of ["surfaces", "duct_runs"] as const) {
     for (const c of SHEET_COLUMNS[sheet]) {
-      const allowed = c.options ? `one of: ${c.options.map((o) => o.label).join(", ")}` : c.spec?.blank ? `blank = ${c.spec.blank}` : c.optional ? `blank = ${c.blankLabel}` : "required";
+      const blank = c.blankValue === undefined ? "" : `; blank = ${typeof c.blankValue === "boolean" ? flagLabel(c.blankValue) : labelOf(c.options!, c.blankValue)}`;
+      const allowed = c.options ? `one of: ${c.options.map((o) => o.label).join(", ")}${blank}` : c.spec?.blank ? `blank = ${c.spec.blank}` : c.optional ? `blank = ${c.blankLabel}` : "required";
       lines.push([`${SHEET_TITLES[sheet]}: ${columnHeader(c, system)}`, allowed]);
     }
   }

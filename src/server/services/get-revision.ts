@@ -1,5 +1,5 @@
 import "server-only";
-import type { RevisionSnapshot } from "@/checking/snapshot";
+import { withInputDefaults, type RevisionSnapshot } from "@/checking/snapshot";
 import type { Actor } from "@/server/auth/actor";
 import { db } from "@/server/db/knex";
 import { AppError } from "@/server/http/app-error";
@@ -13,5 +13,6 @@ export async function getRevisionOrThrow(actor: Actor, projectId: string, letter
     .where({ firm_id: actor.firm.id, project_id: projectId, letter })
     .first("id", "letter", "sequence", "issued_by_name", "issued_at", "note", "snapshot");
   if (!row) throw new AppError("not_found", `No revision ${letter} of this project`);
-  return { ...row, issued_at: new Date(row.issued_at).toISOString(), rows: (row.snapshot as RevisionSnapshot).checks.length };
+  const snapshot = withInputDefaults(row.snapshot as RevisionSnapshot);
+  return { ...row, snapshot, issued_at: new Date(row.issued_at).toISOString(), rows: snapshot.checks.length };
 }

@@ -11,8 +11,10 @@ import { unitLabel } from "@/units/units";
 const FIELDS: FieldDef[] = [
   { name: "name", label: "Name", kind: "text" },
   { name: "kind", label: "Kind", kind: "select", options: CASE_KIND_OPTIONS, hint: "Heating uses the zones' heating set points and the ducts' heating supply temperatures" },
-  ...Object.entries(DESIGN_CASE_NUMBERS).map(([name, spec]): FieldDef => ({ name, label: spec.label, kind: "number", spec })),
+  ...Object.entries(DESIGN_CASE_NUMBERS).map(([name, spec]): FieldDef => ({ name, label: spec.label, kind: "number", spec, ...("hint" in spec ? { hint: spec.hint } : {}) })),
 ];
+// A new case starts under a clear sky, as the engine assumes when no cloud cover is given.
+const NEW_CASE = { cloud_cover: 0 };
 const FACES = [...ORIENTATIONS, "horizontal"] as const;
 const solarField = (o: string): FieldDef => ({ name: `solar_${o}`, label: o === "horizontal" ? "Horizontal" : o, kind: "number", spec: { ...SOLAR_SPEC, label: `Solar irradiance ${o}`, blank: "0" } });
 
@@ -62,7 +64,7 @@ export function DesignCasesView() {
       {s.design_cases.map((dc: TDesignCase) => (
         <ItemEditor key={dc.id} table="design_cases" item={dc as never} fields={FIELDS} extra={SOLAR} title={dc.name} noun="Design case" gridClass="sm:grid-cols-3 lg:grid-cols-6" />
       ))}
-      <ItemEditor table="design_cases" item={null} fields={FIELDS} extra={SOLAR} title="New design case" noun="Design case" gridClass="sm:grid-cols-3 lg:grid-cols-6" />
+      <ItemEditor table="design_cases" item={null} initial={NEW_CASE} fields={FIELDS} extra={SOLAR} title="New design case" noun="Design case" gridClass="sm:grid-cols-3 lg:grid-cols-6" />
     </div>
   );
 }
