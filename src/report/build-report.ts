@@ -4,7 +4,7 @@
  * and in the browser alike.
  */
 import { jsPDF } from "jspdf";
-import { ductRunCase, scheduleResults, surfaceCase, working, type MethodUsed, type Working, type DesignCase } from "@/calc/index";
+import { ductRunRowWorking, scheduleResults, surfaceRowWorking, type MethodUsed, type Working, type DesignCase } from "@/calc/index";
 import { finishPages, Writer } from "./layout";
 import { conventions, cover, designCases, methodStatement, zoneTotals } from "./sections";
 import { ductTables, surfaceTables, warningsList, workingsAppendix } from "./rows";
@@ -66,12 +66,12 @@ export function* reportSteps(input: ReportInput, every = 25): Generator<ReportPr
     for (const row of s.surfaces) {
       const zone = zones.get(row.zone_id);
       const b = buildups.get(row.buildup_id);
-      if (zone !== undefined && b !== undefined) items.push({ label: row.label, dc, working: working(surfaceCase(s.site, dc, zone, b, row)) });
+      if (zone !== undefined && b !== undefined) items.push({ label: row.label, dc, working: surfaceRowWorking(s.site, dc, zone, b, row) });
       if (++done % every === 0) yield computing();
     }
     for (const row of s.ductRuns) {
       const zone = zones.get(row.zone_id);
-      if (zone !== undefined) items.push({ label: row.label, dc, working: working(ductRunCase(s.site, dc, zone, row)) });
+      if (zone !== undefined) items.push({ label: row.label, dc, working: ductRunRowWorking(s.site, dc, zone, row) });
       if (++done % every === 0) yield computing();
     }
   }

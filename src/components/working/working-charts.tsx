@@ -1,6 +1,6 @@
 "use client";
 
-import { CartesianGrid, Legend, Line, LineChart, ReferenceDot, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import { Bar, BarChart, CartesianGrid, Cell, Legend, Line, LineChart, ReferenceDot, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import type { WorkingCharts as Charts } from "@/calc/index";
 
 const AXIS = { stroke: "var(--fs-muted)", fontSize: 11 };
@@ -46,6 +46,50 @@ export function WindChart({ charts }: { charts: Charts }) {
           {charts.current !== null && <ReferenceDot x={charts.current.V_m_s} y={charts.current.h_W_m2K} r={5} fill="var(--fs-accent)" stroke="var(--fs-surface)" />}
         </LineChart>
       </ResponsiveContainer>
+    </figure>
+  );
+}
+
+const METHOD_LABELS: Record<string, string> = { boundary_layer: "Boundary layer", iso6946: "ISO 6946", mcadams: "McAdams" };
+
+/**
+ * h_o and Q of the same surface by the three exterior methods, the chosen one solid and labelled,
+ * the others pale: how far the method choice moves the result.
+ */
+export function MethodSpreadChart({ charts }: { charts: Charts }) {
+  const pts = charts.method_spread;
+  if (pts === undefined || pts === null || pts.length === 0) return null;
+  const data = pts.map((p) => ({
+    method: `${METHOD_LABELS[p.method] ?? p.method}${p.chosen ? " (chosen)" : ""}`,
+    h_o: Number(p.h_o_W_m2K.toPrecision(4)),
+    Q: Math.round(p.Q_W),
+    chosen: p.chosen,
+  }));
+  return (
+    <figure aria-label="Outside coefficient and heat flow by exterior method" className="grid gap-1" data-chart="method-spread">
+      <div className="h-56">
+        <ResponsiveContainer width="100%" height="100%">
+          <BarChart data={data} margin={{ top: 8, right: 8, bottom: 4, left: 0 }} barGap={2}>
+            <CartesianGrid stroke="var(--fs-line)" vertical={false} />
+            <XAxis dataKey="method" tick={AXIS} interval={0} tickLine={false} />
+            <YAxis yAxisId="h" tick={AXIS} width={44} label={{ value: "h_o, W/m²K", angle: -90, position: "insideLeft", fontSize: 11 }} />
+            <YAxis yAxisId="q" orientation="right" tick={AXIS} width={52} label={{ value: "Q, W", angle: 90, position: "insideRight", fontSize: 11 }} />
+            <Tooltip contentStyle={{ background: "var(--fs-surface)", border: "1px solid var(--fs-line)", borderRadius: 8, color: "var(--fs-ink)", fontSize: 12 }} cursor={{ fill: "var(--fs-sunken)", opacity: 0.6 }} />
+            <Legend verticalAlign="top" height={24} wrapperStyle={{ fontSize: 12 }} />
+            <Bar yAxisId="h" dataKey="h_o" name="h_o (W/m²K)" fill="var(--fs-accent)" isAnimationActive={false}>
+              {data.map((d) => (
+                <Cell key={d.method} fill="var(--fs-accent)" fillOpacity={d.chosen ? 1 : 0.35} />
+              ))}
+            </Bar>
+            <Bar yAxisId="q" dataKey="Q" name="Q (W)" fill="var(--fs-heat)" isAnimationActive={false}>
+              {data.map((d) => (
+                <Cell key={d.method} fill="var(--fs-heat)" fillOpacity={d.chosen ? 1 : 0.35} />
+              ))}
+            </Bar>
+          </BarChart>
+        </ResponsiveContainer>
+      </div>
+      <figcaption className="text-micro text-muted">The same surface and case by each exterior method; the chosen method solid, the others pale.</figcaption>
     </figure>
   );
 }
