@@ -7,6 +7,7 @@ import { jsPDF } from "jspdf";
 import { ductRunRowWorking, scheduleResults, surfaceRowWorking, type MethodUsed, type Working, type DesignCase } from "@/calc/index";
 import { finishPages, Writer } from "./layout";
 import { conventions, cover, designCases, methodStatement, zoneTotals } from "./sections";
+import { spreadSection } from "./checks";
 import { ductTables, surfaceTables, warningsList, workingsAppendix } from "./rows";
 import type { ReportInput } from "./types";
 
@@ -92,6 +93,7 @@ export function* reportSteps(input: ReportInput, every = 25): Generator<ReportPr
   const tabling = () => ({ fraction: SHARE.workings + (SHARE.tables * ++table) / tables, stage: "Writing the sections and row tables" });
   for (const _ of surfaceTables(w, input, results)) yield tabling();
   for (const _ of ductTables(w, input, results)) yield tabling();
+  spreadSection(w, input, results, "7");
   const warnings = warningsList(w, input, results);
   const appendixStart = SHARE.workings + SHARE.tables;
   yield { fraction: appendixStart, stage: "Writing the appendix of workings" };
