@@ -61,7 +61,7 @@ describe("result columns: v2 surface checks", () => {
     expect(band[0]).toBeCloseTo(toDisplay(q, lo, system), 9);
     expect(band[1]).toBeCloseTo(toDisplay(q, hi, system), 9);
     expect(band[0]).toBeLessThan(band[1]);
-    const f = (v: number) => new Intl.NumberFormat("en-GB", { minimumFractionDigits: digits + (system === "IP" && q === "film" ? 1 : 0), maximumFractionDigits: digits + (system === "IP" && q === "film" ? 1 : 0) }).format(v);
+    const f = (v: number) => new Intl.NumberFormat("en-GB", { minimumFractionDigits: digits + (system === "IP" && (q as string) === "film" ? 1 : 0), maximumFractionDigits: digits + (system === "IP" && (q as string) === "film" ? 1 : 0) }).format(v);
     expect(resultValue(col(key), r, system)).toBe(`${f(band[0])}–${f(band[1])}`);
   });
 
