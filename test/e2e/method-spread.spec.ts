@@ -141,6 +141,7 @@ test("the grid shows the spread and inside-surface columns, filters on them, and
       await page.setViewportSize(size);
       await page.screenshot({ path: `${SHOTS}/grid-${size.width}x${size.height}.png` });
       await page.screenshot({ path: `${SHOTS}/grid-full-${size.width}x${size.height}.png`, fullPage: true });
+      await totals.screenshot({ path: `${SHOTS}/zone-totals-${size.width}x${size.height}.png` });
     }
   }
 
@@ -159,6 +160,7 @@ test("the grid shows the spread and inside-surface columns, filters on them, and
       await page.setViewportSize(size);
       await page.screenshot({ path: `${SHOTS}/working-${size.width}x${size.height}.png` });
       await page.screenshot({ path: `${SHOTS}/working-full-${size.width}x${size.height}.png`, fullPage: true });
+      await page.getByRole("region", { name: "Spread between methods" }).first().locator("xpath=..").screenshot({ path: `${SHOTS}/working-checks-${size.width}x${size.height}.png` });
     }
   }
 });

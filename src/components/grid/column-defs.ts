@@ -128,7 +128,7 @@ const notesColumn: ColDef<Row> = {
   headerName: "Notes",
   editable: false,
   sortable: true,
-  width: 150,
+  width: 136,
   pinned: "right",
   valueGetter: (p: P) => {
     if (!p.data || isTotals(p)) return null;

@@ -81,7 +81,8 @@ export function ScheduleView() {
       />
       <Notices />
       {importing && canEdit ? <ImportPanel sheet={sheet} onClose={() => setImporting(false)} /> : null}
-      <div className="grid gap-4 xl:grid-cols-[minmax(0,1fr)_20rem]">
+      {/* The totals sit beside the grid only on wide screens: on a laptop the grid needs the width. */}
+      <div className="grid gap-4 2xl:grid-cols-[minmax(0,1fr)_20rem]">
         <section aria-label={`${SHEET_TITLES[sheet]} sheet`} className="min-w-0">
           {sheet === "surfaces" ? <RowFilterBar value={rowFilter} onChange={setRowFilter} counts={filterCounts} shown={shown} total={schedule.surfaces.length} /> : null}
           <ScheduleGrid
