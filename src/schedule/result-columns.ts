@@ -89,7 +89,10 @@ export function resultValue(c: ResultColumn, r: RowOutcome | undefined, system: 
   if (!r || !r.result.ok) return null;
   if (c.band) {
     const b = resultBand(c, r, system);
-    return b === null ? null : `${formatShown(b[0], decimals(c.quantity!, c.digits ?? 1, system))}–${formatShown(b[1], decimals(c.quantity!, c.digits ?? 1, system))}`;
+    if (b === null) return null;
+    const d = decimals(c.quantity!, c.digits ?? 1, system);
+    // "14.2–18.9"; with a minus sign in the band an en dash misleads, so "−379 to −294".
+    return b[0] < 0 ? `${formatShown(b[0], d)} to ${formatShown(b[1], d)}` : `${formatShown(b[0], d)}–${formatShown(b[1], d)}`;
   }
   const v = c.read ? c.read(r) : (r.result as Record<string, unknown>)[c.key];
   if (c.flag) return v === true ? c.flag[0] : v === false ? c.flag[1] : null;

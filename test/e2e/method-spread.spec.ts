@@ -105,7 +105,7 @@ test("the grid shows the spread and inside-surface columns, filters on them, and
   // The sunny roof is among them; its band reads min–max and its flag the percentage.
   await toFoot(page);
   await expect(cell(page, roof, "r:h_o_band")).toHaveText(/^\d+\.\d–\d+\.\d$/);
-  await expect(cell(page, roof, "r:Q_band")).toHaveText(/^-?[\d,]+–-?[\d,]+$/);
+  await expect(cell(page, roof, "r:Q_band")).toHaveText(/^([\d,]+–[\d,]+|-[\d,]+ to -?[\d,]+)$/);
   await expect(cell(page, roof, "r:method_sensitive")).toHaveText(/^yes · \d+ %$/);
   // Every row the filter leaves is method-sensitive.
   const flags = await page.locator('.fs-grid .ag-row:not([row-id="__totals"]) [col-id="r:method_sensitive"]').allInnerTexts();

@@ -62,7 +62,7 @@ describe("result columns: v2 surface checks", () => {
     expect(band[1]).toBeCloseTo(toDisplay(q, hi, system), 9);
     expect(band[0]).toBeLessThan(band[1]);
     const f = (v: number) => new Intl.NumberFormat("en-GB", { minimumFractionDigits: digits + (system === "IP" && (q as string) === "film" ? 1 : 0), maximumFractionDigits: digits + (system === "IP" && (q as string) === "film" ? 1 : 0) }).format(v);
-    expect(resultValue(col(key), r, system)).toBe(`${f(band[0])}–${f(band[1])}`);
+    expect(resultValue(col(key), r, system)).toBe(band[0] < 0 ? `${f(band[0])} to ${f(band[1])}` : `${f(band[0])}–${f(band[1])}`);
   });
 
   test("the single-skin panel in winter is at inside-surface risk; T_si and f_Rsi read from the check", () => {

@@ -68,7 +68,7 @@ export function surfaceRowWorking(site: Site, dc: DesignCase, zone: Zone, buildu
 export function insideVerdict(i: { condensation_risk: boolean; mould_risk: boolean }): string {
   if (i.condensation_risk) return "condensation risk: water condenses on the inside face (and mould can grow)";
   if (i.mould_risk) return "mould risk: surface relative humidity at or above 80 %";
-  return "no risk: the inside face stays above the mould limit";
+  return "no inside-surface risk: the face stays above the mould limit";
 }
 
 /** A duct run in a design case: its `duct_run` case's working. */

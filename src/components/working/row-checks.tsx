@@ -24,7 +24,7 @@ export function SurfaceRowChecks({ working }: { working: Working }) {
       <section aria-label="Spread between methods" className="grid content-start gap-2 rounded-panel border border-line bg-surface p-3">
         <h3 className="text-small font-semibold">Spread between methods</h3>
         <p className="text-small text-muted">
-          h_o {fmt(Math.min(...hs), 1)}–{fmt(Math.max(...hs), 1)} W/m²K, Q {fmt(Math.min(...qs), 0)}–{fmt(Math.max(...qs), 0)} W
+          h_o {fmt(Math.min(...hs), 1)}–{fmt(Math.max(...hs), 1)} W/m²K, Q {fmt(Math.min(...qs), 0)} to {fmt(Math.max(...qs), 0)} W
           {typeof ratio === "number" ? `, a spread of ${Math.round(ratio * 100)} % of the chosen Q` : ""}.{" "}
           {sensitive ? <strong className="text-caution">Method-sensitive: the choice of method moves Q by more than 10 %.</strong> : "Not method-sensitive (10 % or less)."}
         </p>
@@ -45,7 +45,7 @@ export function SurfaceRowChecks({ working }: { working: Working }) {
           </dd>
         </dl>
         <p className={`text-small font-semibold ${condensation || mould ? "text-danger" : "text-ok"}`} role="status">
-          {condensation ? "Condensation risk" : mould ? "Mould risk" : "No inside-surface risk"}: {String(pick(working, I, "inside") ?? "")}
+          {String(pick(working, I, "inside") ?? "")}
         </p>
       </section>
     </div>
