@@ -150,8 +150,11 @@ test("the grid shows the spread and inside-surface columns, filters on them, and
   const chart = page.getByRole("figure", { name: "Outside coefficient and heat flow by exterior method" });
   await expect(chart).toBeVisible();
   await expect(chart.locator("svg").first()).toBeVisible();
-  await expect(chart).toContainText("(chosen)");
+  // The project's default method (boundary layer) is the roof's: named "chosen" on the axis, once.
+  await expect(chart.locator("tspan", { hasText: /^chosen$/ })).toHaveCount(1);
+  await expect(chart.locator("text", { has: page.locator("tspan", { hasText: /^chosen$/ }) })).toContainText("Boundary layer");
   await expect(chart).toContainText("ISO 6946");
+  await expect(chart).toContainText("McAdams");
   await expect(page.getByRole("region", { name: "Spread between methods" }).first()).toContainText("Method-sensitive");
   await expect(page.getByRole("region", { name: "Inside surface" }).first()).toContainText("f_Rsi");
   await expect(page.getByRole("article").getByRole("note").filter({ hasText: "Engineering caution" })).toBeVisible();

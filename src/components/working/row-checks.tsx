@@ -44,7 +44,7 @@ export function SurfaceRowChecks({ working }: { working: Working }) {
             {fmt(pick(working, I, "f_Rsi"), 2)} against {fmt(pick(working, I, "f_Rsi,min"), 2)}
           </dd>
         </dl>
-        <p className={`text-small font-semibold ${condensation || mould ? "text-danger" : "text-ok"}`} role="status">
+        <p className={`text-small font-semibold first-letter:uppercase ${condensation || mould ? "text-danger" : "text-ok"}`} role="status">
           {String(pick(working, I, "inside") ?? "")}
         </p>
       </section>
