@@ -63,11 +63,12 @@ export function* reportSteps(input: ReportInput, every = 25): Generator<ReportPr
   const total = Math.max(1, input.designCases.length * (s.surfaces.length + s.ductRuns.length));
   let done = 0;
   const computing = () => ({ fraction: (SHARE.workings * done) / total, stage: "Working through every row" });
-  for (const dc of input.designCases) {
-    for (const row of s.surfaces) {
+  for (const [k, dc] of input.designCases.entries()) {
+    for (const [i, row] of s.surfaces.entries()) {
       const zone = zones.get(row.zone_id);
       const b = buildups.get(row.buildup_id);
-      if (zone !== undefined && b !== undefined) items.push({ label: row.label, dc, working: surfaceRowWorking(s.site, dc, zone, b, row) });
+      // The spread and inside check come with the results above: not computed twice.
+      if (zone !== undefined && b !== undefined) items.push({ label: row.label, dc, working: surfaceRowWorking(s.site, dc, zone, b, row, results[k]!.surfaces[i]) });
       if (++done % every === 0) yield computing();
     }
     for (const row of s.ductRuns) {

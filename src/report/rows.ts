@@ -142,7 +142,7 @@ export function warningsList(w: Writer, input: ReportInput, results: ScheduleRes
 export function* workingsAppendix(w: Writer, input: ReportInput, items: { label: string; dc: DesignCase; working: Working }[], every = 25): Generator<number, void> {
   w.newPage();
   w.heading("Appendix A  Workings");
-  w.paragraph("Each row's derivation for each design case, in calculation order, as the engine computed it (inputs are in sections 5 and 6).", 8, MUTED);
+  w.paragraph("Each row's derivation for each design case, in calculation order, as the engine computed it (inputs are in sections 5 and 6, the spread between methods in sections 5 and 7).", 8, MUTED);
   const doc = w.doc;
   const colW = (PAGE.w - 2 * PAGE.margin - 6) / 2;
   const lh = 2.55;
@@ -192,7 +192,8 @@ export function* workingsAppendix(w: Writer, input: ReportInput, items: { label:
     line(pdfText(`${it.label} - ${it.dc.name}`), true, ACCENT[0]);
     let section = "";
     for (const l of it.working.lines) {
-      if (l.section === "Inputs") continue;
+      // Inputs are in sections 5 and 6, and each row's spread between methods in sections 5 and 7.
+      if (l.section === "Inputs" || l.section === "Spread between methods") continue;
       if (l.section !== section) {
         section = l.section;
         line(pdfText(section), true, MUTED);

@@ -8,7 +8,7 @@ import type { CalcResult } from "../contract";
 import { EXTERIOR_METHODS, type SurfaceInput, type SurfaceResult } from "../surface";
 import { ductRunCase, surfaceCase } from "../schedule/cases";
 import { insideSurfaceCheck, methodSpread, METHOD_SENSITIVE_SHARE, MOULD_SURFACE_RH } from "../schedule/checks";
-import { OVER_GROUND_MESSAGE } from "../schedule/results";
+import { OVER_GROUND_MESSAGE, type RowResult } from "../schedule/results";
 import type { Buildup, DesignCase, DuctRunRow, Site, SurfaceRow, Zone } from "../schedule/types";
 import { working } from "./index";
 import type { MethodSpreadPoint, Working, WorkingLine } from "./types";
@@ -22,8 +22,12 @@ function line(section: string, label: string, symbol: string, value: WorkingLine
   return note === undefined ? { section, label, symbol, value, unit } : { section, label, symbol, value, unit, note };
 }
 
-/** A surface row in a design case: its working, the spread over the three methods and the inside-surface check. */
-export function surfaceRowWorking(site: Site, dc: DesignCase, zone: Zone, buildup: Buildup, row: SurfaceRow): Working {
+/**
+ * A surface row in a design case: its working, the spread over the three methods and the
+ * inside-surface check. `known` takes them from scheduleResults when the caller has them (the
+ * report), so the two other methods are not computed a second time.
+ */
+export function surfaceRowWorking(site: Site, dc: DesignCase, zone: Zone, buildup: Buildup, row: SurfaceRow, known?: Pick<RowResult, "spread" | "inside">): Working {
   if (row.exposed_to === "ground") {
     const result: CalcResult = { id: row.id, ok: false, error: { code: "not_computed", field: "exposed_to", message: OVER_GROUND_MESSAGE } };
     return { kind: "surface", result, lines: [], methods: [], charts: { local_h: null, h_vs_wind: null, current: null, method_spread: null } };
@@ -33,8 +37,8 @@ export function surfaceRowWorking(site: Site, dc: DesignCase, zone: Zone, buildu
   if (!w.result.ok) return w;
   const s = c as SurfaceInput;
   const r = w.result as unknown as SurfaceResult;
-  const spread = methodSpread(s, r);
-  const inside = insideSurfaceCheck(r.q_W_m2, c.R_si_m2K_W, c.T_inside_C, zone.RH_inside_pct, c.T_outside_C);
+  const spread = known?.spread ?? methodSpread(s, r);
+  const inside = known?.inside ?? insideSurfaceCheck(r.q_W_m2, c.R_si_m2K_W, c.T_inside_C, zone.RH_inside_pct, c.T_outside_C);
 
   const lines = [...w.lines];
   const S = "Spread between methods";
