@@ -110,7 +110,7 @@ export function ScheduleGrid(props: ScheduleGridProps) {
         readOnlyEdit
         onCellEditRequest={onCellEditRequest}
         pinnedBottomRowData={pinned}
-        defaultColDef={{ sortable: true, filter: true, resizable: true, wrapHeaderText: true }}
+        defaultColDef={{ sortable: true, filter: true, resizable: true, wrapHeaderText: true, autoHeaderHeight: true }}
         selectionColumnDef={{ pinned: "left", width: 48, resizable: false, sortable: false }}
         rowSelection={canEdit ? { mode: "multiRow", checkboxes: true, headerCheckbox: true, enableClickSelection: false } : undefined}
         onSelectionChanged={(e) => props.onSelection(e.api.getSelectedRows().map((r) => r.id))}
