@@ -21,4 +21,5 @@ export { insideSurfaceCheck, methodSpread, METHOD_SENSITIVE_SHARE, MOULD_SURFACE
 export { TOTAL_EXCLUSIONS, exclusionsSentence, type Exclusion } from "./schedule/exclusions";
 export { OVER_GROUND_MESSAGE, scheduleResults, type Schedule, type ScheduleResults, type RowResult } from "./schedule/results";
 export { working } from "./working/index";
-export type { Working, WorkingLine, MethodUsed, WorkingCharts, LocalHPoint, WindPoint } from "./working/index";
+export type { Working, WorkingLine, MethodUsed, WorkingCharts, LocalHPoint, WindPoint, MethodSpreadPoint } from "./working/index";
+export { ductRunRowWorking, insideVerdict, methodName, surfaceRowWorking } from "./working/schedule-row";

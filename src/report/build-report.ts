@@ -4,9 +4,10 @@
  * and in the browser alike.
  */
 import { jsPDF } from "jspdf";
-import { ductRunCase, scheduleResults, surfaceCase, working, type MethodUsed, type Working, type DesignCase } from "@/calc/index";
+import { ductRunRowWorking, scheduleResults, surfaceRowWorking, type MethodUsed, type Working, type DesignCase } from "@/calc/index";
 import { finishPages, Writer } from "./layout";
 import { conventions, cover, designCases, methodStatement, zoneTotals } from "./sections";
+import { spreadSection } from "./checks";
 import { ductTables, surfaceTables, warningsList, workingsAppendix } from "./rows";
 import type { ReportInput } from "./types";
 
@@ -62,16 +63,17 @@ export function* reportSteps(input: ReportInput, every = 25): Generator<ReportPr
   const total = Math.max(1, input.designCases.length * (s.surfaces.length + s.ductRuns.length));
   let done = 0;
   const computing = () => ({ fraction: (SHARE.workings * done) / total, stage: "Working through every row" });
-  for (const dc of input.designCases) {
-    for (const row of s.surfaces) {
+  for (const [k, dc] of input.designCases.entries()) {
+    for (const [i, row] of s.surfaces.entries()) {
       const zone = zones.get(row.zone_id);
       const b = buildups.get(row.buildup_id);
-      if (zone !== undefined && b !== undefined) items.push({ label: row.label, dc, working: working(surfaceCase(s.site, dc, zone, b, row)) });
+      // The spread and inside check come with the results above: not computed twice.
+      if (zone !== undefined && b !== undefined) items.push({ label: row.label, dc, working: surfaceRowWorking(s.site, dc, zone, b, row, results[k]!.surfaces[i]) });
       if (++done % every === 0) yield computing();
     }
     for (const row of s.ductRuns) {
       const zone = zones.get(row.zone_id);
-      if (zone !== undefined) items.push({ label: row.label, dc, working: working(ductRunCase(s.site, dc, zone, row)) });
+      if (zone !== undefined) items.push({ label: row.label, dc, working: ductRunRowWorking(s.site, dc, zone, row) });
       if (++done % every === 0) yield computing();
     }
   }
@@ -92,6 +94,7 @@ export function* reportSteps(input: ReportInput, every = 25): Generator<ReportPr
   const tabling = () => ({ fraction: SHARE.workings + (SHARE.tables * ++table) / tables, stage: "Writing the sections and row tables" });
   for (const _ of surfaceTables(w, input, results)) yield tabling();
   for (const _ of ductTables(w, input, results)) yield tabling();
+  spreadSection(w, input, results, "7");
   const warnings = warningsList(w, input, results);
   const appendixStart = SHARE.workings + SHARE.tables;
   yield { fraction: appendixStart, stage: "Writing the appendix of workings" };

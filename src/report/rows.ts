@@ -1,6 +1,7 @@
 /** Row tables per design case, the warnings list and the appendix of workings. */
 import { autoTable } from "jspdf-autotable";
 import type { CalcWarning, DesignCase, ScheduleResults, Working } from "@/calc/index";
+import { bandCell, bare, insideCell, insideRiskRows, spreadCell } from "./checks";
 import { num, withUnit } from "./format";
 import { ACCENT, INK, MUTED, PAGE, Writer } from "./layout";
 import { pdfText } from "./pdf-text";
@@ -26,6 +27,7 @@ function caseTitle(w: Writer, input: ReportInput, r: ScheduleResults): void {
 /** Section 5, one table per design case; yields after each (a large table takes a while). */
 export function* surfaceTables(w: Writer, input: ReportInput, results: ScheduleResults[]): Generator<void, void> {
   const c = input.convert;
+  const u = (unit: string) => (c ? c(1, unit).unit : unit);
   const zones = new Map(input.schedule.zones.map((z) => [z.id, z.name]));
   w.heading("5  External surfaces");
   for (const r of results) {
@@ -33,22 +35,52 @@ export function* surfaceTables(w: Writer, input: ReportInput, results: ScheduleR
     autoTable(w.doc, {
       ...TABLE,
       startY: w.y,
-      head: [["Row", "Zone", "Area", "Tilt/az.", "V surf.", "h_c", "h_r", "Regime", "U", "T_s", "Q", "Check"]],
+      head: [[
+        "Row", "Zone", `Area (${u("m²")})`, "Tilt/az. (°)", `V surf. (${u("m/s")})`, `h_o (${u("W/m²K")}), band`, `U (${u("W/m²K")})`, `T_s (${u("°C")})`,
+        `Q (${u("W")}), band`, "Method-sens.", `T_si (${u("°C")})`, "f_Rsi / min", "Inside", "Check",
+      ].map(pdfText)],
+      columnStyles: { 0: { cellWidth: 22 }, 1: { cellWidth: 16 }, 4: { cellWidth: 10 }, 5: { cellWidth: 15 }, 8: { cellWidth: 17 }, 9: { cellWidth: 15 }, 12: { cellWidth: 20 } },
       body: r.surfaces.map((s, i) => {
         const row = input.schedule.surfaces[i];
         const res = s.result as { ok: boolean } & Record<string, unknown>;
+        const check = input.checks?.[row.id] ?? "unchecked";
+        const lead = [row.label, zones.get(row.zone_id) ?? "", bare(row.area_m2, "m²", c, 3), `${num(row.tilt_deg, 3)}/${num(row.azimuth_deg, 3)}`].map(pdfText);
+        if (!res.ok) {
+          const e = (s.result as { error?: { code: string; field: string; message: string } }).error;
+          const why = e?.code === "not_computed" && e.field === "exposed_to" ? "Not computed: over ground (ISO 13370); not in the totals" : e?.code === "not_computed" ? `Not computed: ${e.message}` : `error: ${e?.message ?? ""}`;
+          return [...lead, { content: pdfText(why), colSpan: 9 }, check];
+        }
+        const sp = s.spread;
+        const ins = s.inside;
         return [
-          pdfText(row.label), pdfText(zones.get(row.zone_id) ?? ""), withUnit(row.area_m2, "m²", c, 3), `${num(row.tilt_deg, 3)}/${num(row.azimuth_deg, 3)}`,
-          withUnit(val(res, "V_surface_m_s"), "m/s", c, 3), withUnit(val(res, "h_c_W_m2K"), "W/m²K", c, 3), withUnit(val(res, "h_r_W_m2K"), "W/m²K", c, 3),
-          res.ok ? String(res.regime) : pdfText(`error: ${(s.result as { error?: { message: string } }).error?.message ?? ""}`),
-          withUnit(val(res, "U_W_m2K"), "W/m²K", c, 3), withUnit(val(res, "T_surface_C"), "°C", c, 3), withUnit(val(res, "Q_W"), "W", c),
-          input.checks?.[row.id] ?? "unchecked",
-        ].map((x) => pdfText(String(x)));
+          ...lead,
+          ...[
+            bare(val(res, "V_surface_m_s"), "m/s", c, 3),
+            `${bare(val(res, "h_o_W_m2K"), "W/m²K", c, 3)}${sp ? `\n${bandCell(sp.h_o_min_W_m2K, sp.h_o_max_W_m2K, "W/m²K", c)}` : ""}`,
+            bare(val(res, "U_W_m2K"), "W/m²K", c, 3), bare(val(res, "T_surface_C"), "°C", c, 3),
+            `${bare(val(res, "Q_W"), "W", c)}${sp ? `\n${bandCell(sp.Q_min_W, sp.Q_max_W, "W", c, 4)}` : ""}`,
+            spreadCell(s), bare(ins?.T_si_C, "°C", c, 3), ins ? `${num(ins.f_Rsi, 2)} / ${num(ins.f_Rsi_min, 2)}` : "-", insideCell(s), check,
+          ].map((x) => pdfText(String(x))),
+        ];
       }),
+      didParseCell: (data) => {
+        if (data.section !== "body") return;
+        const s = r.surfaces[data.row.index];
+        if (data.column.index === 9 && s?.spread?.sensitive) data.cell.styles.fontStyle = "bold";
+        if (data.column.index === 12 && s?.inside && (s.inside.mould_risk || s.inside.condensation_risk)) {
+          data.cell.styles.fontStyle = "bold";
+          data.cell.styles.textColor = [170, 30, 30];
+        }
+      },
     });
     w.afterTable();
     yield;
   }
+  w.paragraph(
+    "h_o and Q: the chosen method, with the band (least to greatest) over the three exterior methods beneath. Method-sens.: the band of Q as a share of the chosen Q, YES above 10 % (section 7). T_si and f_Rsi: the inside face against the zone air (ISO 13788); f_Rsi,min is the factor needed against mould (surface RH 80 %).",
+    7.5,
+    MUTED,
+  );
 }
 
 /** Section 6, one table per design case; yields after each. */
@@ -81,7 +113,7 @@ export function* ductTables(w: Writer, input: ReportInput, results: ScheduleResu
 }
 
 export function warningsList(w: Writer, input: ReportInput, results: ScheduleResults[]): number {
-  w.heading("7  Warnings");
+  w.heading("8  Warnings");
   const rows: string[][] = [];
   for (const r of results) {
     const dc = input.designCases.find((d) => d.id === r.design_case_id)?.name ?? "";
@@ -90,12 +122,13 @@ export function warningsList(w: Writer, input: ReportInput, results: ScheduleRes
     };
     r.surfaces.forEach((s, i) => s.result.ok && add(input.schedule.surfaces[i].label, s.result.warnings));
     r.duct_runs.forEach((s, i) => s.result.ok && add(input.schedule.ductRuns[i].label, s.result.warnings));
+    rows.push(...insideRiskRows(input, r, dc));
   }
   if (rows.length === 0) {
-    w.paragraph("No correlation was used outside its published range, and every balance converged.", 9);
+    w.paragraph("No correlation was used outside its published range, every balance converged, and no inside surface is at risk of mould or condensation.", 9);
     return 0;
   }
-  w.paragraph(`${rows.length} warnings. Each is an extrapolation or a non-converged balance to be reviewed before the results are relied on.`, 8.5, MUTED);
+  w.paragraph(`${rows.length} warnings. Each is an extrapolation, a non-converged balance or an inside surface at risk of mould or condensation (ISO 13788), to be reviewed before the results are relied on.`, 8.5, MUTED);
   autoTable(w.doc, { ...TABLE, startY: w.y, head: [["Row", "Case", "Code", "Message"]], columnStyles: { 3: { cellWidth: 110 } }, body: rows });
   w.afterTable();
   return rows.length;
@@ -109,7 +142,7 @@ export function warningsList(w: Writer, input: ReportInput, results: ScheduleRes
 export function* workingsAppendix(w: Writer, input: ReportInput, items: { label: string; dc: DesignCase; working: Working }[], every = 25): Generator<number, void> {
   w.newPage();
   w.heading("Appendix A  Workings");
-  w.paragraph("Each row's derivation for each design case, in calculation order, as the engine computed it (inputs are in sections 5 and 6).", 8, MUTED);
+  w.paragraph("Each row's derivation for each design case, in calculation order, as the engine computed it (inputs are in sections 5 and 6, the spread between methods in sections 5 and 7).", 8, MUTED);
   const doc = w.doc;
   const colW = (PAGE.w - 2 * PAGE.margin - 6) / 2;
   const lh = 2.55;
@@ -159,7 +192,8 @@ export function* workingsAppendix(w: Writer, input: ReportInput, items: { label:
     line(pdfText(`${it.label} - ${it.dc.name}`), true, ACCENT[0]);
     let section = "";
     for (const l of it.working.lines) {
-      if (l.section === "Inputs") continue;
+      // Inputs are in sections 5 and 6, and each row's spread between methods in sections 5 and 7.
+      if (l.section === "Inputs" || l.section === "Spread between methods") continue;
       if (l.section !== section) {
         section = l.section;
         line(pdfText(section), true, MUTED);

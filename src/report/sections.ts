@@ -1,7 +1,7 @@
 /** The body of the report: cover, design cases, methods, conventions, totals, row tables, warnings. */
 import { autoTable } from "jspdf-autotable";
 import { CONVENTIONS } from "@/calc/conventions";
-import type { DesignCase, MethodUsed, ScheduleResults } from "@/calc/index";
+import { exclusionsSentence, type DesignCase, type MethodUsed, type ScheduleResults } from "@/calc/index";
 import { withUnit, num } from "./format";
 import { ACCENT, CAUTION, INK, MUTED, PAGE, Writer } from "./layout";
 import { pdfText } from "./pdf-text";
@@ -74,7 +74,7 @@ export function designCases(w: Writer, input: ReportInput): void {
 
 export function methodStatement(w: Writer, methods: MethodUsed[]): void {
   w.heading("2  Method statement");
-  w.paragraph("Every method used for the results of this report, with its equation, published source and the range in which it was published. Uses outside that range are listed in section 7.", 8.5, MUTED);
+  w.paragraph("Every method used for the results of this report, with its equation, published source and the range in which it was published. Uses outside that range are listed in section 8.", 8.5, MUTED);
   autoTable(w.doc, {
     ...TABLE,
     startY: w.y,
@@ -109,16 +109,21 @@ export function zoneTotals(w: Writer, input: ReportInput, results: ScheduleResul
     autoTable(w.doc, {
       ...TABLE,
       startY: w.y,
-      head: [["Zone", "Floor area", "Heat loss", "Heat gain", "Loss per floor area", "Gain per floor area", ""]],
-      columnStyles: { 6: { cellWidth: 50 } },
+      styles: { ...TABLE.styles, fontSize: 7 },
+      head: [["Zone", "Floor area", "Fabric loss", "Distribution loss", "Heat loss", "Fabric gain", "Distribution gain", "Heat gain", "Loss / gain per floor area", ""]],
+      columnStyles: { 9: { cellWidth: 30 } },
       body: clean(
         r.zones.map((z) => [
-          z.name, withUnit(z.floor_area_m2, "m²", c), withUnit(z.loss_W, "W", c), withUnit(z.gain_W, "W", c),
-          withUnit(z.loss_W_m2, "W/m²", c), withUnit(z.gain_W_m2, "W/m²", c), "",
+          z.name, withUnit(z.floor_area_m2, "m²", c), withUnit(z.surfaces_loss_W, "W", c), withUnit(z.ducts_loss_W, "W", c), withUnit(z.loss_W, "W", c),
+          withUnit(z.surfaces_gain_W, "W", c), withUnit(z.ducts_gain_W, "W", c), withUnit(z.gain_W, "W", c),
+          `${withUnit(z.loss_W_m2, "W/m²", c)} / ${withUnit(z.gain_W_m2, "W/m²", c)}`, "",
         ]),
       ),
+      didParseCell: (data) => {
+        if (data.section === "body" && (data.column.index === 4 || data.column.index === 7)) data.cell.styles.fontStyle = "bold";
+      },
       didDrawCell: (data) => {
-        if (data.section !== "body" || data.column.index !== 6) return;
+        if (data.section !== "body" || data.column.index !== 9) return;
         const z = r.zones[data.row.index];
         const x = data.cell.x + 1;
         const full = data.cell.width - 2;
@@ -127,7 +132,19 @@ export function zoneTotals(w: Writer, input: ReportInput, results: ScheduleResul
         w.doc.setFillColor(200, 110, 30).rect(x, data.cell.y + 0.8 + h, (full * z.gain_W) / max, h, "F");
       },
     });
-    w.afterTable(4);
+    w.afterTable(2);
+    const inZone = r.zones.filter((z) => z.ducts_in_zone_W !== 0);
+    if (inZone.length > 0) {
+      const list = inZone.map((z) => `${z.name} ${withUnit(Math.abs(z.ducts_in_zone_W), "W", c)} ${z.ducts_in_zone_W >= 0 ? "to" : "from"} the zone`).join("; ");
+      w.paragraph(`Ducts inside the zone they serve, for reference, not in the totals: ${list}.`, 7.5, MUTED);
+    }
+    w.y += 2;
   }
   w.paragraph("Bars: heat loss (upper, blue) and heat gain (lower, orange), to one scale across all cases.", 7.5, MUTED);
+  w.paragraph(
+    "Fabric: surfaces to outside air. Distribution: duct runs crossing unconditioned or outdoor space, on their own line; a duct run inside the zone it serves gives its heat to that zone and is left out of its totals. Surfaces over ground are not computed (ISO 13370) and are not in the totals.",
+    7.5,
+    MUTED,
+  );
+  w.paragraph(exclusionsSentence(), 8, INK);
 }

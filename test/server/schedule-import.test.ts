@@ -4,6 +4,7 @@
 import ExcelJS from "exceljs";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { exclusionsSentence } from "../../src/calc/index";
 import { startAppWithSessions, type BuiltApp } from "../support/app-with-sessions";
 import { closeTestDb, testDb } from "../support/db";
 import { makeProject, snapshot, type FixtureProject } from "../support/schedule-fixtures";
@@ -161,5 +162,14 @@ describe("XLSX import, export and templates", () => {
     expect(ws.rowCount).toBe(1 + (await surfacesOf(fx.projectId)).length);
     const headings = (ws.getRow(1).values as string[]).slice(1);
     expect(headings).toContain("Q (W) — Winter");
+    // v2: the bands as least and greatest columns, the method-sensitive flag and the inside surface.
+    for (const h of ["h_o across methods, least (W/(m²·K)) — Winter", "Q across methods, greatest (W) — Winter", "Method-sensitive (> 10 %) — Winter", "Inside surface T_si (°C) — Winter", "Inside surface — Winter"]) expect(headings).toContain(h);
+    const sensitiveCol = headings.indexOf("Method-sensitive (> 10 %) — Winter") + 1;
+    for (let i = 2; i <= ws.rowCount; i++) expect(String(ws.getRow(i).getCell(sensitiveCol).value)).toMatch(/^(yes|no)( · \d+ %)?$/);
+    // The zone totals sheet: fabric and distribution apart, and what every total leaves out.
+    const totals = wb2.getWorksheet("Zone totals")!;
+    expect((totals.getRow(1).values as string[]).slice(1)).toEqual(expect.arrayContaining(["Fabric loss (W)", "Distribution loss (W)", "Distribution gain (W)"]));
+    const texts = totals.getSheetValues().flatMap((r) => (Array.isArray(r) ? r.slice(1) : [])).map(String);
+    expect(texts).toContain(exclusionsSentence());
   });
 });

@@ -12,7 +12,7 @@ import { LineWriter } from "./lines";
 import { surfaceWorking } from "./surface";
 import type { Working } from "./types";
 
-export type { Working, WorkingLine, MethodUsed, WorkingCharts, LocalHPoint, WindPoint } from "./types";
+export type { Working, WorkingLine, MethodUsed, WorkingCharts, LocalHPoint, WindPoint, MethodSpreadPoint } from "./types";
 
 const NO_CHARTS = { local_h: null, h_vs_wind: null, current: null };
 

@@ -38,6 +38,15 @@ export interface WindPoint {
   h_combined_W_m2K: number;
 }
 
+/** One exterior method's outside coefficient and heat flow for the same surface and case. */
+export interface MethodSpreadPoint {
+  method: "boundary_layer" | "iso6946" | "mcadams";
+  h_o_W_m2K: number;
+  Q_W: number;
+  /** The method the row uses. */
+  chosen: boolean;
+}
+
 export interface WorkingCharts {
   /** Local forced-convection h along the surface in the direction of the wind. */
   local_h: LocalHPoint[] | null;
@@ -45,6 +54,8 @@ export interface WorkingCharts {
   h_vs_wind: WindPoint[] | null;
   /** The row's own point on h_vs_wind. */
   current: { V_m_s: number; h_W_m2K: number } | null;
+  /** Schedule rows (surfaces): h_o and Q by each of the three exterior methods; absent elsewhere. */
+  method_spread?: MethodSpreadPoint[] | null;
 }
 
 export interface Working {

@@ -30,7 +30,7 @@ export function ZoneTotalsChart({ data, unit }: { data: ZoneBar[]; unit: string 
         <Bar dataKey="loss" name="Heat loss" fill="var(--fs-frost)" radius={[4, 4, 0, 0]} isAnimationActive={false} />
         <Bar dataKey="gain" name="Heat gain" fill="var(--fs-heat)" radius={[4, 4, 0, 0]} isAnimationActive={false} />
       </BarChart>
-      <figcaption className="text-micro text-muted">Per zone, {unit}. Surfaces and the duct runs serving each zone.</figcaption>
+      <figcaption className="text-micro text-muted">Per zone, {unit}: fabric and distribution; ducts inside the zone they serve are not counted.</figcaption>
     </figure>
   );
 }

@@ -8,7 +8,7 @@ import { createElement } from "react";
 import { rowPath } from "@/checking/paths";
 import { labelOf } from "@/schemas/schedule-fields";
 import type { TSchedule, TSheet } from "@/schemas/schedule";
-import { RESULT_COLUMNS, resultHeader, resultValue, type ResultColumn } from "@/schedule/result-columns";
+import { RESULT_COLUMNS, resultHeader, resultValue, rowProblem, type ResultColumn } from "@/schedule/result-columns";
 import { SHEET_COLUMNS, columnHeader, type SheetColumn } from "@/schedule/sheet-columns";
 import { decimals, formatShown } from "@/units/format";
 import { toDisplay, type UnitSystem } from "@/units/units";
@@ -107,27 +107,30 @@ function inputColumn(col: SheetColumn, s: TSchedule, system: UnitSystem): ColDef
 }
 
 function resultColumn(c: ResultColumn, system: UnitSystem): ColDef<Row> {
-  const d = c.quantity ? decimals(c.quantity, c.digits ?? 1, system) : 0;
+  const d = c.quantity ? decimals(c.quantity, c.digits ?? 1, system) : (c.digits ?? 0);
+  const numeric = !c.band && (c.quantity !== undefined || c.digits !== undefined);
   return {
     colId: `r:${c.key}`,
     headerName: resultHeader(c, system),
+    headerTooltip: resultHeader(c, system),
     headerClass: "fs-computed-header",
     editable: false,
-    width: c.quantity ? 104 : 112,
+    width: c.width ?? (c.quantity ? 104 : 112),
     // The heat flow stays in view at the right while the inputs scroll.
     pinned: c.key === "Q_W" ? "right" : undefined,
-    type: c.quantity ? "numericColumn" : undefined,
-    filter: c.quantity ? "agNumberColumnFilter" : "agTextColumnFilter",
+    type: numeric || c.band ? "numericColumn" : undefined,
+    filter: numeric ? "agNumberColumnFilter" : "agTextColumnFilter",
     valueGetter: (p: P) => {
       if (isTotals(p)) return c.total ? toDisplay(c.quantity!, p.context.totals[c.key] ?? 0, system) : null;
       return p.data ? resultValue(c, p.context.results.get(p.data.id), system) : null;
     },
-    valueFormatter: (p: F) => (typeof p.value === "number" ? formatShown(p.value, d) : p.value === null || p.value === undefined ? "—" : String(p.value)),
+    valueFormatter: (p: F) => (typeof p.value === "number" ? formatShown(p.value, d) : p.value === null || p.value === undefined ? (isTotals(p) ? "" : "—") : String(p.value)),
     cellClassRules: {
       "fs-computed": () => true,
       "fs-gain": (p) => c.key === "Q_W" && typeof p.value === "number" && ((p.context as GridContext).sheet === "surfaces" ? p.value < 0 : p.value > 0),
       "fs-loss": (p) => c.key === "Q_W" && typeof p.value === "number" && ((p.context as GridContext).sheet === "surfaces" ? p.value > 0 : p.value < 0),
-      "fs-risk": (p) => c.key === "condensation" && p.value === "risk",
+      "fs-risk": (p) => (c.key === "condensation" && p.value === "risk") || (c.key === "inside_risk" && typeof p.value === "string" && p.value !== "none"),
+      "fs-sensitive": (p) => c.key === "method_sensitive" && typeof p.value === "string" && p.value.startsWith("yes"),
     },
   };
 }
@@ -138,21 +141,27 @@ const notesColumn: ColDef<Row> = {
   headerName: "Notes",
   editable: false,
   sortable: true,
-  width: 120,
+  width: 136,
   pinned: "right",
   valueGetter: (p: P) => {
     if (!p.data || isTotals(p)) return null;
     const r = p.context.results.get(p.data.id);
     if (!r) return null;
-    if (!r.ok) return `error: ${r.error.message}`;
-    return r.warnings.length ? `${r.warnings.length} warning${r.warnings.length > 1 ? "s" : ""}` : null;
+    const problem = rowProblem(r);
+    if (problem) return problem.text;
+    const n = r.result.ok ? r.result.warnings.length : 0;
+    return n ? `${n} warning${n > 1 ? "s" : ""}` : null;
   },
   tooltipValueGetter: (p) => {
     const r = p.data ? (p.context as GridContext).results.get(p.data.id) : undefined;
     if (!r) return undefined;
-    return r.ok ? r.warnings.map((w) => w.message).join("\n") || undefined : r.error.message;
+    return r.result.ok ? r.result.warnings.map((w) => w.message).join("\n") || undefined : r.result.error.message;
   },
-  cellClassRules: { "fs-note-error": (p) => typeof p.value === "string" && p.value.startsWith("error"), "fs-note-warn": (p) => typeof p.value === "string" && !p.value.startsWith("error") },
+  cellClassRules: {
+    "fs-note-error": (p) => typeof p.value === "string" && p.value.startsWith("error"),
+    "fs-note-muted": (p) => typeof p.value === "string" && p.value.startsWith("Not computed"),
+    "fs-note-warn": (p) => typeof p.value === "string" && /warnings?$/.test(p.value),
+  },
 };
 
 /** A link to the row's working and check, on its own page. */

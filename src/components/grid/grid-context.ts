@@ -1,4 +1,4 @@
-import type { CalcResult } from "@/calc/index";
+import type { RowOutcome } from "@/schedule/result-columns";
 import type { TBuildup, TSheet } from "@/schemas/schedule";
 import type { UnitSystem } from "@/units/units";
 
@@ -12,13 +12,24 @@ export interface GridContext {
   sheet: TSheet;
   system: UnitSystem;
   canEdit: boolean;
-  results: Map<string, CalcResult>;
+  results: Map<string, RowOutcome>;
+  /** Rows shown: all, only those whose method choice moves Q > 10 %, or only those at inside-surface risk. */
+  rowFilter: RowFilter;
   buildups: Map<string, TBuildup>;
   /** `${rowId}:${field}` → why the last edit of that cell was refused. */
   cellErrors: Map<string, string>;
   /** Sums for the pinned totals row, by column id (SI). */
   totals: Record<string, number>;
   rowCount: number;
+}
+
+export type RowFilter = "all" | "method_sensitive" | "inside_risk";
+
+/** Whether a row passes the quick filter above the grid (surface rows in the chosen design case). */
+export function passesRowFilter(filter: RowFilter, r: RowOutcome | undefined): boolean {
+  if (filter === "all") return true;
+  if (filter === "method_sensitive") return r?.spread?.sensitive === true;
+  return r?.inside !== undefined && (r.inside.mould_risk || r.inside.condensation_risk);
 }
 
 export const cellKey = (rowId: string, field: string) => `${rowId}:${field}`;

@@ -1,14 +1,14 @@
 "use client";
 
-import { AllCommunityModule, ModuleRegistry, type CellEditRequestEvent, type GridApi, type GridReadyEvent } from "ag-grid-community";
+import { AllCommunityModule, ModuleRegistry, type CellEditRequestEvent, type GridApi, type GridReadyEvent, type IRowNode } from "ag-grid-community";
 import { AgGridReact } from "ag-grid-react";
 import { useCallback, useEffect, useMemo, useRef, useState, type ClipboardEvent } from "react";
-import type { CalcResult } from "@/calc/index";
+import type { RowOutcome } from "@/schedule/result-columns";
 import type { TSchedule, TSheet } from "@/schemas/schedule";
 import type { UnitSystem } from "@/units/units";
 import type { Row } from "@/components/schedule/schedule-cache";
 import { sheetColumnDefs } from "./column-defs";
-import { TOTALS_ID, type GridContext } from "./grid-context";
+import { TOTALS_ID, passesRowFilter, type GridContext, type RowFilter } from "./grid-context";
 import { gridTheme } from "./grid-theme";
 import "./schedule-grid.css";
 
@@ -25,7 +25,11 @@ export interface PasteRequest {
 export interface ScheduleGridProps {
   sheet: TSheet;
   schedule: TSchedule;
-  results: Map<string, CalcResult>;
+  results: Map<string, RowOutcome>;
+  /** Quick filter above the grid; "all" when absent. */
+  rowFilter?: RowFilter;
+  /** Rows shown after every filter, on each change. */
+  onShown?: (n: number) => void;
   totals: Record<string, number>;
   system: UnitSystem;
   canEdit: boolean;
@@ -44,10 +48,11 @@ export interface ScheduleGridProps {
  */
 export function ScheduleGrid(props: ScheduleGridProps) {
   const { sheet, schedule, results, totals, system, canEdit, cellErrors } = props;
+  const rowFilter = props.rowFilter ?? "all";
   const [api, setApi] = useState<GridApi<Row> | null>(null);
   const rows = (sheet === "surfaces" ? schedule.surfaces : schedule.duct_runs) as unknown as Row[];
-  const context = useRef<GridContext>({ projectId: schedule.project.id, sheet, system, canEdit, results, cellErrors, totals, rowCount: rows.length, buildups: new Map() }).current;
-  Object.assign(context, { projectId: schedule.project.id, sheet, system, canEdit, results, cellErrors, totals, rowCount: rows.length, buildups: new Map(schedule.buildups.map((b) => [b.id, b])) });
+  const context = useRef<GridContext>({ projectId: schedule.project.id, sheet, system, canEdit, results, rowFilter, cellErrors, totals, rowCount: rows.length, buildups: new Map() }).current;
+  Object.assign(context, { projectId: schedule.project.id, sheet, system, canEdit, results, rowFilter, cellErrors, totals, rowCount: rows.length, buildups: new Map(schedule.buildups.map((b) => [b.id, b])) });
 
   const { zones, buildups, project } = schedule;
   const columnDefs = useMemo(
@@ -62,11 +67,23 @@ export function ScheduleGrid(props: ScheduleGridProps) {
     api?.refreshCells();
   }, [api, results, totals, cellErrors, system]);
 
+  // The quick filter reads the results of the chosen case: run it again when either changes.
+  useEffect(() => {
+    if (!api) return;
+    api.onFilterChanged();
+    props.onShown?.(api.getDisplayedRowCount());
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [api, rowFilter, results]);
+
   const onGridReady = useCallback((e: GridReadyEvent<Row>) => {
     setApi(e.api);
     props.onReady?.(e.api);
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, []);
+
+  // Stable callbacks reading the context object, which is updated in place on every render.
+  const isFilterPresent = useCallback(() => context.rowFilter !== "all", [context]);
+  const doesFilterPass = useCallback((node: IRowNode<Row>) => !node.data || passesRowFilter(context.rowFilter, context.results.get(node.data.id)), [context]);
 
   const onCellEditRequest = useCallback((e: CellEditRequestEvent<Row>) => props.onEdit(e.data, e.colDef.colId ?? "", e.newValue), [props]);
 
@@ -93,7 +110,7 @@ export function ScheduleGrid(props: ScheduleGridProps) {
         readOnlyEdit
         onCellEditRequest={onCellEditRequest}
         pinnedBottomRowData={pinned}
-        defaultColDef={{ sortable: true, filter: true, resizable: true, wrapHeaderText: true }}
+        defaultColDef={{ sortable: true, filter: true, resizable: true, wrapHeaderText: true, autoHeaderHeight: true }}
         selectionColumnDef={{ pinned: "left", width: 48, resizable: false, sortable: false }}
         rowSelection={canEdit ? { mode: "multiRow", checkboxes: true, headerCheckbox: true, enableClickSelection: false } : undefined}
         onSelectionChanged={(e) => props.onSelection(e.api.getSelectedRows().map((r) => r.id))}
@@ -102,6 +119,9 @@ export function ScheduleGrid(props: ScheduleGridProps) {
         enterNavigatesVerticallyAfterEdit
         tooltipShowDelay={250}
         onGridReady={onGridReady}
+        isExternalFilterPresent={isFilterPresent}
+        doesExternalFilterPass={doesFilterPass}
+        onFilterChanged={(e) => props.onShown?.(e.api.getDisplayedRowCount())}
         animateRows={false}
         suppressColumnVirtualisation
       />

@@ -1,7 +1,7 @@
 "use client";
 
 import { useDeferredValue, useMemo, useState } from "react";
-import type { ScheduleResults } from "@/calc/index";
+import { exclusionsSentence, type ScheduleResults } from "@/calc/index";
 import type { TSchedule } from "@/schemas/schedule";
 import { resultsFor } from "@/schedule/engine-schedule";
 import { formatQuantity } from "@/units/format";
@@ -12,7 +12,9 @@ import { useProject } from "./schedule-context";
 
 /**
  * Zone totals beside the grid: heat loss and gain of each zone in the chosen design case, in W
- * and W/m² of floor area, a bar chart of them, and each zone's governing figure in every case.
+ * and W/m² of floor area, split into fabric and distribution (ducts crossing unconditioned or
+ * outdoor space), with the ducts inside the zone they serve shown for reference only; a bar chart
+ * of them, each zone's governing figure in every case, and what every total leaves out.
  */
 export function ZoneTotalsPanel({ schedule, results }: { schedule: TSchedule; results: ScheduleResults }) {
   const { system } = useProject();
@@ -34,42 +36,74 @@ export function ZoneTotalsPanel({ schedule, results }: { schedule: TSchedule; re
         <h2 className="text-lead font-semibold">Zone totals</h2>
         <p className="text-small text-muted">{schedule.design_cases.find((d) => d.id === results.design_case_id)?.name}</p>
       </header>
-      <table className="w-full text-small" aria-label="Zone totals for the design case">
-        <thead className="text-micro uppercase text-muted">
-          <tr>
-            <th className="py-1 text-left font-medium">Zone</th>
-            <th className="py-1 text-right font-medium">Loss {W}</th>
-            <th className="py-1 text-right font-medium">{Wm2}</th>
-            <th className="py-1 text-right font-medium">Gain {W}</th>
-            <th className="py-1 text-right font-medium">{Wm2}</th>
-          </tr>
-        </thead>
-        <tbody>
-          {results.zones.map((z) => (
-            <tr key={z.zone_id} className="border-t border-line" data-zone={z.name}>
-              <th scope="row" className="py-1 pr-2 text-left font-medium">
-                {z.name}
-              </th>
-              <td className="py-1 text-right text-frost" data-total="loss">{p(z.loss_W)}</td>
-              <td className="py-1 text-right text-muted">{f(z.loss_W_m2)}</td>
-              <td className="py-1 text-right text-heat" data-total="gain">{p(z.gain_W)}</td>
-              <td className="py-1 text-right text-muted">{f(z.gain_W_m2)}</td>
-            </tr>
-          ))}
-          <tr className="border-t-2 border-line font-semibold">
-            <th scope="row" className="py-1 text-left">All zones</th>
-            <td className="py-1 text-right text-frost">{p(total.loss)}</td>
-            <td />
-            <td className="py-1 text-right text-heat">{p(total.gain)}</td>
-            <td />
-          </tr>
-        </tbody>
-      </table>
-      <ZoneTotalsChart data={bars} unit={W} />
+      <div className="grid content-start gap-4 lg:grid-cols-2 lg:gap-8 2xl:grid-cols-1 2xl:gap-4">
+        <div className="grid content-start gap-2">
+          <table className="w-full text-small" aria-label="Zone totals for the design case">
+            <thead className="text-micro text-muted">
+              <tr>
+                <th className="py-1 text-left font-medium">Zone</th>
+                <th className="py-1 text-right font-medium">Loss {W}</th>
+                <th className="py-1 text-right font-medium">{Wm2}</th>
+                <th className="py-1 text-right font-medium">Gain {W}</th>
+                <th className="py-1 text-right font-medium">{Wm2}</th>
+              </tr>
+            </thead>
+            {results.zones.map((z) => (
+              <tbody key={z.zone_id} className="border-t border-line">
+                <tr data-zone={z.name}>
+                  <th scope="row" className="pt-1 pr-2 text-left font-medium">
+                    {z.name}
+                  </th>
+                  <td className="pt-1 text-right text-frost" data-total="loss">{p(z.loss_W)}</td>
+                  <td className="pt-1 text-right text-muted">{f(z.loss_W_m2)}</td>
+                  <td className="pt-1 text-right text-heat" data-total="gain">{p(z.gain_W)}</td>
+                  <td className="pt-1 text-right text-muted">{f(z.gain_W_m2)}</td>
+                </tr>
+                <tr className="text-micro text-muted" data-line="fabric" data-zone-line={z.name}>
+                  <th scope="row" className="pl-3 text-left font-normal">fabric</th>
+                  <td className="text-right">{p(z.surfaces_loss_W)}</td>
+                  <td />
+                  <td className="text-right">{p(z.surfaces_gain_W)}</td>
+                  <td />
+                </tr>
+                <tr className="text-micro text-muted" data-line="distribution" data-zone-line={z.name}>
+                  <th scope="row" className="pl-3 text-left font-normal" title="Duct runs crossing unconditioned or outdoor space">
+                    distribution
+                  </th>
+                  <td className="text-right" data-total="distribution-loss">{p(z.ducts_loss_W)}</td>
+                  <td />
+                  <td className="text-right" data-total="distribution-gain">{p(z.ducts_gain_W)}</td>
+                  <td />
+                </tr>
+                {z.ducts_in_zone_W !== 0 ? (
+                  <tr className="text-micro italic text-muted" data-line="in-zone">
+                    <td colSpan={5} className="pb-1 pl-3">
+                      Ducts inside the zone they serve: {p(z.ducts_in_zone_W)} {W} {z.ducts_in_zone_W >= 0 ? "to" : "from"} the zone, for reference, not in totals
+                    </td>
+                  </tr>
+                ) : null}
+              </tbody>
+            ))}
+            <tbody>
+              <tr className="border-t-2 border-line font-semibold">
+                <th scope="row" className="py-1 text-left">All zones</th>
+                <td className="py-1 text-right text-frost">{p(total.loss)}</td>
+                <td />
+                <td className="py-1 text-right text-heat">{p(total.gain)}</td>
+                <td />
+              </tr>
+            </tbody>
+          </table>
+          <p className="text-micro text-muted" data-testid="totals-exclusions">
+            Fabric: surfaces to outside air. Distribution: duct runs crossing unconditioned or outdoor space. {exclusionsSentence()}
+          </p>
+        </div>
+        <ZoneTotalsChart data={bars} unit={W} />
+      </div>
       <details className="text-small" onToggle={(e) => setOpen(e.currentTarget.open)}>
         <summary className="cursor-pointer font-medium">Every design case</summary>
         <table className="mt-2 w-full" aria-label="Zone totals in every design case">
-          <thead className="text-micro uppercase text-muted">
+          <thead className="text-micro text-muted">
             <tr>
               <th className="py-1 text-left font-medium">Zone</th>
               {byCase.map(({ dc }) => (

@@ -1,5 +1,6 @@
 import type { Working } from "@/calc/index";
 import { EngineeringCaution } from "@/components/engineering-caution";
+import { SurfaceRowChecks } from "./row-checks";
 import { LocalHChart, WindChart } from "./working-charts";
 import { WorkingLines } from "./working-lines";
 
@@ -20,6 +21,8 @@ export function WorkingView({ working, title }: { working: Working; title: strin
               Method <a href={`/methods#${r.correlation}`} className="font-mono text-accent">{r.correlation}</a>
               {typeof r.regime === "string" ? ` · regime ${r.regime}` : ""}
             </>
+          ) : r.error.code === "not_computed" ? (
+            <span className="font-semibold">Not computed: {r.error.message}</span>
           ) : (
             <span className="text-danger">
               {r.error.field}: {r.error.message}
@@ -42,6 +45,7 @@ export function WorkingView({ working, title }: { working: Working; title: strin
           <WindChart charts={working.charts} />
         </div>
       )}
+      <SurfaceRowChecks working={working} />
       <WorkingLines working={working} />
       {working.methods.length > 0 && (
         <section aria-label="Methods applied">

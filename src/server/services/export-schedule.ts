@@ -2,16 +2,16 @@ import "server-only";
 import ExcelJS from "exceljs";
 import Papa from "papaparse";
 import { ENGINEERING_CAUTION } from "@/components/engineering-caution";
-import type { ScheduleResults } from "@/calc/index";
+import { exclusionsSentence, type ScheduleResults } from "@/calc/index";
 import { labelOf } from "@/schemas/schedule-fields";
 import type { TSchedule, TSheet } from "@/schemas/schedule";
 import { CSV_ESCAPE_FORMULAE } from "@/schedule/csv-formulae";
 import { resultsFor } from "@/schedule/engine-schedule";
-import { RESULT_COLUMNS, resultHeader, resultValue } from "@/schedule/result-columns";
+import { RESULT_COLUMNS, resultBand, resultHeader, resultValue, rowProblem, type ResultColumn, type RowOutcome } from "@/schedule/result-columns";
 import { SHEET_COLUMNS, SHEET_TITLES, columnHeader, flagLabel, type SheetColumn } from "@/schedule/sheet-columns";
 import type { Actor } from "@/server/auth/actor";
 import { AppError } from "@/server/http/app-error";
-import { toDisplay, type UnitSystem } from "@/units/units";
+import { toDisplay, unitLabel, type UnitSystem } from "@/units/units";
 import { getScheduleOrThrow } from "./get-schedule";
 
 export interface ExportOptions {
@@ -51,23 +51,54 @@ function inputCell(col: SheetColumn, row: Record<string, unknown>, system: UnitS
   }
 }
 
+/** A band is two numeric columns in a file (least and greatest), so a spreadsheet can compute with them. */
+function exportHeaders(c: ResultColumn, system: UnitSystem): string[] {
+  if (!c.band) return [resultHeader(c, system)];
+  return [resultHeader({ ...c, title: `${c.title}, least` }, system), resultHeader({ ...c, title: `${c.title}, greatest` }, system)];
+}
+
+function exportCells(c: ResultColumn, r: RowOutcome | undefined, system: UnitSystem): Cell[] {
+  const round = (v: number | string | null) => (typeof v === "number" ? Number(v.toPrecision(6)) : v);
+  if (!c.band) return [round(resultValue(c, r, system))];
+  const b = resultBand(c, r, system);
+  return b === null ? [null, null] : [round(b[0]), round(b[1])];
+}
+
 function sheetTable(s: TSchedule, sheet: TSheet, template: boolean, results: ScheduleResults | null, caseName: string): Cell[][] {
   const system = s.project.unit_system;
   const cols = SHEET_COLUMNS[sheet];
   const extra = results ? RESULT_COLUMNS[sheet] : [];
-  const header: Cell[] = [...cols.map((c) => columnHeader(c, system)), ...extra.map((c) => `${resultHeader(c, system)} — ${caseName}`)];
+  const header: Cell[] = [...cols.map((c) => columnHeader(c, system)), ...extra.flatMap((c) => exportHeaders(c, system).map((h) => `${h} — ${caseName}`))];
+  if (results) header.push(`Notes — ${caseName}`);
   if (template) return [header];
   const names = new Map([...s.zones, ...s.buildups].map((n) => [n.id, n.name]));
   const rows = sheet === "surfaces" ? s.surfaces : s.duct_runs;
-  const byId = new Map((results ? (sheet === "surfaces" ? results.surfaces : results.duct_runs) : []).map((r) => [r.row_id, r.result]));
-  const body = rows.map((row) => [
-    ...cols.map((c) => inputCell(c, row as unknown as Record<string, unknown>, system, names)),
-    ...extra.map((c) => {
-      const v = resultValue(c, byId.get(row.id), system);
-      return typeof v === "number" ? Number(v.toPrecision(6)) : v;
-    }),
-  ]);
+  const byId = new Map((results ? (sheet === "surfaces" ? results.surfaces : results.duct_runs) : []).map((r) => [r.row_id, r]));
+  const body = rows.map((row) => {
+    const r = byId.get(row.id);
+    const cells: Cell[] = [...cols.map((c) => inputCell(c, row as unknown as Record<string, unknown>, system, names)), ...extra.flatMap((c) => exportCells(c, r, system))];
+    if (results) cells.push(rowProblem(r)?.text ?? (r?.result.ok ? r.result.warnings.map((w) => w.message).join("; ") || null : null));
+    return cells;
+  });
   return [header, ...body];
+}
+
+/** The zone totals of the case: fabric and distribution apart, ducts inside their zone for reference, and what every total leaves out. */
+function zoneTotalsTable(s: TSchedule, results: ScheduleResults, caseName: string): Cell[][] {
+  const system = s.project.unit_system;
+  const W = (v: number) => Number(toDisplay("power", v, system).toPrecision(6));
+  const Wm2 = (v: number | null) => (v === null ? null : Number(toDisplay("heat_flux", v, system).toPrecision(6)));
+  const p = unitLabel("power", system);
+  const f = unitLabel("heat_flux", system);
+  const header: Cell[] = [
+    `Zone — ${caseName}`, `Fabric loss (${p})`, `Fabric gain (${p})`, `Distribution loss (${p})`, `Distribution gain (${p})`,
+    `Heat loss (${p})`, `Heat gain (${p})`, `Heat loss per floor area (${f})`, `Heat gain per floor area (${f})`,
+    `Ducts inside the zone they serve, heat to the zone (${p}): for reference, not in the totals`,
+  ];
+  const body = results.zones.map((z) => [
+    z.name, W(z.surfaces_loss_W), W(z.surfaces_gain_W), W(z.ducts_loss_W), W(z.ducts_gain_W), W(z.loss_W), W(z.gain_W), Wm2(z.loss_W_m2), Wm2(z.gain_W_m2), W(z.ducts_in_zone_W),
+  ]);
+  return [header, ...body, [], [exclusionsSentence()], ["Distribution: duct runs crossing unconditioned or outdoor space. Surfaces over ground are not computed (ISO 13370) and not in the totals."], [ENGINEERING_CAUTION]];
 }
 
 function readMe(ws: ExcelJS.Worksheet, s: TSchedule): void {
@@ -87,6 +118,7 @@ function readMe(ws: ExcelJS.Worksheet, s: TSchedule): void {
       lines.push([`${SHEET_TITLES[sheet]}: ${columnHeader(c, system)}`, allowed]);
     }
   }
+  lines.push(["Totals", exclusionsSentence()]);
   lines.push(["Caution", ENGINEERING_CAUTION]);
   for (const l of lines) ws.addRow(l);
   ws.getColumn(1).font = { bold: true };
@@ -113,6 +145,12 @@ export async function exportSchedule(actor: Actor, projectId: string, opts: Expo
     ws.addRows(sheetTable(s, sheet, opts.template, results, dc?.name ?? ""));
     ws.getRow(1).font = { bold: true };
     ws.columns.forEach((c) => (c.width = 16));
+  }
+  if (results) {
+    const ws = wb.addWorksheet("Zone totals", { views: [{ state: "frozen", ySplit: 1 }] });
+    ws.addRows(zoneTotalsTable(s, results, dc?.name ?? ""));
+    ws.getRow(1).font = { bold: true };
+    ws.columns.forEach((c, i) => (c.width = i === 0 ? 28 : 18));
   }
   readMe(wb.addWorksheet("Read me"), s);
   const body = new Uint8Array(await wb.xlsx.writeBuffer());

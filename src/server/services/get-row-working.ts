@@ -1,5 +1,5 @@
 import "server-only";
-import { ductRunCase, surfaceCase, working, type Working } from "@/calc/index";
+import { ductRunRowWorking, surfaceRowWorking, type Working } from "@/calc/index";
 import { snapshotSchedule } from "@/checking/build-snapshot";
 import type { TCheckSheet, TCheckState } from "@/checking/check-machine";
 import type { TProject } from "@/schemas/project";
@@ -43,7 +43,8 @@ export async function getRowWorking(actor: Actor, projectId: string, sheet: TChe
   const zone = schedule.zones.find((z) => z.id === row.zone_id)!;
   const buildup = "buildup_id" in row ? schedule.buildups.find((b) => b.id === row.buildup_id)! : null;
   let w: Working | null = null;
-  if (dc) w = sheet === "surfaces" ? working(surfaceCase(site, dc, zone, buildup!, row as (typeof schedule.surfaces)[number])) : working(ductRunCase(site, dc, zone, row as (typeof schedule.duct_runs)[number]));
+  // The schedule's row working: a surface's also carries the spread over the three methods and the inside-surface check (zone RH).
+  if (dc) w = sheet === "surfaces" ? surfaceRowWorking(site, dc, zone, buildup!, row as (typeof schedule.surfaces)[number]) : ductRunRowWorking(site, dc, zone, row as (typeof schedule.duct_runs)[number]);
 
   const [check, comments, states] = await Promise.all([
     findCheck(q, projectId, sheet, rowId),

@@ -6,6 +6,8 @@ import { resultsFor } from "@/schedule/engine-schedule";
 import { RESULT_COLUMNS } from "@/schedule/result-columns";
 import { SHEET_TITLES } from "@/schedule/sheet-columns";
 import { ImportPanel } from "@/components/grid/import-panel";
+import { passesRowFilter, type RowFilter } from "@/components/grid/grid-context";
+import { RowFilterBar } from "@/components/grid/row-filter-bar";
 import { ScheduleGrid } from "@/components/grid/schedule-grid";
 import { useSheetEditing } from "@/components/grid/use-sheet-editing";
 import { Notices } from "@/components/schedule/notices";
@@ -22,12 +24,19 @@ export function ScheduleView() {
   const [caseId, setCaseId] = useState(() => (schedule.design_cases.find((d) => d.kind === "heating") ?? schedule.design_cases[0])?.id ?? null);
   const [selected, setSelected] = useState<string[]>([]);
   const [importing, setImporting] = useState(false);
+  const [rowFilter, setRowFilter] = useState<RowFilter>("all");
+  const [shown, setShown] = useState<number | null>(null);
   const editing = useSheetEditing(sheet, schedule);
   const dc = schedule.design_cases.find((d) => d.id === caseId) ?? schedule.design_cases[0];
 
   // Every edit changes `schedule`, and with it every row's results and the zone totals, here in the browser.
   const results = useMemo(() => (dc ? resultsFor(schedule, dc) : null), [schedule, dc]);
-  const byRow = useMemo(() => new Map((results ? [...results.surfaces, ...results.duct_runs] : []).map((r) => [r.row_id, r.result])), [results]);
+  const byRow = useMemo(() => new Map((results ? [...results.surfaces, ...results.duct_runs] : []).map((r) => [r.row_id, r])), [results]);
+  const filterCounts = useMemo(() => {
+    const rows = results?.surfaces ?? [];
+    const count = (f: RowFilter) => rows.filter((r) => passesRowFilter(f, r)).length;
+    return { all: rows.length, method_sensitive: count("method_sensitive"), inside_risk: count("inside_risk") };
+  }, [results]);
   const totals = useMemo(() => {
     const rows = sheet === "surfaces" ? schedule.surfaces : schedule.duct_runs;
     const t: Record<string, number> = { area_m2: 0, length_m: 0 };
@@ -37,7 +46,7 @@ export function ScheduleView() {
     }
     for (const c of RESULT_COLUMNS[sheet].filter((c) => c.total)) {
       t[c.key] = rows.reduce((sum, r) => {
-        const res = byRow.get(r.id);
+        const res = byRow.get(r.id)?.result;
         return sum + (res?.ok ? ((res as Record<string, unknown>)[c.key] as number) : 0);
       }, 0);
     }
@@ -72,13 +81,17 @@ export function ScheduleView() {
       />
       <Notices />
       {importing && canEdit ? <ImportPanel sheet={sheet} onClose={() => setImporting(false)} /> : null}
-      <div className="grid gap-4 xl:grid-cols-[minmax(0,1fr)_20rem]">
+      {/* The totals sit beside the grid only on wide screens: on a laptop the grid needs the width. */}
+      <div className="grid gap-4 2xl:grid-cols-[minmax(0,1fr)_20rem]">
         <section aria-label={`${SHEET_TITLES[sheet]} sheet`} className="min-w-0">
+          {sheet === "surfaces" ? <RowFilterBar value={rowFilter} onChange={setRowFilter} counts={filterCounts} shown={shown} total={schedule.surfaces.length} /> : null}
           <ScheduleGrid
             key={sheet}
             sheet={sheet}
             schedule={schedule}
             results={byRow}
+            rowFilter={sheet === "surfaces" ? rowFilter : "all"}
+            onShown={setShown}
             totals={totals}
             system={system}
             canEdit={canEdit}
@@ -90,6 +103,7 @@ export function ScheduleView() {
           <p className="mt-2 text-micro text-muted">
             {canEdit ? "Double-click or press Enter to edit; arrows and Tab move; paste a block copied from a spreadsheet onto the focused cell. " : ""}
             Shaded columns are computed for the chosen design case; blank overrides show the build-up&apos;s value in italics.
+            {sheet === "surfaces" ? " The bands give h_o and Q by the three exterior methods (boundary layer, ISO 6946, McAdams); a row is method-sensitive when they move Q by more than 10 %. T_si and f_Rsi check the inside face against the zone air (ISO 13788)." : ""}
           </p>
         </section>
         <ZoneTotalsPanel schedule={schedule} results={results} />

@@ -1,4 +1,5 @@
-import type { CalcResult } from "@/calc/index";
+import type { CalcResult, RowResult } from "@/calc/index";
+import { SURFACE_RESULTS, resultValue } from "@/schedule/result-columns";
 import type { TCheckSheet, TCheckState } from "@/checking/check-machine";
 import { StateBadge } from "@/components/checking/state-badge";
 
@@ -9,13 +10,20 @@ export interface ResultCol {
   digits?: number;
   /** Words for a flag (e.g. condensation) instead of a number. */
   flag?: { yes: string; no: string };
+  /** A schedule check (band, method-sensitive, inside surface) read as the grid reads it; frozen before v2 → "—". */
+  check?: string;
 }
 
 export const SURFACE_COLS: ResultCol[] = [
   { head: "h_c (W/m²K)", key: "h_c_W_m2K", digits: 2 },
+  { head: "h_o across methods (W/m²K)", key: "h_o_band", check: "h_o_band" },
   { head: "U (W/m²K)", key: "U_W_m2K", digits: 3 },
   { head: "T_surface (°C)", key: "T_surface_C", digits: 1 },
   { head: "Q (W)", key: "Q_W", digits: 0 },
+  { head: "Q across methods (W)", key: "Q_band", check: "Q_band" },
+  { head: "Method-sensitive", key: "method_sensitive", check: "method_sensitive" },
+  { head: "T_si (°C)", key: "T_si_C", check: "T_si_C", digits: 1 },
+  { head: "Inside surface", key: "inside_risk", check: "inside_risk" },
 ];
 export const DUCT_COLS: ResultCol[] = [
   { head: "T_leaving (°C)", key: "T_leaving_C", digits: 2 },
@@ -31,6 +39,8 @@ export interface FrozenRow {
   label: string;
   zone: string;
   result: CalcResult | undefined;
+  /** The schedule's checks frozen with the result (revisions issued from v2 on). */
+  checks?: Pick<RowResult, "spread" | "inside">;
   state: TCheckState;
   comments: number;
 }
@@ -40,7 +50,7 @@ export function RevisionRows({ sheet, rows, cols }: { sheet: TCheckSheet; rows: 
   return (
     <div className="overflow-x-auto">
       <table className="w-full text-small" aria-label={sheet === "surfaces" ? "Surfaces" : "Duct runs"}>
-        <thead className="text-left text-micro uppercase tracking-[0.08em] text-muted">
+        <thead className="text-left text-micro tracking-[0.02em] text-muted">
           <tr>
             <th className="py-2 pr-3">{sheet === "surfaces" ? "Surface" : "Duct run"}</th>
             <th className="py-2 pr-3">Zone</th>
@@ -61,6 +71,12 @@ export function RevisionRows({ sheet, rows, cols }: { sheet: TCheckSheet; rows: 
                 <td className="py-1.5 pr-3">{row.label}</td>
                 <td className="py-1.5 pr-3">{row.zone}</td>
                 {cols.map((c) => {
+                  if (c.check !== undefined) {
+                    const col = SURFACE_RESULTS.find((x) => x.key === c.check)!;
+                    const v = row.result ? resultValue(col, { result: row.result, ...row.checks }, "SI") : null;
+                    const risk = typeof v === "string" && (v.startsWith("yes") || v.endsWith("risk"));
+                    return <td key={c.key} className={`py-1.5 pr-3 text-right tabular-nums ${risk ? "font-semibold text-caution" : ""}`}>{typeof v === "number" ? num(v, c.digits) : (v ?? "—")}</td>;
+                  }
                   const v = valueOf(row.result, c.key);
                   if (c.flag) return <td key={c.key} className={`py-1.5 pr-3 ${v === true ? "font-semibold text-danger" : "text-muted"}`}>{v === true ? c.flag.yes : v === false ? c.flag.no : "—"}</td>;
                   return <td key={c.key} className="py-1.5 pr-3 text-right tabular-nums">{num(v, c.digits)}</td>;

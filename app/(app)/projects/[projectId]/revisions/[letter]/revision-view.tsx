@@ -1,4 +1,5 @@
 import Link from "next/link";
+import { exclusionsSentence, type RowResult } from "@/calc/index";
 import type { TCheckSheet } from "@/checking/check-machine";
 import { revisionPath, revisionsPath } from "@/checking/paths";
 import { when } from "@/components/checking/when";
@@ -8,6 +9,10 @@ import { RevisionReportLink } from "@/components/reports/report-build";
 import type { TReportBuild } from "@/schemas/reports";
 import type { TRevision } from "@/server/services/get-revision";
 import { DUCT_COLS, RevisionRows, SURFACE_COLS, num, type FrozenRow } from "./revision-rows";
+
+function frozenResult(r: RowResult | undefined): Pick<FrozenRow, "result" | "checks"> {
+  return { result: r?.result, checks: r ? { spread: r.spread, inside: r.inside } : undefined };
+}
 
 /** An issued revision as it was frozen: zone totals and every row's results for one design case. */
 export function RevisionView({ revision, caseId, reportBuild }: { revision: TRevision; caseId?: string; reportBuild: TReportBuild | null }) {
@@ -24,7 +29,7 @@ export function RevisionView({ revision, caseId, reportBuild }: { revision: TRev
       id: row.id,
       label: row.label,
       zone: zoneName.get(row.zone_id) ?? "",
-      result: results?.[sheet].find((r) => r.row_id === row.id)?.result,
+      ...frozenResult(results?.[sheet].find((r) => r.row_id === row.id)),
       state: stateOf.get(`${sheet} ${row.id}`) ?? "unchecked",
       comments: comments.get(`${sheet} ${row.id}`) ?? 0,
     }));
@@ -60,12 +65,14 @@ export function RevisionView({ revision, caseId, reportBuild }: { revision: TRev
 
       <Panel title="Zone totals" lead={dc ? `${dc.name}: ${dc.T_outdoor_C} °C outside, wind ${dc.V_met_m_s} m/s at the mast` : "No design case"}>
         <table className="w-full text-small">
-          <thead className="text-left text-micro uppercase tracking-[0.08em] text-muted">
+          <thead className="text-left text-micro tracking-[0.02em] text-muted">
             <tr>
               <th className="py-2 pr-3">Zone</th>
               <th className="py-2 pr-3 text-right">Heat loss (W)</th>
+              <th className="py-2 pr-3 text-right">of which distribution (W)</th>
               <th className="py-2 pr-3 text-right">(W/m²)</th>
               <th className="py-2 pr-3 text-right">Heat gain (W)</th>
+              <th className="py-2 pr-3 text-right">of which distribution (W)</th>
               <th className="py-2 text-right">(W/m²)</th>
             </tr>
           </thead>
@@ -74,13 +81,16 @@ export function RevisionView({ revision, caseId, reportBuild }: { revision: TRev
               <tr key={z.zone_id} className="border-t border-line/60">
                 <td className="py-1.5 pr-3">{z.name}</td>
                 <td className="py-1.5 pr-3 text-right tabular-nums text-frost">{num(z.loss_W, 0)}</td>
+                <td className="py-1.5 pr-3 text-right tabular-nums text-muted">{num(z.ducts_loss_W, 0)}</td>
                 <td className="py-1.5 pr-3 text-right tabular-nums">{num(z.loss_W_m2)}</td>
                 <td className="py-1.5 pr-3 text-right tabular-nums text-heat">{num(z.gain_W, 0)}</td>
+                <td className="py-1.5 pr-3 text-right tabular-nums text-muted">{num(z.ducts_gain_W, 0)}</td>
                 <td className="py-1.5 text-right tabular-nums">{num(z.gain_W_m2)}</td>
               </tr>
             ))}
           </tbody>
         </table>
+        <p className="mt-2 text-micro text-muted">Distribution: duct runs crossing unconditioned or outdoor space. {exclusionsSentence()}</p>
       </Panel>
 
       <Panel title="Surfaces" lead={`${s.surfaces.length} rows`}>
