@@ -77,7 +77,7 @@ export function* surfaceTables(w: Writer, input: ReportInput, results: ScheduleR
     yield;
   }
   w.paragraph(
-    "h_o and Q: the chosen method, with the band (least to greatest) over the three exterior methods beneath. Method-sens.: the band of Q as a share of the chosen Q, YES above 10 % (section 7). T_si and f_Rsi: the inside face against the zone air (ISO 13788); f_Rsi,min is the factor needed against mould (surface RH 80 %).",
+    "h_o and Q: the chosen method, with the band (least to greatest) over the three exterior methods beneath. Method-sens.: the band of Q as a share of the chosen Q, YES above 10 % and 1 W/m² (section 7). T_si and f_Rsi: the inside face against the zone air (ISO 13788); f_Rsi,min is the factor needed against mould (surface RH 80 %).",
     7.5,
     MUTED,
   );

@@ -123,6 +123,20 @@ describe("spread between the exterior methods", () => {
   });
 });
 
+describe("method-sensitive needs more than 1 W/m² of spread (common practice: within a U-value's own uncertainty)", () => {
+  test("a large share of a tiny net flow is not method-sensitive", () => {
+    // A summer wall whose sun and sky nearly cancel its U·ΔT: Q small, its spread a large share
+    // of it, yet a fraction of a watt per square metre.
+    const summer: DesignCase = { id: "s", name: "Summer", kind: "cooling", T_outdoor_C: 24, RH_outdoor_pct: 45, V_met_m_s: 3, wind_from_deg: 200, solar_W_m2: { N: 60 }, cloud_cover: 1 };
+    const r = scheduleResults(schedule([surface({ azimuth_deg: 0 })]), { ...summer }).surfaces[0];
+    const s = r.spread!;
+    const perArea = (s.Q_max_W - s.Q_min_W) / 30;
+    expect(perArea).toBeLessThan(1);
+    expect(s.Q_spread_ratio as number).toBeGreaterThan(0.1);
+    expect(s.sensitive).toBe(false);
+  });
+});
+
 describe("surfaces over ground", () => {
   test("are not computed, say why, and stay out of the zone totals", () => {
     const floor = surface({ id: "f1", tilt_deg: 180, exposed_to: "ground" });

@@ -8,7 +8,10 @@ import { EXTERIOR_METHODS, surfaceCore, type ExteriorMethod, type SurfaceInput, 
 
 /** Surface relative humidity above which mould can grow (ISO 13788:2012, §5: 0.8). */
 export const MOULD_SURFACE_RH = 0.8;
-/** Temperature difference below which f_Rsi is not stated (it divides by T_i − T_e), K. */
+/**
+ * Inside-over-outside difference below which f_Rsi is not stated, K: it divides by T_i − T_e, and
+ * ISO 13788's factor describes a face cooled from outside, not a cooling case.
+ */
 const MIN_DT_FOR_FACTOR_K = 1;
 
 export interface InsideSurfaceCheck {
@@ -18,7 +21,7 @@ export interface InsideSurfaceCheck {
   T_dp_inside_C: number;
   /** Lowest inside surface temperature that keeps the surface below 80 % RH, °C. */
   T_si_min_C: number;
-  /** ISO 13788 temperature factor (T_si − T_e)/(T_i − T_e); null when |T_i − T_e| < 1 K. */
+  /** ISO 13788 temperature factor (T_si − T_e)/(T_i − T_e); null unless the inside is 1 K or more warmer. */
   f_Rsi: number | null;
   /** The factor the surface needs against mould, (T_si,min − T_e)/(T_i − T_e); null likewise. */
   f_Rsi_min: number | null;
@@ -46,7 +49,7 @@ export function insideSurfaceCheck(q_W_m2: number, R_si: number, T_i: number, RH
   // p_sat(T_si,min) = p_v/0.8 = (RH_i/0.8)% of p_sat(T_i): the dew point of that vapour pressure.
   const T_min = dewPointHylandWexler(T_i, RH_i / MOULD_SURFACE_RH);
   const dT = T_i - T_e;
-  const factor = Math.abs(dT) >= MIN_DT_FOR_FACTOR_K;
+  const factor = dT >= MIN_DT_FOR_FACTOR_K;
   return {
     T_si_C: T_si,
     T_dp_inside_C: T_dp,
@@ -60,6 +63,13 @@ export function insideSurfaceCheck(q_W_m2: number, R_si: number, T_i: number, RH
 
 /** Share of a row's heat flow the method choice may move before the row is method-sensitive. */
 export const METHOD_SENSITIVE_SHARE = 0.1;
+/**
+ * Least spread of heat flow density, W/m², that makes a row method-sensitive: below it the
+ * difference between methods is smaller than the uncertainty of the U-value itself (common
+ * practice), however large a share of a small net flow it is (a summer wall whose sun and sky
+ * nearly cancel its U·ΔT).
+ */
+export const METHOD_SENSITIVE_MIN_W_M2 = 1;
 
 export interface MethodSpread {
   /** h_o and Q by exterior method. */
@@ -70,7 +80,7 @@ export interface MethodSpread {
   Q_max_W: number;
   /** (Q_max − Q_min)/|Q| of the chosen method; null when that Q is 0. */
   Q_spread_ratio: number | null;
-  /** The method choice moves Q by more than 10 % of the chosen method's Q. */
+  /** The method choice moves Q by more than 10 % of the chosen method's Q, and by more than 1 W/m². */
   sensitive: boolean;
 }
 
@@ -102,6 +112,6 @@ export function methodSpread(s: SurfaceInput, chosen: SurfaceResult): MethodSpre
     Q_min_W: qMin,
     Q_max_W: qMax,
     Q_spread_ratio: ratio,
-    sensitive: ratio === null ? qMax - qMin > 0 : ratio > METHOD_SENSITIVE_SHARE,
+    sensitive: (ratio === null || ratio > METHOD_SENSITIVE_SHARE) && s.area_m2 > 0 && (qMax - qMin) / s.area_m2 > METHOD_SENSITIVE_MIN_W_M2,
   };
 }

@@ -26,7 +26,7 @@ export function SurfaceRowChecks({ working }: { working: Working }) {
         <p className="text-small text-muted">
           h_o {fmt(Math.min(...hs), 1)}–{fmt(Math.max(...hs), 1)} W/m²K, Q {fmt(Math.min(...qs), 0)} to {fmt(Math.max(...qs), 0)} W
           {typeof ratio === "number" ? `, a spread of ${Math.round(ratio * 100)} % of the chosen Q` : ""}.{" "}
-          {sensitive ? <strong className="text-caution">Method-sensitive: the choice of method moves Q by more than 10 %.</strong> : "Not method-sensitive (10 % or less)."}
+          {sensitive ? <strong className="text-caution">Method-sensitive: the choice of method moves Q by more than 10 % (and more than 1 W/m²).</strong> : "Not method-sensitive (10 % or less, or under 1 W/m²)."}
         </p>
         <MethodSpreadChart charts={working.charts} />
       </section>
