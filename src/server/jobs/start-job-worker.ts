@@ -7,6 +7,7 @@ import { BUILD_REPORT_TASK } from "@/server/reports/report-builds";
 import { runReportBuild } from "@/server/reports/run-report-build";
 import { openEmailJob } from "./enqueue-email";
 import { ensureJobSchema } from "./job-schema";
+import { pruneAuthRecords } from "./prune-auth-records";
 import { jobRunnerOptions } from "./runner-options";
 
 type Holder = { __filmsheetWorker?: Promise<Runner[]>; __filmsheetStopWorker?: () => Promise<void> };
@@ -29,12 +30,13 @@ export function startJobWorker(): Promise<Runner[]> {
         prune_sign_in_attempts: async () => {
           await db()("sign_in_attempts").where("created_at", "<", db().raw("now() - interval '1 day'")).delete();
         },
+        prune_auth_records: async () => void (await pruneAuthRecords()),
         // Draft reports are kept a day (an issued revision's report is kept for good).
         prune_draft_reports: async () => {
           await db()("report_builds").where({ kind: "draft" }).where("created_at", "<", db().raw("now() - interval '1 day'")).delete();
         },
       },
-      "17 * * * * prune_sign_in_attempts\n23 * * * * prune_draft_reports",
+      "17 * * * * prune_sign_in_attempts\n23 * * * * prune_draft_reports\n41 * * * * prune_auth_records",
     );
     const runners = await Promise.all(options.map((o) => run(o)));
     holder.__filmsheetStopWorker = async () => {
