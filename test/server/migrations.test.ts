@@ -16,6 +16,7 @@ const TABLES = [
   "deployment_marks",
   "design_cases",
   "duct_runs",
+  "email_confirmations",
   "firm_billing",
   "firms",
   "invitations",

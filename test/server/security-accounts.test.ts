@@ -1,6 +1,7 @@
 // Issue 12, accounts: a removed member loses what they set up, sign-out ends the session on the
-// server, a stranger's pre-registered password does not survive the owner's first link sign-in,
-// and sign-in links are limited. Real PostgreSQL, the built app in-process, a real SMTP sink.
+// server, a sign-up's address is confirmed by link from the account's own session, a stranger's
+// pre-registered password does not survive the owner's first link sign-in, and sign-in links
+// are limited. Real PostgreSQL, the built app in-process, a real SMTP sink.
 import bcrypt from "bcryptjs";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
@@ -54,6 +55,13 @@ async function askForLink(email: string, address: string) {
     .send({ email, csrfToken: csrf.body.csrfToken, callbackUrl: "/projects" });
 }
 
+/** The first message to `to` with this subject, waiting for it. */
+async function mailTo(to: string, subject: string) {
+  await expect.poll(() => mailsTo(to).find((m) => m.subject === subject), { timeout: 20_000 }).toBeDefined();
+  return mailsTo(to).find((m) => m.subject === subject)!;
+}
+const SIGN_IN_LINK = "Your Filmsheet sign-in link";
+const CONFIRM = "Confirm your e-mail address for Filmsheet";
 const mailsTo = (to: string) => sink.messages.filter((m) => (Array.isArray(m.to) ? m.to : [m.to]).some((a) => a?.text.toLowerCase().includes(to)));
 
 beforeAll(async () => {
@@ -178,7 +186,7 @@ describe("an address nobody proved", () => {
 
     // The owner signs in with an e-mailed link: the mailbox is theirs.
     expect((await askForLink(owner, "10.77.0.1")).status).toBe(302);
-    const link = linkIn(await sink.waitFor(owner), "/api/auth/callback/nodemailer");
+    const link = linkIn(await mailTo(owner, SIGN_IN_LINK), "/api/auth/callback/nodemailer");
     const follow = await api().get(link);
     const ownerSession = cookieHeader(follow.headers["set-cookie"]);
     expect(ownerSession).toMatch(/authjs\.session-token=/);
@@ -194,17 +202,42 @@ describe("an address nobody proved", () => {
 
     // Recovered: the owner chooses a password by the reset link and signs in with it.
     expect((await api().post("/api/password-resets").send({ email: owner })).status).toBe(202);
-    await expect.poll(() => mailsTo(owner).find((m) => m.subject === "Choose a new Filmsheet password"), { timeout: 20_000 }).toBeDefined();
-    const token = linkIn(mailsTo(owner).find((m) => m.subject === "Choose a new Filmsheet password")!, "/reset-password/").split("/").at(-1);
+    const token = linkIn(await mailTo(owner, "Choose a new Filmsheet password"), "/reset-password/").split("/").at(-1);
     expect((await api().post("/api/password-resets/confirm").send({ token, password: "owner-password-22" })).status).toBe(200);
     expect((await signInWithPassword(app.server, owner, "owner-password-22", "10.77.0.3")).cookie).toBeDefined();
+  });
+
+  test("the sign-up e-mail's link confirms the address, from a session of that account only", async () => {
+    const { founder, cookie } = await newFirm("confirm");
+    const token = linkIn(await mailTo(founder.email, CONFIRM), "/confirm-email/").split("/").at(-1)!;
+    // Following the link signed out leads to sign-in first (the mailbox alone is not enough).
+    const page = await api().get(`/confirm-email/${token}`);
+    expect(page.status).toBe(307);
+    expect(page.headers.location).toContain(`/sign-in?callbackUrl=${encodeURIComponent(`/confirm-email/${token}`)}`);
+    expect((await api().post("/api/me/email-confirmations").send({ token })).status).toBe(401);
+    const other = await newFirm("confirm-other");
+    const wrong = await with_(api().post("/api/me/email-confirmations"), other.cookie).send({ token });
+    expect(wrong.status).toBe(403);
+    expect((await with_(api().get("/account"), cookie)).text).toContain("not confirmed yet");
+
+    const ok = await with_(api().post("/api/me/email-confirmations"), cookie).send({ token });
+    expect(ok.status, ok.text).toBe(200);
+    expect(ok.body).toEqual({ email: founder.email, confirmed: true });
+    expect((await with_(api().post("/api/me/email-confirmations"), cookie).send({ token })).status).toBe(410);
+    expect((await testDb()("users").where({ email: other.founder.email }).first("emailVerified")).emailVerified).toBeNull();
+
+    // Confirmed: a later sign-in by link leaves the password alone.
+    expect((await askForLink(founder.email, "10.77.2.1")).status).toBe(302);
+    const follow = await api().get(linkIn(await mailTo(founder.email, SIGN_IN_LINK), "/api/auth/callback/nodemailer"));
+    expect((await me(cookieHeader(follow.headers["set-cookie"]))).status).toBe(200);
+    expect((await signInWithPassword(app.server, founder.email, founder.password, "10.77.2.2")).cookie).toBeDefined();
   });
 
   test("a proven address keeps its password when its owner signs in by link", async () => {
     const { firmId } = await newFirm("proven");
     const person = await addPerson(firmId, "proven-person", ["viewer"]);
     expect((await askForLink(person.email, "10.77.1.1")).status).toBe(302);
-    const follow = await api().get(linkIn(await sink.waitFor(person.email), "/api/auth/callback/nodemailer"));
+    const follow = await api().get(linkIn(await mailTo(person.email, SIGN_IN_LINK), "/api/auth/callback/nodemailer"));
     expect((await me(cookieHeader(follow.headers["set-cookie"]))).status).toBe(200);
     expect((await signInWithPassword(app.server, person.email, person.password, "10.77.1.2")).cookie).toBeDefined();
     expect((await me(person.cookie)).status).toBe(200);
@@ -235,6 +268,6 @@ describe("sign-in links are limited", () => {
     expect(mailsTo(target.email)).toHaveLength(0);
     // From elsewhere the same address gets its link.
     expect((await askForLink(target.email, "10.79.250.1")).status).toBe(302);
-    await sink.waitFor(target.email);
+    await mailTo(target.email, SIGN_IN_LINK);
   });
 });

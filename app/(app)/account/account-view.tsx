@@ -1,10 +1,19 @@
 import { PageHeader, Panel } from "@/components/panel";
 import { signOutEverywhereAction } from "./actions";
 
-export function AccountView({ user, sessions }: { user: { name: string | null; email: string }; sessions: number }) {
+export function AccountView({ user, sessions, confirmed }: { user: { name: string | null; email: string }; sessions: number; confirmed: boolean }) {
   return (
     <div className="grid gap-6">
       <PageHeader title="Account" lead={`${user.name ?? user.email} · ${user.email}`} />
+      {confirmed ? null : (
+        <Panel title="Your address is not confirmed yet">
+          <p className="max-w-prose text-small text-muted">
+            Follow the link in the e-mail we sent when you signed up, while signed in here. Until then, the first sign-in with an e-mailed link
+            to {user.email} clears this account&apos;s password (in case someone else signed up with your address); you can then choose a new one with
+            “Forgot your password?”.
+          </p>
+        </Panel>
+      )}
       <Panel
         title="Where you are signed in"
         lead={sessions === 1 ? "Signed in on this browser only." : `Signed in on ${sessions} browsers or devices, this one included.`}

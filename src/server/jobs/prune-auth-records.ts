@@ -11,6 +11,7 @@ export async function pruneAuthRecords(): Promise<Record<string, number>> {
   return {
     verificationTokens: await db()("verification_token").where("expires", "<", dayAgo).delete(),
     passwordResets: await db()("password_resets").where("expires_at", "<", dayAgo).delete(),
+    emailConfirmations: await db()("email_confirmations").where("expires_at", "<", dayAgo).delete(),
     magicLinkRequests: await db()("magic_link_requests").where("created_at", "<", dayAgo).delete(),
     userSessions: await db()("user_sessions")
       .where((q) => q.where("expires_at", "<", dayAgo).orWhere("revoked_at", "<", dayAgo))

@@ -6,6 +6,7 @@ import { db } from "@/server/db/knex";
 import { isUniqueViolation } from "@/server/db/unique-violation";
 import { AppError } from "@/server/http/app-error";
 import { insertMemberships } from "@/server/repositories/memberships";
+import { queueEmailConfirmation } from "./confirm-email";
 
 function slugFor(name: string): string {
   const base = name.toLowerCase().normalize("NFKD").replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 40) || "firm";
@@ -28,6 +29,8 @@ export async function signUpFirm(input: TSignUp): Promise<{ firm: { id: string; 
     const [firm] = await trx("firms").insert({ name: input.firmName, slug: slugFor(input.firmName) }).returning(["id", "name"]);
     const [user] = await trx("users").insert({ name: input.name, email: input.email, password_hash: passwordHash }).returning(["id", "email"]);
     await insertMemberships(trx, firm.id, user.id, ["admin", "consultant"]);
+    // The account works at once; its address counts as proven only once the link is followed.
+    await queueEmailConfirmation(trx, user, firm.name);
     return { firm, user };
   }).catch((error: unknown) => {
     // Two sign-ups with one address at the same moment: the database's unique index decides.
