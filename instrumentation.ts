@@ -1,5 +1,6 @@
 // Runs once when the server starts: fail fast on a bad environment instead of on the first
-// request, then start the e-mail worker (the job queue lives in PostgreSQL).
+// request, stamp each request with its caller's address, then start the job worker (the job
+// queue lives in PostgreSQL).
 export async function register(): Promise<void> {
   if (process.env.NEXT_RUNTIME === "nodejs") {
     const { env } = await import("@/server/env");
@@ -11,6 +12,8 @@ export async function register(): Promise<void> {
         if (tries > 1) setTimeout(() => mark(tries - 1), 30_000).unref();
       });
     mark(20);
+    const { installClientAddress } = await import("@/server/auth/client-address");
+    installClientAddress(env().TRUSTED_PROXIES);
     if (jobsWorker === "on") {
       const { startJobWorker } = await import("@/server/jobs/start-job-worker");
       // Not awaited: the app must serve (and report its health) even while the database is down.

@@ -38,6 +38,10 @@ export default defineConfig({
             AUTH_SECRET: "filmsheet-test-secret-not-for-any-real-site-0123456789",
             // No mail server by default (port 1 refuses at once); e-mail tests start their own sink.
             SMTP_URL: "smtp://127.0.0.1:1?ignoreTLS=true",
+            // Suites act as the one proxy in front of the app: the address they put last in
+            // X-Forwarded-For is the caller's (the sign-in limits count per address).
+            // test/server/sign-in-limit-hardening.test.ts sets 0 to test the direct case.
+            TRUSTED_PROXIES: "1",
           },
           globalSetup: [here("./test/support/require-test-database.ts")],
           // Each file boots its own Next server or database: run them one at a time.

@@ -5,7 +5,7 @@ import { AuthError } from "next-auth";
 import { cookies, headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { z } from "zod";
-import { ZInvitationAccept, ZMagicLinkRequest, ZPasswordResetConfirm, ZPasswordResetRequest, ZSignIn, ZSignUp } from "@/schemas/auth";
+import { ZInvitationAccept, ZLinkToken, ZMagicLinkRequest, ZPasswordResetConfirm, ZPasswordResetRequest, ZSignIn, ZSignUp } from "@/schemas/auth";
 import { CURRENT_FIRM_COOKIE } from "@/server/auth/actor";
 import { SignInRefused, signIn, signOut } from "@/server/auth/auth";
 import { clientAddress } from "@/server/auth/client-address";
@@ -13,6 +13,7 @@ import { getViewer, safeReturnPath } from "@/server/auth/get-viewer";
 import { secureCookies } from "@/server/env";
 import { action, type ActionState } from "@/server/http/action";
 import { acceptInvitation } from "@/server/services/accept-invitation";
+import { confirmEmail } from "@/server/services/confirm-email";
 import { requestPasswordReset } from "@/server/services/request-password-reset";
 import { resetPassword } from "@/server/services/reset-password";
 import { signUpFirm } from "@/server/services/sign-up-firm";
@@ -62,6 +63,14 @@ export const acceptInvitationAction = action({ auth: "public", input: ZInvitatio
   if (viewer?.user.id === result.user.id) redirect("/projects");
   // Signed in with the password just chosen (new account) or just confirmed (existing one).
   return passwordSignIn(result.user.email, input.password ?? "", "/projects");
+});
+
+/** The sign-up e-mail's link, from a session of that account (the page sends others to sign in). */
+export const confirmEmailAction = action({ auth: "optional", input: z.object({ token: ZLinkToken }) }, async ({ input }) => {
+  const viewer = await getViewer();
+  if (!viewer) return { ok: false, code: "unauthenticated", message: "Sign in to the account first, then follow the link again" };
+  const { email } = await confirmEmail(viewer.user.id, input.token);
+  return { ok: true, message: `${email} is confirmed. Thank you.` };
 });
 
 const signOutWrapped = action({ auth: "public" }, async () => {

@@ -33,6 +33,10 @@ export const ZEnv = z.object({
   HEALTH_DB_TIMEOUT_MS: z.coerce.number().int().min(100).max(30000).default(1500),
   // The e-mail worker runs inside every app instance unless switched off (e.g. a web-only node).
   JOBS_WORKER: z.enum(["on", "off"]).default("on"),
+  // Proxies in front of the app that append the caller's address to X-Forwarded-For: 0 (default)
+  // = the app faces the internet and the socket's address is the caller's; N = take the Nth
+  // address from the right of X-Forwarded-For (what the outermost trusted proxy saw).
+  TRUSTED_PROXIES: z.coerce.number().int().min(0).max(10).default(0),
 })
   // Sign-in needs a secret in production, and a production site outside this machine must be
   // served over https so that its session cookie can be marked Secure.

@@ -60,3 +60,15 @@ describe("production settings for sign-in", () => {
     expect(secureCookies(parseEnv({ DATABASE_URL: URL, ...extra }))).toBe(secure);
   });
 });
+
+describe("TRUSTED_PROXIES", () => {
+  const base = { DATABASE_URL: "postgres://u:p@127.0.0.1:5432/db" };
+  test("defaults to 0 (the socket's address counts) and takes a small count", () => {
+    expect(parseEnv(base).TRUSTED_PROXIES).toBe(0);
+    expect(parseEnv({ ...base, TRUSTED_PROXIES: "1" }).TRUSTED_PROXIES).toBe(1);
+  });
+  test("refuses what is not a count of proxies", () => {
+    expect(() => parseEnv({ ...base, TRUSTED_PROXIES: "-1" })).toThrow(/TRUSTED_PROXIES/);
+    expect(() => parseEnv({ ...base, TRUSTED_PROXIES: "yes" })).toThrow(/TRUSTED_PROXIES/);
+  });
+});

@@ -17,5 +17,5 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
   const callbackUrl = safeReturnPath(params.callbackUrl);
   if ((await getViewer())?.actor) redirect(callbackUrl);
   const error = params.code === "rate_limited" ? "Too many sign-in attempts. Wait 15 minutes, or sign in with an e-mailed link." : params.error ? (ERRORS[params.error] ?? "Sign-in failed: try again") : undefined;
-  return <SignInView callbackUrl={callbackUrl} error={error} signedOut={params.signedOut === "1"} />;
+  return <SignInView callbackUrl={callbackUrl} error={error} signedOut={params.signedOut === "1" || params.signedOut === "everywhere"} />;
 }

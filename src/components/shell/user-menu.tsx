@@ -12,9 +12,9 @@ export function UserMenu({ user, signOut }: { user?: { name: string | null; emai
   }
   return (
     <div className="flex items-center gap-2">
-      <span className="hidden max-w-48 truncate text-small text-muted md:inline" title={user.email}>
+      <Link href="/account" className="hidden max-w-48 truncate text-small text-muted hover:underline md:inline" title={`${user.email}: your account`}>
         {user.name ?? user.email}
-      </span>
+      </Link>
       <SignOutButton signOut={signOut} className="px-2.5 py-1 text-small" />
     </div>
   );

@@ -4,10 +4,12 @@ import Credentials from "next-auth/providers/credentials";
 import Nodemailer from "next-auth/providers/nodemailer";
 import { env, secureCookies } from "@/server/env";
 import { authenticatePassword } from "@/server/services/authenticate-password";
+import { claimUnverifiedAccount } from "@/server/services/claim-unverified-account";
 import { sendMagicLink } from "@/server/services/send-magic-link";
 import { userExists } from "@/server/services/user-exists";
 import { filmsheetAdapter } from "./adapter";
 import { clientAddress } from "./client-address";
+import { openUserSession, revokeUserSession, SESSION_MAX_AGE_SECONDS } from "./user-sessions";
 
 /** Shown as `?code=` on the sign-in page; says what happened without saying which part was wrong. */
 export class SignInRefused extends CredentialsSignin {
@@ -26,9 +28,10 @@ export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
   secret: env().AUTH_SECRET,
   trustHost: true,
   basePath: "/api/auth",
-  // Credentials sign-in needs JWT sessions; membership and roles are still read from the
-  // database on every request, so removing someone takes effect at once.
-  session: { strategy: "jwt", maxAge: 30 * 24 * 3600, updateAge: 24 * 3600 },
+  // Credentials sign-in needs JWT sessions. Each carries the id of a user_sessions row, checked
+  // on every request with the person's memberships and roles, so signing out, "sign out
+  // everywhere" and removing someone all take effect at once.
+  session: { strategy: "jwt", maxAge: SESSION_MAX_AGE_SECONDS, updateAge: 24 * 3600 },
   // Session cookies: httpOnly and SameSite=Lax always (Auth.js defaults), Secure over https.
   useSecureCookies: secureCookies(),
   pages: { signIn: "/sign-in", verifyRequest: "/sign-in/check-email", error: "/sign-in" },
@@ -46,7 +49,8 @@ export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
       from: env().MAIL_FROM,
       maxAge: MAGIC_LINK_MINUTES * 60,
       // Queued, not sent here, so a mail server that is down delays the link instead of losing it.
-      sendVerificationRequest: ({ identifier, url, expires }) => sendMagicLink({ email: identifier, url, expiresAt: expires }),
+      sendVerificationRequest: ({ identifier, url, expires, request }) =>
+        sendMagicLink({ email: identifier, url, expiresAt: expires, address: clientAddress(request.headers) }),
     }),
   ],
   callbacks: {
@@ -55,15 +59,20 @@ export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
       // Asking for a link always looks the same (no hint whether the address has an account);
       // completing one works only for an existing account, so links never create users.
       if (email?.verificationRequest) return true;
-      return user.email ? userExists(user.email) : false;
+      if (!user.email || !(await userExists(user.email))) return false;
+      // Following the link proves the address; an account that had not proven it loses the
+      // password a stranger may have chosen when signing it up.
+      if (!("emailVerified" in user && user.emailVerified)) await claimUnverifiedAccount(user.email);
+      return true;
     },
-    jwt({ token, user }) {
+    async jwt({ token, user }) {
       if (user) {
         // Only these claims: the token never carries the password hash or other columns.
         token.sub = String(user.id);
         token.name = user.name ?? null;
         token.email = user.email ?? null;
         token.authAt = Math.floor(Date.now() / 1000);
+        token.sid = await openUserSession(Number(user.id));
       }
       delete token.picture;
       return token;
@@ -71,7 +80,14 @@ export const { handlers, auth, signIn, signOut } = NextAuth(() => ({
     session({ session, token }) {
       session.user = { id: token.sub ?? "", name: token.name ?? null, email: token.email ?? "", emailVerified: null };
       (session as typeof session & { authAt?: number }).authAt = typeof token.authAt === "number" ? token.authAt : 0;
+      (session as typeof session & { sid?: unknown }).sid = token.sid;
       return session;
+    },
+  },
+  events: {
+    // Signing out ends the session on the server too, not only in this browser's cookie jar.
+    async signOut(message) {
+      if ("token" in message && message.token) await revokeUserSession(message.token.sid);
     },
   },
   logger: {

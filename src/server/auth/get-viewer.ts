@@ -8,7 +8,7 @@ import { resolveSessionActor, type SessionUser } from "./resolve-session-actor";
  * The signed-in person for pages and the header, once per request. A database that does not
  * answer shows the page signed out rather than failing it (the health check reports it).
  */
-export const getViewer = cache(async (): Promise<{ user: SessionUser; actor: Actor | null } | null> => {
+export const getViewer = cache(async (): Promise<{ user: SessionUser; actor: Actor | null; sessionId: string } | null> => {
   try {
     return await resolveSessionActor();
   } catch (error) {

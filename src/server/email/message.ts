@@ -3,7 +3,7 @@ import { z } from "zod";
 
 /** One e-mail as the queue carries it: rendered already, so a retry sends the same bytes. */
 export const ZEmailMessage = z.object({
-  kind: z.enum(["invitation", "magic_link", "password_reset", "check_requested", "row_queried", "query_answered", "revision_issued"]),
+  kind: z.enum(["invitation", "magic_link", "password_reset", "email_confirmation", "check_requested", "row_queried", "query_answered", "revision_issued"]),
   to: z.email(),
   subject: z.string().min(1),
   text: z.string().min(1),

@@ -8,6 +8,7 @@ import { recoverStalledBuilds, stallSeconds } from "@/server/reports/recover-sta
 import { runReportBuild } from "@/server/reports/run-report-build";
 import { openEmailJob } from "./enqueue-email";
 import { ensureJobSchema } from "./job-schema";
+import { pruneAuthRecords } from "./prune-auth-records";
 import { jobRunnerOptions } from "./runner-options";
 
 type Holder = { __filmsheetWorker?: Promise<Runner[]>; __filmsheetStopWorker?: () => Promise<void> };
@@ -32,12 +33,13 @@ export function startJobWorker({ retry = true }: { retry?: boolean } = {}): Prom
         prune_sign_in_attempts: async () => {
           await db()("sign_in_attempts").where("created_at", "<", db().raw("now() - interval '1 day'")).delete();
         },
+        prune_auth_records: async () => void (await pruneAuthRecords()),
         // Draft reports are kept a day (an issued revision's report is kept for good).
         prune_draft_reports: async () => {
           await db()("report_builds").where({ kind: "draft" }).where("created_at", "<", db().raw("now() - interval '1 day'")).delete();
         },
       },
-      "17 * * * * prune_sign_in_attempts\n23 * * * * prune_draft_reports",
+      "17 * * * * prune_sign_in_attempts\n23 * * * * prune_draft_reports\n41 * * * * prune_auth_records",
     );
     const runners = await Promise.all(options.map((o) => run(o)));
     // Report builds whose worker died are restarted by whichever worker notices first.

@@ -26,7 +26,13 @@ export async function acceptInvitation(
   who: { signedIn: { id: number; email: string } | null; address: string },
 ): Promise<{ firm: { id: string; name: string }; user: { id: number; email: string }; roles: TRole[]; accountCreated: boolean }> {
   // Hash a new account's password before the transaction: bcrypt is slow, locks should not wait.
-  const invited = await db()("invitations").where({ token_hash: hashSecret(input.token) }).first("email");
+  // Only an open invitation is worth bcrypt's time; a closed one is refused below without it.
+  const invited = await db()("invitations")
+    .where({ token_hash: hashSecret(input.token) })
+    .whereNull("accepted_at")
+    .whereNull("revoked_at")
+    .andWhere("expires_at", ">", db().fn.now())
+    .first("email");
   const newAccount = invited !== undefined && !(await userExists(invited.email));
   const passwordHash = newAccount && input.password !== undefined ? await hashPassword(input.password) : undefined;
   return db().transaction(async (trx) => {

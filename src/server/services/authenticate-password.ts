@@ -1,7 +1,7 @@
 import "server-only";
 import { ZSignIn } from "@/schemas/auth";
 import { verifyPassword } from "@/server/auth/password";
-import { checkSignInLimit, recordSignInAttempt } from "@/server/auth/sign-in-limit";
+import { reserveSignInAttempt, settleSignInAttempt } from "@/server/auth/sign-in-limit";
 import { db } from "@/server/db/knex";
 
 export type PasswordCheck =
@@ -18,14 +18,12 @@ export async function authenticatePassword(credentials: unknown, address: string
   if (!parsed.success) return { ok: false, reason: "invalid" };
   const { email, password } = parsed.data;
 
-  const limit = await checkSignInLimit(email, address);
-  if (limit.blocked) {
-    await recordSignInAttempt(email, address, "blocked");
-    return { ok: false, reason: "rate_limited", retryAfterSeconds: limit.retryAfterSeconds };
-  }
+  // Counted before bcrypt runs: parallel guesses cannot all slip in under the limit.
+  const reserved = await reserveSignInAttempt(email, address);
+  if (reserved.blocked) return { ok: false, reason: "rate_limited", retryAfterSeconds: reserved.retryAfterSeconds };
   const user = await db()("users").where({ email }).first<{ id: number; name: string | null; email: string; password_hash: string | null } | undefined>("id", "name", "email", "password_hash");
   const ok = await verifyPassword(password, user?.password_hash);
-  await recordSignInAttempt(email, address, ok ? "ok" : "failed");
+  await settleSignInAttempt(reserved.attemptId, ok ? "ok" : "failed");
   if (!ok || !user) return { ok: false, reason: "invalid" };
   return { ok: true, user: { id: String(user.id), name: user.name, email: user.email } };
 }

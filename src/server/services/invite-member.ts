@@ -14,6 +14,10 @@ import { INVITATION_COLUMNS, INVITATION_DAYS, queueInvitationEmail, type TInvita
  * saved in one transaction, so there is never an invitation without its e-mail or the reverse.
  */
 export async function inviteMember(actor: Actor, input: TInvite): Promise<TInvitationRow> {
+  // An admin token inviting admins could hand the firm to whoever holds the token, for good.
+  if (actor.via === "token" && input.roles.includes("admin")) {
+    throw new AppError("forbidden", "An API token cannot invite admins: sign in as a firm admin", [{ field: "roles", message: "Not with an API token" }]);
+  }
   const already = (message: string) => new AppError("conflict", message, [{ field: "email", message }]);
   return db()
     .transaction(async (trx) => {

@@ -37,6 +37,15 @@ export const ENTRIES: MatrixEntry[] = [
   { file: "auth/[...nextauth]/route.ts", method: "GET", request: async () => ({ path: "/api/auth/session" }), expect: same(200) },
   { file: "auth/[...nextauth]/route.ts", method: "POST", request: async () => ({ path: "/api/auth/callback/credentials", form: { email: "nobody@example.test", password: "x" } }), expect: same(302) },
   { file: "me/route.ts", method: "GET", request: async () => ({ path: "/api/me" }), expect: anyMember(200), isolation: noDemoData },
+  // A made-up confirmation link: 404 for people, 403 for a token (no person to confirm).
+  {
+    file: "me/email-confirmations/route.ts",
+    method: "POST",
+    request: async () => ({ path: "/api/me/email-confirmations", body: { token: "x".repeat(43) } }),
+    expect: { ...anyMember(404), admin_token: 403 },
+  },
+  // Signs out the caller's other sessions (each principal here has one); a token is no person.
+  { file: "me/sessions/route.ts", method: "DELETE", request: async () => ({ path: "/api/me/sessions" }), expect: { ...anyMember(200), admin_token: 403 } },
   {
     file: "calc/route.ts",
     method: "POST",
@@ -71,7 +80,8 @@ export const ENTRIES: MatrixEntry[] = [
     expect: adminOnly(200, 404),
   },
   { file: "firm/tokens/route.ts", method: "GET", request: async () => ({ path: "/api/firm/tokens" }), expect: adminOnly(200), isolation: noDemoData },
-  { file: "firm/tokens/route.ts", method: "POST", request: async () => ({ path: "/api/firm/tokens", body: { name: "matrix", role: "viewer", expiresInDays: 7 } }), expect: adminOnly(201) },
+  // Only a person makes tokens: an admin token gets 403.
+  { file: "firm/tokens/route.ts", method: "POST", request: async () => ({ path: "/api/firm/tokens", body: { name: "matrix", role: "viewer", expiresInDays: 7 } }), expect: { ...adminOnly(201), admin_token: 403 } },
   { file: "firm/tokens/[tokenId]/route.ts", method: "DELETE", request: async () => ({ path: `/api/firm/tokens/${await newToken()}` }), expect: adminOnly(200, 404) },
   { file: "firm/billing/route.ts", method: "GET", request: async () => ({ path: "/api/firm/billing" }), expect: adminOnly(200), isolation: noDemoData },
   // Checkout is for a firm without a subscription; each admin's firm gets a session (never paid).

@@ -34,7 +34,7 @@ export function TokensView({ tokens }: { tokens: TApiToken[] | null }) {
                 <table className="w-full text-left text-small">
                   <thead className="text-micro uppercase text-muted">
                     <tr>
-                      {["Name", "Starts with", "Role", "Status", "Expires", "Last used", ""].map((h) => (
+                      {["Name", "Starts with", "Role", "Made by", "Status", "Expires", "Last used", ""].map((h) => (
                         <th key={h} className="py-2 pr-4 font-medium">{h}</th>
                       ))}
                     </tr>
@@ -45,6 +45,9 @@ export function TokensView({ tokens }: { tokens: TApiToken[] | null }) {
                         <td className="py-2 pr-4 font-medium">{t.name}</td>
                         <td className="py-2 pr-4 font-mono">{t.prefix}…</td>
                         <td className="py-2 pr-4">{ROLE_LABELS[t.role]}</td>
+                        <td className="py-2 pr-4" title={t.created_by?.email}>
+                          {t.created_by ? (t.created_by.name ?? t.created_by.email) : <span className="text-muted" title="Made before makers were recorded, or by an account that no longer exists">unknown</span>}
+                        </td>
                         <td className={`py-2 pr-4 font-medium ${STATUS_TONE[t.status]}`}>{t.status}</td>
                         <td className="py-2 pr-4 text-muted">{when(t.expires_at)}</td>
                         <td className="py-2 pr-4 text-muted">{when(t.last_used_at)}</td>
