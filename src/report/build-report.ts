@@ -6,9 +6,11 @@
 import { jsPDF } from "jspdf";
 import { ductRunRowWorking, scheduleResults, surfaceRowWorking, type MethodUsed, type Working, type DesignCase } from "@/calc/index";
 import { finishPages, Writer } from "./layout";
-import { conventions, cover, designCases, methodStatement, zoneTotals } from "./sections";
+import { conventions, cover, designCases, methodIdentifiers, methodRefs, methodStatement, zoneTotals } from "./sections";
 import { spreadSection } from "./checks";
+import { scheduleSummary } from "./summary";
 import { ductTables, surfaceTables, warningsList, workingsAppendix } from "./rows";
+import { useReportFont } from "./report-font";
 import type { ReportInput } from "./types";
 
 export interface BuiltReport {
@@ -19,8 +21,8 @@ export interface BuiltReport {
 
 /**
  * A jsPDF document without the Arabic-shaping and bidirectional-text passes, which run on every
- * text() call and cost a third of a large report's time: all report text is Latin-1 (pdfText), so
- * they have nothing to do. jsPDF subscribes a document to the plugin events when it is created,
+ * text() call and cost a third of a large report's time: report text is left-to-right Latin, Greek
+ * and mathematical symbols (pdfText), so they have nothing to do. jsPDF subscribes a document to the plugin events when it is created,
  * so the list is narrowed only around the constructor and other documents keep every pass.
  */
 function latinDocument(): jsPDF {
@@ -32,7 +34,9 @@ function latinDocument(): jsPDF {
     (e[0] === "postProcessText" && /isInputVisual/.test(String(e[1])));
   api.events = all.filter((e) => !shaping(e));
   try {
-    return new jsPDF({ unit: "mm", format: "a4", compress: true });
+    const doc = new jsPDF({ unit: "mm", format: "a4", compress: true });
+    useReportFont(doc);
+    return doc;
   } finally {
     api.events = all;
   }
@@ -96,11 +100,13 @@ export function* reportSteps(input: ReportInput, every = 25): Generator<ReportPr
   for (const _ of ductTables(w, input, results)) yield tabling();
   spreadSection(w, input, results, "7");
   const warnings = warningsList(w, input, results);
+  scheduleSummary(w, input, results);
   const appendixStart = SHARE.workings + SHARE.tables;
   yield { fraction: appendixStart, stage: "Writing the appendix of workings" };
-  for (const written of workingsAppendix(w, input, items, every)) {
+  for (const written of workingsAppendix(w, input, items, every, methodRefs([...methods.values()]))) {
     yield { fraction: appendixStart + (SHARE.appendix * written) / Math.max(1, items.length), stage: "Writing the appendix of workings" };
   }
+  methodIdentifiers(w, [...methods.values()]);
   yield { fraction: appendixStart + SHARE.appendix, stage: "Numbering the pages" };
   const pages = finishPages(doc, input.meta);
   return { pdf: new Uint8Array(doc.output("arraybuffer")), pages, warnings };

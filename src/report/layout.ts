@@ -1,6 +1,7 @@
 /** Page furniture of the report: headings, running footer, page numbers and the watermark. */
 import { jsPDF } from "jspdf";
 import { pdfText } from "./pdf-text";
+import { FONT } from "./report-font";
 import type { ReportMeta } from "./types";
 
 export const PAGE = { w: 210, h: 297, margin: 16, footer: 12 } as const;
@@ -25,16 +26,16 @@ export class Writer {
   }
 
   newPage(): void {
-    this.doc.addPage();
+    this.doc.addPage("a4", "portrait");
     this.y = PAGE.margin;
   }
 
   heading(text: string, size = 14): void {
     this.need(size * 0.9 + 4);
-    this.doc.setFont("helvetica", "bold").setFontSize(size).setTextColor(...ACCENT);
+    this.doc.setFont(FONT, "bold").setFontSize(size).setTextColor(...ACCENT);
     this.doc.text(pdfText(text), PAGE.margin, this.y + size * 0.35);
     this.y += size * 0.55 + 3;
-    this.doc.setTextColor(INK).setFont("helvetica", "normal");
+    this.doc.setTextColor(INK).setFont(FONT, "normal");
   }
 
   paragraph(text: string, size = 9, color = INK, indent = 0): void {
@@ -62,18 +63,21 @@ export function finishPages(doc: jsPDF, meta: ReportMeta): number {
   const rev = meta.revision === null ? "Draft" : `Revision ${meta.revision}`;
   for (let i = 1; i <= n; i++) {
     doc.setPage(i);
+    // Pages of the schedule summary are landscape: place the furniture by each page's own size.
+    const pw = doc.internal.pageSize.getWidth();
+    const ph = doc.internal.pageSize.getHeight();
     if (meta.watermark) {
       doc.saveGraphicsState();
       doc.setGState(new (doc as unknown as { GState: new (o: { opacity: number }) => unknown }).GState({ opacity: 0.12 }) as never);
-      doc.setFont("helvetica", "bold").setFontSize(54).setTextColor(150, 20, 20);
-      doc.text("NOT FOR ISSUE", PAGE.w / 2, PAGE.h / 2, { align: "center", angle: 45, baseline: "middle" });
+      doc.setFont(FONT, "bold").setFontSize(54).setTextColor(150, 20, 20);
+      doc.text("NOT FOR ISSUE", pw / 2, ph / 2, { align: "center", angle: 45, baseline: "middle" });
       doc.restoreGraphicsState();
     }
-    const y = PAGE.h - PAGE.margin + 2;
-    doc.setDrawColor(200).setLineWidth(0.2).line(PAGE.margin, y - 5, PAGE.w - PAGE.margin, y - 5);
-    doc.setFont("helvetica", "normal").setFontSize(7).setTextColor(MUTED);
+    const y = ph - PAGE.margin + 2;
+    doc.setDrawColor(200).setLineWidth(0.2).line(PAGE.margin, y - 5, pw - PAGE.margin, y - 5);
+    doc.setFont(FONT, "normal").setFontSize(7).setTextColor(MUTED);
     doc.text(pdfText(`Filmsheet · ${meta.projectName} (${meta.projectReference}) · ${rev} · ${meta.date}`), PAGE.margin, y - 1.5);
-    doc.text(`page ${i} of ${n}`, PAGE.w - PAGE.margin, y - 1.5, { align: "right" });
+    doc.text(`page ${i} of ${n}`, pw - PAGE.margin, y - 1.5, { align: "right" });
     doc.setFontSize(6.5);
     doc.text(pdfText(CAUTION), PAGE.margin, y + 1.8);
   }

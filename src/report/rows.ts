@@ -1,18 +1,24 @@
 /** Row tables per design case, the warnings list and the appendix of workings. */
 import { autoTable } from "jspdf-autotable";
+import { MAX_INSULATION_M } from "@/calc/duct-run";
 import type { CalcWarning, DesignCase, ScheduleResults, Working } from "@/calc/index";
-import { bandCell, bare, insideCell, insideRiskRows, spreadCell } from "./checks";
-import { num, withUnit } from "./format";
+import { bandCell, bare, factorCell, insideCell, insideRiskRows, spreadCell } from "./checks";
+import { cell, head, num, withUnit } from "./format";
+import { plainText, plainWord } from "./plain-words";
 import { ACCENT, INK, MUTED, PAGE, Writer } from "./layout";
 import { pdfText } from "./pdf-text";
+import { FONT } from "./report-font";
 import type { ReportInput } from "./types";
 
 const TABLE = {
-  styles: { font: "helvetica", fontSize: 6.5, cellPadding: 0.9, textColor: INK, lineColor: 220, lineWidth: 0.1 },
+  styles: { font: FONT, fontSize: 6.5, cellPadding: 0.9, textColor: INK, lineColor: 220, lineWidth: 0.1 },
   headStyles: { fillColor: ACCENT, textColor: 255, fontStyle: "bold" as const },
   margin: { left: PAGE.margin, right: PAGE.margin, bottom: PAGE.margin + PAGE.footer },
   theme: "grid" as const,
 };
+
+/** Numbers right-aligned, so that digits line up down a column. */
+const NUMERIC = (columns: number[]) => Object.fromEntries(columns.map((i) => [i, { halign: "right" as const }]));
 
 const val = (r: { ok: boolean } & Record<string, unknown>, k: string) => (r.ok ? (r[k] as number) : null);
 
@@ -20,14 +26,13 @@ const val = (r: { ok: boolean } & Record<string, unknown>, k: string) => (r.ok ?
 function caseTitle(w: Writer, input: ReportInput, r: ScheduleResults): void {
   const dc = input.designCases.find((d) => d.id === r.design_case_id);
   w.need(14);
-  w.doc.setFont("helvetica", "bold").setFontSize(9.5).text(pdfText(dc?.name ?? ""), PAGE.margin, w.y + 3);
+  w.doc.setFont(FONT, "bold").setFontSize(9.5).text(pdfText(dc?.name ?? ""), PAGE.margin, w.y + 3);
   w.y += 5;
 }
 
 /** Section 5, one table per design case; yields after each (a large table takes a while). */
 export function* surfaceTables(w: Writer, input: ReportInput, results: ScheduleResults[]): Generator<void, void> {
   const c = input.convert;
-  const u = (unit: string) => (c ? c(1, unit).unit : unit);
   const zones = new Map(input.schedule.zones.map((z) => [z.id, z.name]));
   w.heading("5  External surfaces");
   for (const r of results) {
@@ -36,15 +41,15 @@ export function* surfaceTables(w: Writer, input: ReportInput, results: ScheduleR
       ...TABLE,
       startY: w.y,
       head: [[
-        "Row", "Zone", `Area (${u("m²")})`, "Tilt/az. (°)", `V surf. (${u("m/s")})`, `h_o (${u("W/m²K")}), band`, `U (${u("W/m²K")})`, `T_s (${u("°C")})`,
-        `Q (${u("W")}), band`, "Method-sens.", `T_si (${u("°C")})`, "f_Rsi / min", "Inside", "Check",
+        "Row", "Zone", head("Area", "m²", c), "Tilt/azimuth (°)", head("Wind at surface", "m/s", c), `${head("h_o", "W/m²K", c)}, band`, head("U", "W/m²K", c), head("T_s", "°C", c),
+        `${head("Heat loss, + out", "W", c)}, band`, "Method-sensitive", head("T_si", "°C", c), "f_Rsi / min", "Inside", "Check",
       ].map(pdfText)],
-      columnStyles: { 0: { cellWidth: 22 }, 1: { cellWidth: 16 }, 4: { cellWidth: 10 }, 5: { cellWidth: 15 }, 8: { cellWidth: 17 }, 9: { cellWidth: 15 }, 12: { cellWidth: 20 } },
+      columnStyles: { 0: { cellWidth: 22 }, 1: { cellWidth: 16 }, 4: { cellWidth: 11 }, 5: { cellWidth: 15 }, 8: { cellWidth: 17 }, 9: { cellWidth: 15 }, 11: { cellWidth: 15 }, 12: { cellWidth: 22 }, ...NUMERIC([2, 3, 4, 5, 6, 7, 8, 10, 11]) },
       body: r.surfaces.map((s, i) => {
         const row = input.schedule.surfaces[i];
         const res = s.result as { ok: boolean } & Record<string, unknown>;
         const check = input.checks?.[row.id] ?? "unchecked";
-        const lead = [row.label, zones.get(row.zone_id) ?? "", bare(row.area_m2, "m²", c, 3), `${num(row.tilt_deg, 3)}/${num(row.azimuth_deg, 3)}`].map(pdfText);
+        const lead = [row.label, zones.get(row.zone_id) ?? "", bare(row.area_m2, "m²", c), `${num(row.tilt_deg, "°")}/${num(row.azimuth_deg, "°")}`].map(pdfText);
         if (!res.ok) {
           const e = (s.result as { error?: { code: string; field: string; message: string } }).error;
           const why = e?.code === "not_computed" && e.field === "exposed_to" ? "Not computed: over ground (ISO 13370); not in the totals" : e?.code === "not_computed" ? `Not computed: ${e.message}` : `error: ${e?.message ?? ""}`;
@@ -55,11 +60,11 @@ export function* surfaceTables(w: Writer, input: ReportInput, results: ScheduleR
         return [
           ...lead,
           ...[
-            bare(val(res, "V_surface_m_s"), "m/s", c, 3),
-            `${bare(val(res, "h_o_W_m2K"), "W/m²K", c, 3)}${sp ? `\n${bandCell(sp.h_o_min_W_m2K, sp.h_o_max_W_m2K, "W/m²K", c)}` : ""}`,
-            bare(val(res, "U_W_m2K"), "W/m²K", c, 3), bare(val(res, "T_surface_C"), "°C", c, 3),
-            `${bare(val(res, "Q_W"), "W", c)}${sp ? `\n${bandCell(sp.Q_min_W, sp.Q_max_W, "W", c, 4)}` : ""}`,
-            spreadCell(s), bare(ins?.T_si_C, "°C", c, 3), ins ? `${num(ins.f_Rsi, 2)} / ${num(ins.f_Rsi_min, 2)}` : "-", insideCell(s), check,
+            bare(val(res, "V_surface_m_s"), "m/s", c),
+            `${bare(val(res, "h_o_W_m2K"), "W/m²K", c)}${sp ? `\n${bandCell(sp.h_o_min_W_m2K, sp.h_o_max_W_m2K, "W/m²K", c)}` : ""}`,
+            bare(val(res, "U_W_m2K"), "W/m²K", c), bare(val(res, "T_surface_C"), "°C", c),
+            `${bare(val(res, "Q_W"), "W", c)}${sp ? `\n${bandCell(sp.Q_min_W, sp.Q_max_W, "W", c)}` : ""}`,
+            spreadCell(s), bare(ins?.T_si_C, "°C", c), ins ? `${factorCell(ins.f_Rsi)} / ${factorCell(ins.f_Rsi_min)}` : "–", insideCell(s), check,
           ].map((x) => pdfText(String(x))),
         ];
       }),
@@ -77,7 +82,7 @@ export function* surfaceTables(w: Writer, input: ReportInput, results: ScheduleR
     yield;
   }
   w.paragraph(
-    "h_o and Q: the chosen method, with the band (least to greatest) over the three exterior methods beneath. Method-sens.: the band of Q as a share of the chosen Q, YES above 10 % and 1 W/m² (section 7). T_si and f_Rsi: the inside face against the zone air (ISO 13788); f_Rsi,min is the factor needed against mould (surface RH 80 %).",
+    "h_o and Q: the chosen method, with the band (least to greatest) over the three exterior methods beneath. Method-sensitive: the band of Q as a share of the chosen Q, YES above 10 % and 1 W/m² (section 7, Spread between methods). T_si and f_Rsi: the inside face against the zone air (ISO 13788); f_Rsi,min is the factor needed against mould (surface RH 80 %).",
     7.5,
     MUTED,
   );
@@ -93,19 +98,20 @@ export function* ductTables(w: Writer, input: ReportInput, results: ScheduleResu
     autoTable(w.doc, {
       ...TABLE,
       startY: w.y,
-      head: [["Row", "Zone served", "Length", "Flow", "T_leaving", "Q (to air)", "T_s min", "Dew point", "Condensation", "Least insulation", "Check"]],
+      head: [["Row", "Zone served", head("Length", "m", c), head("Flow", "m³/s", c), head("Leaving air", "°C", c), head("Heat to the air, + warms", "W", c), head("Lowest T_s", "°C", c), head("Dew point", "°C", c), "Condensation", head("Least insulation", "m", c), "Check"]],
       body: r.duct_runs.map((s, i) => {
         const row = input.schedule.ductRuns[i];
         const res = s.result as { ok: boolean } & Record<string, unknown>;
         const tmin = res.ok ? Math.min(res.T_surface_entering_C as number, res.T_surface_leaving_C as number) : null;
         const tmi = res.ok ? (res.min_insulation_thickness_m as number | null) : null;
         return [
-          row.label, zones.get(row.zone_id) ?? "", withUnit(row.length_m, "m", c, 3), withUnit(row.flow_m3_s, "m³/s", c, 3),
-          withUnit(val(res, "T_leaving_C"), "°C", c), withUnit(val(res, "Q_W"), "W", c), withUnit(tmin, "°C", c, 3), withUnit(val(res, "T_dp_C"), "°C", c, 3),
-          res.ok ? (res.condensation ? "YES" : "no") : "error", res.ok ? (tmi === null ? "> 0.5 m" : withUnit(tmi, "m", c, 3)) : "-",
+          row.label, zones.get(row.zone_id) ?? "", cell(row.length_m, "m", c), cell(row.flow_m3_s, "m³/s", c),
+          cell(val(res, "T_leaving_C"), "°C", c), cell(val(res, "Q_W"), "W", c), cell(tmin, "°C", c), cell(val(res, "T_dp_C"), "°C", c),
+          res.ok ? (res.condensation ? "YES" : "no") : "error", res.ok ? (tmi === null ? `> ${cell(MAX_INSULATION_M, "m", c)}` : cell(tmi, "m", c)) : "–",
           input.checks?.[row.id] ?? "unchecked",
         ].map((x) => pdfText(String(x)));
       }),
+      columnStyles: NUMERIC([2, 3, 4, 5, 6, 7, 9]),
     });
     w.afterTable();
     yield;
@@ -118,7 +124,7 @@ export function warningsList(w: Writer, input: ReportInput, results: ScheduleRes
   for (const r of results) {
     const dc = input.designCases.find((d) => d.id === r.design_case_id)?.name ?? "";
     const add = (label: string, warnings: CalcWarning[]) => {
-      for (const x of warnings) rows.push([label, dc, x.code, x.message].map(pdfText));
+      for (const x of warnings) rows.push([label, dc, plainWord(x.code), plainText(x.message)].map(pdfText));
     };
     r.surfaces.forEach((s, i) => s.result.ok && add(input.schedule.surfaces[i].label, s.result.warnings));
     r.duct_runs.forEach((s, i) => s.result.ok && add(input.schedule.ductRuns[i].label, s.result.warnings));
@@ -129,7 +135,7 @@ export function warningsList(w: Writer, input: ReportInput, results: ScheduleRes
     return 0;
   }
   w.paragraph(`${rows.length} warnings. Each is an extrapolation, a non-converged balance or an inside surface at risk of mould or condensation (ISO 13788), to be reviewed before the results are relied on.`, 8.5, MUTED);
-  autoTable(w.doc, { ...TABLE, startY: w.y, head: [["Row", "Case", "Code", "Message"]], columnStyles: { 3: { cellWidth: 110 } }, body: rows });
+  autoTable(w.doc, { ...TABLE, startY: w.y, head: [["Row", "Case", "Kind", "Message"]], columnStyles: { 3: { cellWidth: 110 } }, body: rows });
   w.afterTable();
   return rows.length;
 }
@@ -139,7 +145,13 @@ export function warningsList(w: Writer, input: ReportInput, results: ScheduleRes
  * generator: it yields the number of workings written after every `every` of them, so a caller
  * can report progress (and let other work run) while a large appendix is written.
  */
-export function* workingsAppendix(w: Writer, input: ReportInput, items: { label: string; dc: DesignCase; working: Working }[], every = 25): Generator<number, void> {
+export function* workingsAppendix(
+  w: Writer,
+  input: ReportInput,
+  items: { label: string; dc: DesignCase; working: Working }[],
+  every = 25,
+  refs: ReadonlyMap<string, string> = new Map(),
+): Generator<number, void> {
   w.newPage();
   w.heading("Appendix A  Workings");
   w.paragraph("Each row's derivation for each design case, in calculation order, as the engine computed it (inputs are in sections 5 and 6, the spread between methods in sections 5 and 7).", 8, MUTED);
@@ -158,7 +170,7 @@ export function* workingsAppendix(w: Writer, input: ReportInput, items: { label:
   const flush = () => {
     if (run.length === 0) return;
     const [font, color] = runStyle.split("|");
-    doc.setFont("helvetica", font).setTextColor(Number(color));
+    doc.setFont(FONT, font).setTextColor(Number(color));
     doc.text(run, PAGE.margin + col * (colW + 6), runY + 2, { lineHeightFactor: lh / (6.3 * 0.3528) });
     run = [];
   };
@@ -167,7 +179,7 @@ export function* workingsAppendix(w: Writer, input: ReportInput, items: { label:
       flush();
       if (col === 0) col = 1;
       else {
-        doc.addPage();
+        doc.addPage("a4", "portrait");
         col = 0;
       }
       w.y = col === 1 && doc.getNumberOfPages() === firstPage ? top : PAGE.margin;
@@ -189,7 +201,7 @@ export function* workingsAppendix(w: Writer, input: ReportInput, items: { label:
   let written = 0;
   for (const it of items) {
     if (w.y + lh * 6 > w.bottom) w.y = w.bottom; // start a block at the top of the next column
-    line(pdfText(`${it.label} - ${it.dc.name}`), true, ACCENT[0]);
+    line(pdfText(`${it.label} — ${it.dc.name}`), true, ACCENT[0]);
     let section = "";
     for (const l of it.working.lines) {
       // Inputs are in sections 5 and 6, and each row's spread between methods in sections 5 and 7.
@@ -198,8 +210,7 @@ export function* workingsAppendix(w: Writer, input: ReportInput, items: { label:
         section = l.section;
         line(pdfText(section), true, MUTED);
       }
-      const v = typeof l.value === "number" ? withUnit(l.value, l.unit, input.convert) : `${String(l.value)}${l.unit ? ` ${l.unit}` : ""}`;
-      wrapped(pdfText(`${l.symbol} = ${v}${l.note ? `   ${l.note}` : ""}${l.method ? ` [${l.method}]` : ""}`));
+      wrapped(pdfText(appendixLine(l, input, refs)));
     }
     w.y += lh * 0.6;
     if (run.length > 0) {
@@ -209,4 +220,14 @@ export function* workingsAppendix(w: Writer, input: ReportInput, items: { label:
     if (++written % every === 0) yield written;
   }
   flush();
+}
+
+/** One line of a working in the appendix: symbol, value in the project's units, how it follows, [M#]. */
+function appendixLine(l: Working["lines"][number], input: ReportInput, refs: ReadonlyMap<string, string>): string {
+  const v =
+    typeof l.value === "number"
+      ? withUnit(l.value, l.unit, input.convert)
+      : `${typeof l.value === "string" ? plainWord(l.value) : l.value === null ? "–" : l.value ? "yes" : "no"}${l.unit ? ` ${l.unit}` : ""}`;
+  const ref = l.method === undefined ? "" : ` [${refs.get(l.method) ?? plainWord(l.method)}]`;
+  return `${l.symbol} = ${v}${l.note ? `   ${plainText(l.note)}` : ""}${ref}`;
 }

@@ -2,13 +2,15 @@
 import { autoTable } from "jspdf-autotable";
 import { CONVENTIONS } from "@/calc/conventions";
 import { exclusionsSentence, type DesignCase, type MethodUsed, type ScheduleResults } from "@/calc/index";
-import { withUnit, num } from "./format";
+import { cell, head, num, withUnit } from "./format";
+import { plainText, plainWord } from "./plain-words";
 import { ACCENT, CAUTION, INK, MUTED, PAGE, Writer } from "./layout";
 import { pdfText } from "./pdf-text";
+import { FONT } from "./report-font";
 import type { ReportInput } from "./types";
 
 const TABLE = {
-  styles: { font: "helvetica", fontSize: 7.5, cellPadding: 1.2, textColor: INK, lineColor: 220, lineWidth: 0.1 },
+  styles: { font: FONT, fontSize: 7.5, cellPadding: 1.2, textColor: INK, lineColor: 220, lineWidth: 0.1 },
   headStyles: { fillColor: ACCENT, textColor: 255, fontStyle: "bold" as const },
   margin: { left: PAGE.margin, right: PAGE.margin, bottom: PAGE.margin + PAGE.footer },
   theme: "grid" as const,
@@ -21,14 +23,14 @@ export function cover(w: Writer, input: ReportInput): void {
   const doc = w.doc;
   doc.setFillColor(...ACCENT).rect(0, 0, PAGE.w, 8, "F");
   w.y = 40;
-  doc.setFont("helvetica", "normal").setFontSize(11).setTextColor(MUTED).text("CALCULATION REPORT", PAGE.margin, w.y);
+  doc.setFont(FONT, "normal").setFontSize(11).setTextColor(MUTED).text("CALCULATION REPORT", PAGE.margin, w.y);
   w.y += 12;
-  doc.setFont("helvetica", "bold").setFontSize(24).setTextColor(INK);
+  doc.setFont(FONT, "bold").setFontSize(24).setTextColor(INK);
   for (const line of doc.splitTextToSize(pdfText(m.projectName), PAGE.w - 2 * PAGE.margin) as string[]) {
     doc.text(line, PAGE.margin, w.y);
     w.y += 10;
   }
-  doc.setFont("helvetica", "normal").setFontSize(11).text(pdfText("External surfaces and duct runs: film coefficients, surface temperatures, heat flows and condensation"), PAGE.margin, w.y);
+  doc.setFont(FONT, "normal").setFontSize(11).text(pdfText("External surfaces and duct runs: film coefficients, surface temperatures, heat flows and condensation"), PAGE.margin, w.y);
   w.y += 14;
   autoTable(doc, {
     ...TABLE,
@@ -44,6 +46,7 @@ export function cover(w: Writer, input: ReportInput): void {
       ["Status", m.status === "issued" ? "Issued" : "Draft"],
       ["Prepared by", m.author],
       ["Checked by", m.checker ?? "Not checked"],
+      ...(m.allAccepted === true && m.status === "draft" ? [["Check", "Every row accepted; not yet issued as a revision"]] : []),
       ["Date", m.date],
       ["Units", m.unitSystem === "IP" ? "IP (inch-pound)" : "SI"],
       ["Rows", `${input.schedule.surfaces.length} surfaces, ${input.schedule.ductRuns.length} duct runs, ${input.designCases.length} design cases`],
@@ -61,26 +64,33 @@ export function designCases(w: Writer, input: ReportInput): void {
   autoTable(w.doc, {
     ...TABLE,
     startY: w.y,
-    head: [["Case", "Kind", "Outdoor", "RH", "Wind at mast", "From", "Solar (horizontal)"]],
+    head: [["Case", "Kind", head("Outdoor", "°C", c), "RH (%)", head("Wind at mast", "m/s", c), "From (°)", head("Solar (horizontal)", "W/m²", c)]],
     body: clean(
       input.designCases.map((d) => [
-        d.name, d.kind, withUnit(d.T_outdoor_C, "°C", c, 3), `${num(d.RH_outdoor_pct, 3)} %`, withUnit(d.V_met_m_s, "m/s", c, 3),
-        `${num(d.wind_from_deg, 3)}°`, withUnit(d.solar_W_m2.horizontal ?? 0, "W/m²", c, 3),
+        d.name, plainWord(d.kind), cell(d.T_outdoor_C, "°C", c), num(d.RH_outdoor_pct, "%"), cell(d.V_met_m_s, "m/s", c),
+        num(d.wind_from_deg, "°"), cell(d.solar_W_m2.horizontal ?? 0, "W/m²", c),
       ]),
     ),
+    columnStyles: { 2: { halign: "right" }, 3: { halign: "right" }, 4: { halign: "right" }, 5: { halign: "right" }, 6: { halign: "right" } },
   });
   w.afterTable();
 }
 
+/** Short references M1, M2 … of the methods, in the order the method statement lists them. */
+export function methodRefs(methods: MethodUsed[]): Map<string, string> {
+  return new Map(methods.map((m, i) => [m.id, `M${i + 1}`]));
+}
+
 export function methodStatement(w: Writer, methods: MethodUsed[]): void {
   w.heading("2  Method statement");
-  w.paragraph("Every method used for the results of this report, with its equation, published source and the range in which it was published. Uses outside that range are listed in section 8.", 8.5, MUTED);
+  w.paragraph("Every method used for the results of this report, with its equation, published source and the range in which it was published; the workings in Appendix A cite each by its reference (M1 …), and Appendix B gives the identifier the software records for each. Uses outside a range are listed in section 8.", 8.5, MUTED);
+  const refs = methodRefs(methods);
   autoTable(w.doc, {
     ...TABLE,
     startY: w.y,
-    head: [["Method", "Equation", "Validity", "Source"]],
-    columnStyles: { 0: { cellWidth: 38 }, 1: { cellWidth: 52 }, 2: { cellWidth: 30 } },
-    body: clean(methods.map((m) => [m.title, m.equation, m.validity, m.source])),
+    head: [["Ref.", "Method", "Equation", "Validity", "Source"]],
+    columnStyles: { 0: { cellWidth: 9 }, 1: { cellWidth: 36 }, 2: { cellWidth: 50 }, 3: { cellWidth: 30 } },
+    body: clean(methods.map((m) => [refs.get(m.id) ?? "", m.title, m.equation, plainText(m.validity), m.source])),
   });
   w.afterTable();
 }
@@ -91,7 +101,7 @@ export function conventions(w: Writer): void {
     ...TABLE,
     startY: w.y,
     columnStyles: { 0: { cellWidth: 38, fontStyle: "bold" } },
-    body: clean(CONVENTIONS.map((c) => [c.topic, c.text])),
+    body: clean(CONVENTIONS.map((c) => [c.topic, plainText(c.text)])),
   });
   w.afterTable();
 }
@@ -104,19 +114,21 @@ export function zoneTotals(w: Writer, input: ReportInput, results: ScheduleResul
   for (const r of results) {
     const dc = input.designCases.find((d) => d.id === r.design_case_id);
     w.need(20);
-    w.doc.setFont("helvetica", "bold").setFontSize(9.5).text(pdfText(dc?.name ?? r.design_case_id), PAGE.margin, w.y + 3);
+    w.doc.setFont(FONT, "bold").setFontSize(9.5).text(pdfText(dc?.name ?? r.design_case_id), PAGE.margin, w.y + 3);
     w.y += 5;
     autoTable(w.doc, {
       ...TABLE,
       startY: w.y,
       styles: { ...TABLE.styles, fontSize: 7 },
-      head: [["Zone", "Floor area", "Fabric loss", "Distribution loss", "Heat loss", "Fabric gain", "Distribution gain", "Heat gain", "Loss / gain per floor area", ""]],
-      columnStyles: { 9: { cellWidth: 30 } },
+      head: [["Zone", head("Floor area", "m²", c), head("Fabric loss", "W", c), head("Distribution loss", "W", c), head("Heat loss", "W", c), head("Fabric gain", "W", c), head("Distribution gain", "W", c), head("Heat gain", "W", c), `${head("Loss / gain per floor area", "W/m²", c)}`, ""]],
+      columnStyles: { ...Object.fromEntries([1, 2, 3, 4, 5, 6, 7, 8].map((i) => [i, { halign: "right" as const }])), 9: { cellWidth: 30 } },
+      // A zone's line is never split over two pages: its bar belongs beside its numbers.
+      rowPageBreak: "avoid",
       body: clean(
         r.zones.map((z) => [
-          z.name, withUnit(z.floor_area_m2, "m²", c), withUnit(z.surfaces_loss_W, "W", c), withUnit(z.ducts_loss_W, "W", c), withUnit(z.loss_W, "W", c),
-          withUnit(z.surfaces_gain_W, "W", c), withUnit(z.ducts_gain_W, "W", c), withUnit(z.gain_W, "W", c),
-          `${withUnit(z.loss_W_m2, "W/m²", c)} / ${withUnit(z.gain_W_m2, "W/m²", c)}`, "",
+          z.name, cell(z.floor_area_m2, "m²", c), cell(z.surfaces_loss_W, "W", c), cell(z.ducts_loss_W, "W", c), cell(z.loss_W, "W", c),
+          cell(z.surfaces_gain_W, "W", c), cell(z.ducts_gain_W, "W", c), cell(z.gain_W, "W", c),
+          `${cell(z.loss_W_m2, "W/m²", c)} / ${cell(z.gain_W_m2, "W/m²", c)}`, "",
         ]),
       ),
       didParseCell: (data) => {
@@ -125,6 +137,7 @@ export function zoneTotals(w: Writer, input: ReportInput, results: ScheduleResul
       didDrawCell: (data) => {
         if (data.section !== "body" || data.column.index !== 9) return;
         const z = r.zones[data.row.index];
+        if (z === undefined) return; // the rest of a row split over a page (index -1): its bar is drawn once
         const x = data.cell.x + 1;
         const full = data.cell.width - 2;
         const h = (data.cell.height - 1.5) / 2;
@@ -140,11 +153,27 @@ export function zoneTotals(w: Writer, input: ReportInput, results: ScheduleResul
     }
     w.y += 2;
   }
-  w.paragraph("Bars: heat loss (upper, blue) and heat gain (lower, orange), to one scale across all cases.", 7.5, MUTED);
+  w.paragraph("Heat loss adds up the surfaces' heat flows out of the zone (positive out) and heat gain those into it; a duct run's heat to its air counts as the zone's gain when it warms the air and as its loss when it cools it. Bars: heat loss (upper, blue) and heat gain (lower, orange), to one scale across all cases.", 7.5, MUTED);
   w.paragraph(
     "Fabric: surfaces to outside air. Distribution: duct runs crossing unconditioned or outdoor space, on their own line; a duct run inside the zone it serves gives its heat to that zone and is left out of its totals. Surfaces over ground are not computed (ISO 13370) and are not in the totals.",
     7.5,
     MUTED,
   );
   w.paragraph(exclusionsSentence(), 8, INK);
+}
+
+/** Appendix B: the identifier the software records for each method (API, exports, audit trail). */
+export function methodIdentifiers(w: Writer, methods: MethodUsed[]): void {
+  const refs = methodRefs(methods);
+  w.newPage();
+  w.heading("Appendix B  Method identifiers");
+  w.paragraph("The identifier under which each method of section 2 is recorded in the software, its exports and its interface.", 8, MUTED);
+  autoTable(w.doc, {
+    ...TABLE,
+    startY: w.y,
+    head: [["Ref.", "Method", "Identifier"]],
+    columnStyles: { 0: { cellWidth: 12 }, 2: { cellWidth: 55 } },
+    body: clean(methods.map((m) => [refs.get(m.id) ?? "", m.title, m.id])),
+  });
+  w.afterTable();
 }

@@ -11,6 +11,8 @@ export interface ReportMeta {
   firmName: string;
   author: string;
   checker: string | null;
+  /** A draft built after every row was accepted says so on its cover. */
+  allAccepted?: boolean;
   /** ISO date of the report (or of the revision's issue). */
   date: string;
   status: "draft" | "issued";

@@ -63,7 +63,7 @@ export const SURFACE_RESULTS: readonly ResultColumn[] = [
   { key: "f_Rsi", title: "f_Rsi", digits: 2, width: 80, read: (r) => r.inside?.f_Rsi, nullText: "n/a (ΔT < 1 K)" },
   { key: "f_Rsi_min", title: "f_Rsi,min (mould)", digits: 2, width: 96, read: (r) => r.inside?.f_Rsi_min, nullText: "n/a (ΔT < 1 K)" },
   { key: "inside_risk", title: "Inside surface", width: 136, read: insideRiskText },
-  { key: "Q_W", title: "Q", quantity: "power", digits: 0, total: true },
+  { key: "Q_W", title: "Heat loss", quantity: "power", digits: 0, total: true },
 ];
 
 export const DUCT_RUN_RESULTS: readonly ResultColumn[] = [
@@ -71,7 +71,7 @@ export const DUCT_RUN_RESULTS: readonly ResultColumn[] = [
   { key: "h_o_conv_W_m2K", title: "h_o", quantity: "film", digits: 2 },
   { key: "regime", title: "Inside flow" },
   { key: "T_leaving_C", title: "Leaving air", quantity: "temperature", digits: 2 },
-  { key: "Q_W", title: "Q", quantity: "power", digits: 0, total: true },
+  { key: "Q_W", title: "Heat to the air", quantity: "power", digits: 0, total: true },
   { key: "T_dp_C", title: "Dew point", quantity: "temperature", digits: 1 },
   { key: "condensation", title: "Condensation", flag: ["risk", "none"] },
   { key: "min_insulation_thickness_m", title: "Least insulation", quantity: "thickness", digits: 1, nullText: "none enough" },

@@ -23,6 +23,8 @@ test("the worked example shows a row's working with its charts, correlation, Re 
   await expect(page.getByRole("figure", { name: "Film coefficient against wind speed" }).locator("svg").first()).toBeVisible();
   const convection = page.getByRole("region", { name: "Convection" });
   await expect(convection).toContainText("Re_L");
-  await expect(convection).toContainText("churchill-combined-plate");
+  await expect(convection).toContainText("Combined forced and natural convection, plates");
+  await expect(convection).not.toContainText("churchill-combined-plate");
+  await expect(convection.getByRole("link", { name: "Combined forced and natural convection, plates (Churchill, n = 3)" }).first()).toHaveAttribute("title", "Method churchill-combined-plate");
   await expect(page.getByRole("region", { name: "Methods applied" })).toContainText("Churchill, H. H. S. Chu");
 });

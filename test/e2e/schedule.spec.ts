@@ -129,11 +129,11 @@ test.describe("on the paid plan", () => {
 
 test("switching the project to IP units shows °F and Btu/h", async ({ page }) => {
   await openDemoSchedule(page);
-  await expect(page.locator('.ag-header-cell[col-id="r:Q_W"]')).toContainText("Q (W)");
+  await expect(page.locator('.ag-header-cell[col-id="r:Q_W"]')).toContainText("Heat loss (W)");
   const saved = page.waitForResponse((r) => /\/api\/projects\/[^/]+$/.test(r.url()) && r.request().method() === "PATCH");
   await page.getByRole("radio", { name: "IP" }).click();
   expect((await saved).status()).toBe(200);
-  await expect(page.locator('.ag-header-cell[col-id="r:Q_W"]')).toContainText("Q (Btu/h)");
+  await expect(page.locator('.ag-header-cell[col-id="r:Q_W"]')).toContainText("Heat loss (Btu/h)");
   await expect(page.locator('.ag-header-cell[col-id="area_m2"]')).toContainText("Area (ft²)");
   await expect(page.getByRole("table", { name: "Zone totals for the design case" })).toContainText("Loss Btu/h");
   await page.getByRole("tab", { name: /Duct runs/ }).click();
@@ -146,5 +146,5 @@ test("switching the project to IP units shows °F and Btu/h", async ({ page }) =
   await expect(page.getByLabel("Heating set point (°F)").first()).toBeVisible();
   await page.getByRole("navigation", { name: "Project" }).getByRole("link", { name: "Schedule" }).click();
   await page.getByRole("radio", { name: "SI" }).click();
-  await expect(page.locator('.ag-header-cell[col-id="r:Q_W"]')).toContainText("Q (W)");
+  await expect(page.locator('.ag-header-cell[col-id="r:Q_W"]')).toContainText("Heat loss (W)");
 });

@@ -161,7 +161,7 @@ describe("XLSX import, export and templates", () => {
     const ws = wb2.getWorksheet("Surfaces")!;
     expect(ws.rowCount).toBe(1 + (await surfacesOf(fx.projectId)).length);
     const headings = (ws.getRow(1).values as string[]).slice(1);
-    expect(headings).toContain("Q (W) — Winter");
+    expect(headings).toContain("Heat loss (W) — Winter");
     // v2: the bands as least and greatest columns, the method-sensitive flag and the inside surface.
     for (const h of ["h_o across methods, least (W/(m²·K)) — Winter", "Q across methods, greatest (W) — Winter", "Method-sensitive (> 10 %) — Winter", "Inside surface T_si (°C) — Winter", "Inside surface — Winter"]) expect(headings).toContain(h);
     const sensitiveCol = headings.indexOf("Method-sensitive (> 10 %) — Winter") + 1;

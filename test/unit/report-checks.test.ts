@@ -4,7 +4,8 @@
 import { describe, expect, test } from "vitest";
 import { exclusionsSentence, scheduleResults, type Schedule } from "../../src/calc/index";
 import { buildReport } from "../../src/report/build-report";
-import { num } from "../../src/report/format";
+import { factorCell } from "../../src/report/checks";
+import { cell } from "../../src/report/format";
 import { pdfText } from "../../src/report/pdf-text";
 import type { ReportMeta } from "../../src/report/types";
 import { pdfPages } from "../support/pdf-text";
@@ -47,11 +48,11 @@ describe("report: v2 results", { timeout: 60_000 }, () => {
 
   test("zone totals list distribution on its own line, the ducts inside their zone for reference, and the exclusions", async () => {
     const t = await text;
-    for (const h of ["Fabric loss", "Distribution loss", "Fabric gain", "Distribution gain"]) expect(t).toContain(h);
+    // Units in the headings, bare numbers by the heat flow's rule in the cells.
+    for (const h of ["Fabric loss (W)", "Distribution loss (W)", "Fabric gain (W)", "Distribution gain (W)"]) expect(t).toContain(h);
     for (const r of results) {
       for (const z of r.zones) {
-        expect(t).toContain(`${num(z.surfaces_loss_W)} W`);
-        expect(t).toContain(`${num(z.ducts_loss_W)} W`);
+        expect(t).toContain(`${z.name} ${cell(z.floor_area_m2, "m²")} ${cell(z.surfaces_loss_W, "W")} ${cell(z.ducts_loss_W, "W")}`);
       }
     }
     expect(t).toContain("Ducts inside the zone they serve, for reference, not in the totals");
@@ -65,13 +66,14 @@ describe("report: v2 results", { timeout: 60_000 }, () => {
   test("surface tables carry the h_o and Q bands, the method-sensitive mark, T_si, f_Rsi and the inside verdict", async () => {
     const t = await text;
     expect(t).toContain("h_o (W/m²K), band");
-    expect(t).toContain("Method-sens.");
+    expect(t).toContain("Heat loss, + out (W), band");
+    expect(t).toContain("Method-sensitive");
     const roof = results[1]!.surfaces.find((r) => r.row_id === "s-roof")!;
     expect(t).toContain(`YES ${Math.round(roof.spread!.Q_spread_ratio! * 100)} %`);
-    expect(t).toContain(`${num(roof.spread!.h_o_min_W_m2K, 3)} to ${num(roof.spread!.h_o_max_W_m2K, 3)}`);
-    expect(t).toContain(`${num(roof.spread!.Q_min_W, 4)} to ${num(roof.spread!.Q_max_W, 4)}`);
+    expect(t).toContain(`${cell(roof.spread!.h_o_min_W_m2K, "W/m²K")} to ${cell(roof.spread!.h_o_max_W_m2K, "W/m²K")}`);
+    expect(t).toContain(`${cell(roof.spread!.Q_min_W, "W")} to ${cell(roof.spread!.Q_max_W, "W")}`);
     const skin = results[0]!.surfaces.find((r) => r.row_id === "s-skin")!;
-    expect(t).toContain(`${num(skin.inside!.T_si_C, 3)} ${num(skin.inside!.f_Rsi, 2)} / ${num(skin.inside!.f_Rsi_min, 2)}`);
+    expect(t).toContain(`${cell(skin.inside!.T_si_C, "°C")} ${factorCell(skin.inside!.f_Rsi)} / ${factorCell(skin.inside!.f_Rsi_min)}`);
     expect(t).toMatch(/MOULD|CONDENSATION/);
   });
 
@@ -90,7 +92,9 @@ describe("report: v2 results", { timeout: 60_000 }, () => {
   test("inside-surface risks are listed with the warnings", async () => {
     const t = await text;
     const warnings = t.slice(t.indexOf("8 Warnings"));
-    expect(warnings).toMatch(/inside_(mould|condensation)_risk/);
+    // In words, not the engine's code.
+    expect(warnings).toMatch(/Inside surface: (mould|condensation) risk/);
+    expect(warnings).not.toMatch(/inside_(mould|condensation)_risk/);
     expect(warnings).toContain("V2 single-skin panel");
     expect(warnings).toContain("ISO 13788");
   });

@@ -5,7 +5,7 @@
  */
 import type { ColDef, ICellRendererParams, ValueFormatterParams, ValueGetterParams } from "ag-grid-community";
 import { createElement } from "react";
-import { rowPath } from "@/checking/paths";
+import { workingPath } from "@/checking/paths";
 import { labelOf } from "@/schemas/schedule-fields";
 import type { TSchedule, TSheet } from "@/schemas/schedule";
 import { RESULT_COLUMNS, resultHeader, resultValue, rowProblem, type ResultColumn } from "@/schedule/result-columns";
@@ -106,13 +106,19 @@ function inputColumn(col: SheetColumn, s: TSchedule, system: UnitSystem): ColDef
   }
 }
 
+// The two sheets' heat flows have opposite signs: each heading says which way is positive.
+const Q_SIGN: Record<string, string> = {
+  "Heat loss": "Heat loss through the surface: positive out of the zone, negative a gain",
+  "Heat to the air": "Heat to the air in the duct: positive when the air warms along the run, negative when it cools (the zone's loss)",
+};
+
 function resultColumn(c: ResultColumn, system: UnitSystem): ColDef<Row> {
   const d = c.quantity ? decimals(c.quantity, c.digits ?? 1, system) : (c.digits ?? 0);
   const numeric = !c.band && (c.quantity !== undefined || c.digits !== undefined);
   return {
     colId: `r:${c.key}`,
     headerName: resultHeader(c, system),
-    headerTooltip: resultHeader(c, system),
+    headerTooltip: c.key === "Q_W" ? Q_SIGN[c.title] ?? resultHeader(c, system) : resultHeader(c, system),
     headerClass: "fs-computed-header",
     editable: false,
     width: c.width ?? (c.quantity ? 104 : 112),
@@ -177,7 +183,7 @@ const workingColumn: ColDef<Row> = {
   cellRenderer: (p: ICellRendererParams<Row> & { context: GridContext }) =>
     !p.data || isTotals(p)
       ? null
-      : createElement("a", { href: rowPath(p.context.projectId, p.context.sheet, p.data.id), className: "fs-working-link", "aria-label": `Working of ${String(p.data.label)}` }, "Working ›"),
+      : createElement("a", { href: workingPath(p.context.projectId, p.context.sheet, p.data.id, p.context.caseId), className: "fs-working-link", "aria-label": `Working of ${String(p.data.label)}` }, "Working ›"),
 };
 
 export function sheetColumnDefs(sheet: TSheet, s: TSchedule, system: UnitSystem): ColDef<Row>[] {

@@ -21,6 +21,8 @@ export interface GridContext {
   /** Sums for the pinned totals row, by column id (SI). */
   totals: Record<string, number>;
   rowCount: number;
+  /** The design case shown, so a row's working opens on it. */
+  caseId?: string;
 }
 
 export type RowFilter = "all" | "method_sensitive" | "inside_risk";

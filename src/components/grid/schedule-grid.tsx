@@ -38,6 +38,8 @@ export interface ScheduleGridProps {
   onPaste: (p: PasteRequest) => void;
   onSelection: (ids: string[]) => void;
   onReady?: (api: GridApi<Row>) => void;
+  /** The design case shown: the working links open on it. */
+  caseId?: string;
 }
 
 /**
@@ -52,7 +54,7 @@ export function ScheduleGrid(props: ScheduleGridProps) {
   const [api, setApi] = useState<GridApi<Row> | null>(null);
   const rows = (sheet === "surfaces" ? schedule.surfaces : schedule.duct_runs) as unknown as Row[];
   const context = useRef<GridContext>({ projectId: schedule.project.id, sheet, system, canEdit, results, rowFilter, cellErrors, totals, rowCount: rows.length, buildups: new Map() }).current;
-  Object.assign(context, { projectId: schedule.project.id, sheet, system, canEdit, results, rowFilter, cellErrors, totals, rowCount: rows.length, buildups: new Map(schedule.buildups.map((b) => [b.id, b])) });
+  Object.assign(context, { projectId: schedule.project.id, sheet, system, canEdit, results, rowFilter, cellErrors, totals, rowCount: rows.length, buildups: new Map(schedule.buildups.map((b) => [b.id, b])), caseId: props.caseId });
 
   const { zones, buildups, project } = schedule;
   const columnDefs = useMemo(
@@ -65,7 +67,20 @@ export function ScheduleGrid(props: ScheduleGridProps) {
 
   useEffect(() => {
     api?.refreshCells();
-  }, [api, results, totals, cellErrors, system]);
+  }, [api, results, totals, cellErrors, system, props.caseId]);
+
+  // Printing the page prints every row: the grid renders all of them (no virtual scrolling) for print.
+  useEffect(() => {
+    if (!api) return;
+    const before = () => api.setGridOption("domLayout", "print");
+    const after = () => api.setGridOption("domLayout", "normal");
+    window.addEventListener("beforeprint", before);
+    window.addEventListener("afterprint", after);
+    return () => {
+      window.removeEventListener("beforeprint", before);
+      window.removeEventListener("afterprint", after);
+    };
+  }, [api]);
 
   // The quick filter reads the results of the chosen case: run it again when either changes.
   useEffect(() => {
@@ -100,7 +115,7 @@ export function ScheduleGrid(props: ScheduleGridProps) {
   };
 
   return (
-    <div className="fs-grid h-[34rem] min-w-0" onPaste={onPaste} data-sheet={sheet}>
+    <div className="fs-grid h-[34rem] min-w-0 print:h-auto" onPaste={onPaste} data-sheet={sheet}>
       <AgGridReact<Row>
         theme={gridTheme}
         rowData={rows}

@@ -30,7 +30,7 @@ export function AppShell({
       <a href="#content" className="sr-only focus:not-sr-only focus:absolute focus:left-3 focus:top-3 focus:z-10 focus:rounded-chip focus:bg-surface focus:px-3 focus:py-2">
         Skip to content
       </a>
-      <header className="sticky top-0 z-[5] flex h-bar items-center gap-3 border-b border-line bg-surface/90 px-4 backdrop-blur">
+      <header className="print:hidden sticky top-0 z-[5] flex h-bar items-center gap-3 border-b border-line bg-surface/90 px-4 backdrop-blur">
         <Link href="/" className="flex items-center gap-2 font-semibold tracking-tight">
           <LogoMark />
           <span className="text-lead">Filmsheet</span>
@@ -43,7 +43,7 @@ export function AppShell({
         </div>
       </header>
       <div className="flex flex-1 flex-col md:flex-row">
-        <aside className="border-b border-line px-3 py-2 md:w-rail md:shrink-0 md:border-b-0 md:border-r md:py-4">
+        <aside className="print:hidden border-b border-line px-3 py-2 md:w-rail md:shrink-0 md:border-b-0 md:border-r md:py-4">
           <MainNav />
         </aside>
         <main id="content" className="min-w-0 flex-1 px-gutter py-8">

@@ -1,5 +1,6 @@
 import type { Working } from "@/calc/index";
 import { EngineeringCaution } from "@/components/engineering-caution";
+import { methodTitle, plainText, plainWord } from "@/report/plain-words";
 import { SurfaceRowChecks } from "./row-checks";
 import { LocalHChart, WindChart } from "./working-charts";
 import { WorkingLines } from "./working-lines";
@@ -18,8 +19,11 @@ export function WorkingView({ working, title }: { working: Working; title: strin
         <p className="text-small text-muted">
           {r.ok ? (
             <>
-              Method <a href={`/methods#${r.correlation}`} className="font-mono text-accent">{r.correlation}</a>
-              {typeof r.regime === "string" ? ` · regime ${r.regime}` : ""}
+              Method{" "}
+              <a href={`/methods#${r.correlation}`} className="text-accent" title={`Method ${r.correlation}`}>
+                {methodTitle(r.correlation)}
+              </a>
+              {typeof r.regime === "string" ? ` · regime: ${plainWord(r.regime)}` : ""}
             </>
           ) : r.error.code === "not_computed" ? (
             <span className="font-semibold">Not computed: {r.error.message}</span>
@@ -34,7 +38,10 @@ export function WorkingView({ working, title }: { working: Working; title: strin
         <ul className="grid gap-1 rounded-panel border border-caution/40 bg-caution/10 p-3 text-small" aria-label="Warnings">
           {r.warnings.map((w, i) => (
             <li key={i}>
-              <span className="font-semibold text-caution">{w.code}</span> {w.message}
+              <span className="font-semibold text-caution" title={w.code}>
+                {plainWord(w.code)}:
+              </span>{" "}
+              {plainText(w.message)}
             </li>
           ))}
         </ul>
@@ -53,9 +60,13 @@ export function WorkingView({ working, title }: { working: Working; title: strin
           <dl className="grid gap-2 text-small">
             {working.methods.map((m) => (
               <div key={m.id} className="rounded-chip border border-line bg-surface p-2">
-                <dt className="font-semibold">{m.title}</dt>
+                <dt className="font-semibold" title={`Method ${m.id}`}>
+                  {m.title}
+                </dt>
                 <dd className="font-mono text-micro">{m.equation}</dd>
-                <dd className="text-micro text-muted">Valid: {m.validity}. Properties at: {m.evaluation}.</dd>
+                <dd className="text-micro text-muted">
+                  Valid: {plainText(m.validity)}. Properties at: {m.evaluation}.
+                </dd>
                 <dd className="text-micro text-muted">{m.source}</dd>
               </div>
             ))}

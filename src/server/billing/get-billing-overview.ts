@@ -13,7 +13,7 @@ export interface BillingOverview {
   /** The per-seat price (minor units), or null when Stripe could not be asked. */
   price: { unitAmount: number; currency: string; interval: string } | null;
   nextInvoice: { amountDue: number; currency: string; date: string; description: string | null } | null;
-  invoices: { id: string; number: string | null; date: string; total: number; currency: string; status: string | null; url: string | null }[];
+  invoices: { id: string; number: string | null; date: string; total: number; currency: string; status: string | null; url: string | null; /** Stripe's PDF of the invoice. */ pdf: string | null }[];
   /** Set when Stripe did not answer: the page still shows the plan from our own tables. */
   stripeProblem: string | null;
 }
@@ -53,7 +53,7 @@ export async function getBillingOverview(actor: Actor): Promise<BillingOverview>
       : null,
     invoices:
       invoices.status === "fulfilled" && invoices.value
-        ? invoices.value.data.map((i) => ({ id: i.id, number: i.number, date: iso(i.created), total: i.total, currency: i.currency, status: i.status, url: i.hosted_invoice_url ?? null }))
+        ? invoices.value.data.map((i) => ({ id: i.id, number: i.number, date: iso(i.created), total: i.total, currency: i.currency, status: i.status, url: i.hosted_invoice_url ?? null, pdf: i.invoice_pdf ?? null }))
         : [],
     stripeProblem: failed ? "Stripe did not answer just now, so prices and invoices are missing; the plan and seats shown are current." : null,
   };

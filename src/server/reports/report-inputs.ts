@@ -9,6 +9,7 @@ import { AppError } from "@/server/http/app-error";
 import { checkStatesOf } from "@/server/repositories/row-checks";
 import { loadSchedule } from "@/server/repositories/schedule";
 import { describeReportProject } from "@/server/services/describe-report-project";
+import { reportPeople } from "./report-people";
 import type { UnitSystem } from "@/units/units";
 
 /** What a report is built from, and the file name it is downloaded as. */
@@ -21,7 +22,7 @@ type Firm = { id: string; name: string };
 
 /**
  * A draft report of the schedule as it stands, computed by the engine, with each row's check
- * state; watermarked "not for issue" on every page, as every draft is.
+ * state and the people behind them (`author` only when nobody is recorded); watermarked "not for issue" on every page, as every draft is.
  */
 export async function draftReportSource(q: Knex, firm: Firm, projectId: string, author: string, today = new Date()): Promise<ReportSource> {
   const s = await loadSchedule(q, firm.id, projectId);
@@ -29,10 +30,11 @@ export async function draftReportSource(q: Knex, firm: Firm, projectId: string, 
   const checks = await checkStatesOf(q, firm.id, projectId);
   const p = s.project;
   const site = describeReportProject(p);
+  const people = await reportPeople(q, firm.id, projectId, s.surfaces.length + s.duct_runs.length, author);
   return {
     filename: `${site.fileStem}-draft-report.pdf`,
     input: {
-      meta: { ...pick(site), firmName: firm.name, author, checker: null, date: today.toISOString().slice(0, 10), status: "draft", revision: null, unitSystem: p.unit_system, watermark: true },
+      meta: { ...pick(site), firmName: firm.name, ...people, date: today.toISOString().slice(0, 10), status: "draft", revision: null, unitSystem: p.unit_system, watermark: true },
       schedule: engineSchedule(s),
       designCases: s.design_cases.map(engineDesignCase),
       checks,

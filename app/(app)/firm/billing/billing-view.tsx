@@ -1,6 +1,7 @@
 import { PLAN_LINES, STATUS_WORDS, day, money, planLabel } from "@/components/billing/plan-words";
 import { PageHeader, Panel } from "@/components/panel";
 import type { BillingOverview } from "@/server/billing/get-billing-overview";
+import { FREE_PLAN } from "@/schemas/billing";
 import { AdminOnly } from "../admin-only";
 import { FirmNav } from "../firm-nav";
 import { SeatMeter } from "../seat-meter";
@@ -83,7 +84,7 @@ function Billing({ overview, checkout }: { overview: BillingOverview; checkout: 
             {subscribed && !paid ? (
               <p className="text-small text-muted">Seats can be changed again once the subscription is paid up (“Manage payment”).</p>
             ) : (
-              <SeatsForm mode={subscribed ? "change" : "buy"} suggested={subscribed ? plan.seats : Math.max(seats.used, 1)} minimum={seats.used} priceLabel={priceLabel} />
+              <SeatsForm mode={subscribed ? "change" : "buy"} suggested={subscribed ? plan.seats : Math.max(seats.used, FREE_PLAN.seats, 1)} minimum={seats.used} priceLabel={priceLabel} />
             )}
           </div>
         </Panel>

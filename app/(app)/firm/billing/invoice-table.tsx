@@ -23,7 +23,14 @@ export function InvoiceTable({ invoices }: { invoices: BillingOverview["invoices
               <td className="py-2 pr-4">{day(i.date)}</td>
               <td className="tabular py-2 pr-4">{money(i.total, i.currency)}</td>
               <td className={`py-2 pr-4 font-medium ${TONE[i.status ?? ""] ?? ""}`}>{i.status === "open" ? "unpaid" : (i.status ?? "—")}</td>
-              <td className="py-2">{i.url ? <a className="text-accent hover:underline" href={i.url}>View</a> : null}</td>
+              <td className="flex gap-3 py-2">
+                {i.pdf ? (
+                  <a className="text-accent hover:underline" href={i.pdf} aria-label={`PDF of invoice ${i.number ?? i.id}`}>
+                    PDF
+                  </a>
+                ) : null}
+                {i.url ? <a className="text-accent hover:underline" href={i.url}>View</a> : null}
+              </td>
             </tr>
           ))}
         </tbody>

@@ -17,11 +17,13 @@ import { ZoneTotalsPanel } from "@/components/schedule/zone-totals-panel";
 import { ScheduleToolbar } from "./schedule-toolbar";
 
 /** The schedule: two sheets in the grid, recalculated in the browser for the chosen design case, with zone totals beside. */
-export function ScheduleView() {
+export function ScheduleView({ initialSheet = "surfaces", initialCase }: { initialSheet?: TSheet; initialCase?: string } = {}) {
   const schedule = useSchedule();
   const { canEdit, system } = useProject();
-  const [sheet, setSheet] = useState<TSheet>("surfaces");
-  const [caseId, setCaseId] = useState(() => (schedule.design_cases.find((d) => d.kind === "heating") ?? schedule.design_cases[0])?.id ?? null);
+  const [sheet, setSheet] = useState<TSheet>(initialSheet);
+  const [caseId, setCaseId] = useState(
+    () => (schedule.design_cases.find((d) => d.id === initialCase) ?? schedule.design_cases.find((d) => d.kind === "heating") ?? schedule.design_cases[0])?.id ?? null,
+  );
   const [selected, setSelected] = useState<string[]>([]);
   const [importing, setImporting] = useState(false);
   const [rowFilter, setRowFilter] = useState<RowFilter>("all");
@@ -99,6 +101,7 @@ export function ScheduleView() {
             onEdit={editing.onEdit}
             onPaste={editing.onPaste}
             onSelection={setSelected}
+            caseId={dc.id}
           />
           <p className="mt-2 text-micro text-muted">
             {canEdit ? "Double-click or press Enter to edit; arrows and Tab move; paste a block copied from a spreadsheet onto the focused cell. " : ""}

@@ -1,11 +1,12 @@
 import Link from "next/link";
 import { CHECK_MOVES, SHEET_LABELS } from "@/checking/check-machine";
-import { checkPath, rowPath } from "@/checking/paths";
+import { checkPath, rowPath, schedulePath, workingPath } from "@/checking/paths";
 import { HistoryList, type HistoryItem } from "@/components/checking/history-list";
 import { StateBadge } from "@/components/checking/state-badge";
 import { when } from "@/components/checking/when";
 import { Panel } from "@/components/panel";
 import { WorkingView } from "@/components/working/working-view";
+import { plainWord } from "@/report/plain-words";
 import type { RowWorking } from "@/server/services/get-row-working";
 import { CheckRowForm, CommentForm } from "./row-forms";
 
@@ -27,11 +28,16 @@ export function RowWorkingView({ data, history, canCheck, canComment, isConsulta
   return (
     <div className="grid gap-6">
       <header className="grid gap-2">
-        <p className="text-small text-muted">
-          <Link href={checkPath(project.id)} className="hover:underline">
-            Check
-          </Link>{" "}
-          / {SHEET_LABELS[sheet]}
+        <p className="flex flex-wrap gap-3 text-small text-muted">
+          <Link href={schedulePath(project.id, sheet, data.design_case_id)} className="font-medium text-accent hover:underline">
+            ← Back to the schedule ({sheet === "surfaces" ? "surfaces" : "duct runs"}{dc ? `, ${dc.name}` : ""})
+          </Link>
+          <span>
+            <Link href={checkPath(project.id)} className="hover:underline">
+              Check
+            </Link>{" "}
+            / {SHEET_LABELS[sheet]}
+          </span>
         </p>
         <div className="flex flex-wrap items-end justify-between gap-3">
           <div>
@@ -46,7 +52,7 @@ export function RowWorkingView({ data, history, canCheck, canComment, isConsulta
           <div className="flex items-center gap-3">
             <StateBadge state={check.state} />
             {data.next_unchecked ? (
-              <Link href={rowPath(project.id, data.next_unchecked.sheet, data.next_unchecked.id)} className="rounded-chip border border-line px-3 py-1.5 text-small hover:bg-sunken">
+              <Link href={workingPath(project.id, data.next_unchecked.sheet, data.next_unchecked.id, data.design_case_id)} className="rounded-chip border border-line px-3 py-1.5 text-small hover:bg-sunken">
                 Next unchecked →
               </Link>
             ) : null}
@@ -54,8 +60,8 @@ export function RowWorkingView({ data, history, canCheck, canComment, isConsulta
         </div>
         <nav aria-label="Design case" className="flex flex-wrap gap-1">
           {data.design_cases.map((d) => (
-            <Link key={d.id} href={`${base}?case=${d.id}`} aria-current={d.id === data.design_case_id ? "page" : undefined} className="rounded-chip border border-line px-2 py-1 text-small hover:bg-sunken aria-[current=page]:border-accent aria-[current=page]:bg-accent-soft">
-              {d.name} <span className="text-micro text-muted">({d.kind})</span>
+            <Link key={d.id} href={`${base}?case=${d.id}`} replace aria-current={d.id === data.design_case_id ? "page" : undefined} className="rounded-chip border border-line px-2 py-1 text-small hover:bg-sunken aria-[current=page]:border-accent aria-[current=page]:bg-accent-soft">
+              {d.name} <span className="text-micro text-muted">({plainWord(d.kind)})</span>
             </Link>
           ))}
         </nav>
