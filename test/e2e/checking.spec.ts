@@ -99,7 +99,8 @@ test("a consultant and a checker take the demo project from draft to revision A,
   await expect(height).toHaveText("3.6");
   // The grid opens the row's working too.
   await consultant.locator(`.ag-row[row-id="${gridRow}"] [col-id="working"] a`).click();
-  await expect(consultant).toHaveURL(rowUrl);
+  // It opens on the design case shown in the grid (?case=…).
+  await expect(consultant).toHaveURL(new RegExp(`^${rowUrl.replace(/[.?*+^$()[\]{}|\\]/g, "\\$&")}\\?case=`));
   await expect(consultant.locator("[data-state=unchecked]").first()).toBeVisible();
   const history = consultant.getByRole("region", { name: "History of this row" });
   await expect(history).toContainText(`Changed surface ${ROW}`);

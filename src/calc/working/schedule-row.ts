@@ -5,9 +5,9 @@
  * ground is not computed. Duct runs are their `duct_run` case's working.
  */
 import type { CalcResult } from "../contract";
-import { EXTERIOR_METHODS, type SurfaceInput, type SurfaceResult } from "../surface";
+import { EXTERIOR_METHODS, type ExteriorMethod, type SurfaceInput, type SurfaceResult } from "../surface";
 import { ductRunCase, surfaceCase } from "../schedule/cases";
-import { insideSurfaceCheck, methodSpread, METHOD_SENSITIVE_SHARE, MOULD_SURFACE_RH } from "../schedule/checks";
+import { insideSurfaceCheck, methodSpread, METHOD_SENSITIVE_MIN_W_M2, METHOD_SENSITIVE_SHARE, MOULD_SURFACE_RH } from "../schedule/checks";
 import { OVER_GROUND_MESSAGE, type RowResult } from "../schedule/results";
 import type { Buildup, DesignCase, DuctRunRow, Site, SurfaceRow, Zone } from "../schedule/types";
 import { working } from "./index";
@@ -17,6 +17,9 @@ const METHOD_NAMES: Record<MethodSpreadPoint["method"], string> = { boundary_lay
 
 /** A method's name as the working and the charts print it. */
 export const methodName = (m: MethodSpreadPoint["method"]) => METHOD_NAMES[m];
+
+// Short subscripts for people (the registry's method ids stay out of the working's symbols).
+const METHOD_SYMBOLS: Record<ExteriorMethod, string> = { boundary_layer: "BL", iso6946: "ISO", mcadams: "McA" };
 
 function line(section: string, label: string, symbol: string, value: WorkingLine["value"], unit = "", note?: string): WorkingLine {
   return note === undefined ? { section, label, symbol, value, unit } : { section, label, symbol, value, unit, note };
@@ -45,12 +48,12 @@ export function surfaceRowWorking(site: Site, dc: DesignCase, zone: Zone, buildu
   for (const m of EXTERIOR_METHODS) {
     const b = spread.by_method[m];
     const chosen = m === s.method ? " (chosen)" : "";
-    lines.push(line(S, `Outside coefficient, ${METHOD_NAMES[m]}${chosen}`, `h_o,${m}`, b.h_o_W_m2K, "W/m²K"));
-    lines.push(line(S, `Heat flow, ${METHOD_NAMES[m]}${chosen}`, `Q_${m}`, b.Q_W, "W"));
+    lines.push(line(S, `Outside coefficient, ${METHOD_NAMES[m]}${chosen}`, `h_o,${METHOD_SYMBOLS[m]}`, b.h_o_W_m2K, "W/m²K"));
+    lines.push(line(S, `Heat flow, ${METHOD_NAMES[m]}${chosen}`, `Q_${METHOD_SYMBOLS[m]}`, b.Q_W, "W"));
   }
   lines.push(
     line(S, "Spread of Q over the chosen Q", "ΔQ/|Q|", spread.Q_spread_ratio, "", "(Q_max − Q_min)/|Q|; null when Q is 0"),
-    line(S, "Method-sensitive", "sensitive", spread.sensitive, "", `the method choice moves Q by more than ${METHOD_SENSITIVE_SHARE * 100} %`),
+    line(S, "Method-sensitive", "sensitive", spread.sensitive, "", `the method choice moves Q by more than ${METHOD_SENSITIVE_SHARE * 100} % and ${METHOD_SENSITIVE_MIN_W_M2} W/m²`),
   );
   const I = "Inside surface";
   lines.push(
@@ -58,7 +61,7 @@ export function surfaceRowWorking(site: Site, dc: DesignCase, zone: Zone, buildu
     line(I, "Inside surface temperature", "T_si", inside.T_si_C, "°C", "T_in − q R_si"),
     line(I, "Dew point of the zone air", "T_dp,i", inside.T_dp_inside_C, "°C", "Hyland & Wexler"),
     line(I, "Least surface temperature against mould", "T_si,min", inside.T_si_min_C, "°C", `surface RH ${MOULD_SURFACE_RH * 100} % (ISO 13788)`),
-    line(I, "Temperature factor", "f_Rsi", inside.f_Rsi, "", "(T_si − T_out)/(T_in − T_out); null when |ΔT| < 1 K"),
+    line(I, "Temperature factor", "f_Rsi", inside.f_Rsi, "", "(T_si − T_out)/(T_in − T_out); null unless the inside is 1 K or more warmer"),
     line(I, "Temperature factor needed", "f_Rsi,min", inside.f_Rsi_min, "", "(T_si,min − T_out)/(T_in − T_out)"),
     line(I, "Surface condensation risk", "condensation", inside.condensation_risk, "", "T_si < T_dp,i"),
     line(I, "Mould risk", "mould", inside.mould_risk, "", "T_si < T_si,min (f_Rsi < f_Rsi,min)"),
