@@ -8,6 +8,8 @@ import knexFactory, { type Knex } from "knex";
 import { db } from "@/server/db/knex";
 import { isConnectionError, isNotConnectedError } from "@/server/db/connection-error";
 import { route } from "@/server/http/route";
+import { action } from "@/server/http/action";
+import { idempotent, withWriteLedger } from "@/server/db/write-ledger";
 import { closeTestDb, testDb } from "../support/db";
 
 const table = `conn_loss_${process.pid}`;
@@ -79,7 +81,29 @@ describe("route() on a lost connection", () => {
     expect(calls).toBe(2);
   });
 
-  test("a write whose session is ended mid-transaction is refused once (503) and nothing of it is saved", async () => {
+  test("a write whose session is ended before its COMMIT is run again when the database answers, and saved once", async () => {
+    let calls = 0;
+    const POST = route({ auth: "public" }, async () => {
+      calls++;
+      return db().transaction(async (trx) => {
+        await trx(table).insert({ note: `first half ${calls}` });
+        if (calls === 1) {
+          const { rows } = await trx.raw("SELECT pg_backend_pid() AS pid");
+          await testDb().raw("SELECT pg_terminate_backend(?)", [rows[0].pid]);
+        }
+        await trx(table).insert({ note: `second half ${calls}` });
+        return { calls };
+      });
+    });
+    const res = await call(POST, "POST", { any: 1 });
+    expect(res.status).toBe(200);
+    expect(calls).toBe(2);
+    // The first attempt's rows went with its connection; the second's are there, once.
+    expect(await testDb()(table).orderBy("id").pluck("note")).toEqual(["first half 2", "second half 2"]);
+    await testDb()(table).delete();
+  });
+
+  test("a write that loses its session before COMMIT on both attempts is refused (503) and nothing of it is saved", async () => {
     let calls = 0;
     const POST = route({ auth: "public" }, async () => {
       calls++;
@@ -92,8 +116,46 @@ describe("route() on a lost connection", () => {
     });
     const res = await call(POST, "POST", { any: 1 });
     expect(res.status).toBe(503);
-    expect(calls).toBe(1);
+    expect(calls).toBe(2);
     expect(await testDb()(table).count({ n: "*" })).toEqual([{ n: "0" }]);
+  });
+
+  test("a write whose connection goes while its COMMIT is in flight is refused once (503), never repeated", async () => {
+    // A deferred constraint trigger runs inside COMMIT; this one ends its own session there, so
+    // the client has sent COMMIT and cannot know whether it took effect.
+    const fn = `${table}_die`;
+    await testDb().raw(`CREATE FUNCTION ${fn}() RETURNS trigger LANGUAGE plpgsql AS $$ BEGIN IF NEW.note = 'die at commit' THEN PERFORM pg_terminate_backend(pg_backend_pid()); END IF; RETURN NEW; END $$`);
+    await testDb().raw(`CREATE CONSTRAINT TRIGGER ${fn} AFTER INSERT ON ${table} DEFERRABLE INITIALLY DEFERRED FOR EACH ROW EXECUTE FUNCTION ${fn}()`);
+    try {
+      let calls = 0;
+      const POST = route({ auth: "public" }, async () => {
+        calls++;
+        await db().transaction((trx) => trx(table).insert({ note: "die at commit" }));
+      });
+      const res = await call(POST, "POST", { any: 1 });
+      expect(res.status).toBe(503);
+      expect(calls).toBe(1);
+    } finally {
+      await testDb().raw(`DROP TRIGGER ${fn} ON ${table}`);
+      await testDb().raw(`DROP FUNCTION ${fn}()`);
+      await testDb()(table).delete();
+      // The pool may still hold the connection that died in its COMMIT: let it fail and go.
+      for (let i = 0; i < 3; i++) await db().raw("SELECT 1").catch(() => undefined);
+    }
+  });
+
+  test("a write that saved outside a transaction before its connection went is refused once (503), never repeated", async () => {
+    let calls = 0;
+    const POST = route({ auth: "public" }, async () => {
+      calls++;
+      await db()(table).insert({ note: "saved on its own" });
+      await onKilledSession((trx) => trx.raw("SELECT 1"));
+    });
+    const res = await call(POST, "POST", { any: 1 });
+    expect(res.status).toBe(503);
+    expect(calls).toBe(1);
+    expect(await testDb()(table).pluck("note")).toEqual(["saved on its own"]);
+    await testDb()(table).delete();
   });
 
   test("a write that could not connect at all is run again, with its body, and saved once", async () => {
@@ -109,5 +171,67 @@ describe("route() on a lost connection", () => {
     expect(res.status).toBe(200);
     expect(calls).toBe(2);
     expect(await testDb()(table).pluck("note")).toEqual(["after the outage"]);
+  });
+});
+
+describe("the write ledger tells what a request may have changed", () => {
+  const decisive = async (work: () => Promise<unknown>) => (await withWriteLedger(work)).ledger.decisive;
+
+  test("reads, and transactions that never committed, are not decisive", async () => {
+    await testDb()(table).delete();
+    expect(await decisive(() => db().select(db().raw("1 AS n")))).toBe(false);
+    expect(await decisive(() => db()(table).where({ note: "x" }))).toBe(false);
+    const rolledBack = decisive(() =>
+      db().transaction(async (trx) => {
+        await trx(table).insert({ note: "not kept" });
+        throw new Error("changed my mind");
+      }),
+    );
+    expect(await rolledBack).toBe(false);
+    expect(await testDb()(table).count({ n: "*" })).toEqual([{ n: "0" }]);
+  });
+
+  test("a COMMIT, a write outside a transaction and a SELECT that queues a job are decisive; an idempotent write is not", async () => {
+    expect(await decisive(() => db().transaction((trx) => trx(table).insert({ note: "kept" })))).toBe(true);
+    expect(await decisive(() => db()(table).where({ note: "kept" }).update({ note: "kept again" }))).toBe(true);
+    expect(await decisive(() => db().raw("SELECT nextval(pg_get_serial_sequence(?, 'id'))", [table]))).toBe(true);
+    expect(await decisive(() => idempotent(() => db()(table).where({ note: "kept again" }).update({ note: "kept" })))).toBe(false);
+    await testDb()(table).delete();
+  });
+});
+
+describe("action() on a lost connection", () => {
+  test("a form whose transaction lost its session before COMMIT is saved by a second run", async () => {
+    await testDb()(table).delete();
+    let calls = 0;
+    const save = action({ auth: "public" }, async () => {
+      calls++;
+      await db().transaction(async (trx) => {
+        await trx(table).insert({ note: `form ${calls}` });
+        if (calls === 1) {
+          const { rows } = await trx.raw("SELECT pg_backend_pid() AS pid");
+          await testDb().raw("SELECT pg_terminate_backend(?)", [rows[0].pid]);
+          await trx.raw("SELECT 1");
+        }
+      });
+    });
+    expect(await save(null, new FormData())).toEqual({ ok: true });
+    expect(calls).toBe(2);
+    expect(await testDb()(table).pluck("note")).toEqual(["form 2"]);
+    await testDb()(table).delete();
+  });
+
+  test("a form that saved outside a transaction and then lost its session says the save is uncertain, and is not run again", async () => {
+    let calls = 0;
+    const save = action({ auth: "public" }, async () => {
+      calls++;
+      await db()(table).insert({ note: "saved alone" });
+      await onKilledSession((trx) => trx.raw("SELECT 1"));
+    });
+    const state = await save(null, new FormData());
+    expect(state).toMatchObject({ ok: false, code: "unavailable", message: expect.stringMatching(/Reload the page to see whether the change was saved/) });
+    expect(calls).toBe(1);
+    expect(await testDb()(table).pluck("note")).toEqual(["saved alone"]);
+    await testDb()(table).delete();
   });
 });

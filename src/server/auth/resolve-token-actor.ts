@@ -1,6 +1,7 @@
 import "server-only";
 import type { TRole } from "@/schemas/roles";
 import { db } from "@/server/db/knex";
+import { idempotent } from "@/server/db/write-ledger";
 import { AppError } from "@/server/http/app-error";
 import type { Actor } from "./actor";
 import { hashSecret } from "./secrets";
@@ -28,10 +29,13 @@ export async function resolveTokenActor(secret: string): Promise<Actor> {
   if (row.revoked) throw new AppError("unauthenticated", "API token has been revoked");
   if (row.expired) throw new AppError("unauthenticated", "API token has expired");
   // Last use to the minute is enough for the token list, and spares a write per request.
-  await db()("api_tokens")
-    .where({ id: row.id })
-    .andWhere((q) => q.whereNull("last_used_at").orWhere("last_used_at", "<", db().raw("now() - interval '1 minute'")))
-    .update({ last_used_at: db().fn.now() });
+  // Idempotent: a request repeated after a lost connection may set it again.
+  await idempotent(() =>
+    db()("api_tokens")
+      .where({ id: row.id })
+      .andWhere((q) => q.whereNull("last_used_at").orWhere("last_used_at", "<", db().raw("now() - interval '1 minute'")))
+      .update({ last_used_at: db().fn.now() }),
+  );
   const firm = { id: row.firm_id, name: row.firm_name };
   return { via: "token", userId: null, name: null, email: null, firm, roles: [row.role], firms: [firm], tokenId: row.id };
 }

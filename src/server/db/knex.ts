@@ -1,6 +1,7 @@
 import "server-only";
 import knexFactory, { type Knex } from "knex";
 import { queryDatabaseUrl } from "@/server/env";
+import { noteQuery } from "./write-ledger";
 
 // One pool per process (per URL, so tests can point a second app at another database);
 // kept on globalThis so module re-evaluation does not open new pools.
@@ -21,6 +22,8 @@ export function db(): Knex {
       pool: { min: 0, max: 10 },
       acquireConnectionTimeout: 5000,
     });
+    // Every statement is noted against the request that sent it (see write-ledger.ts).
+    pool.on("query", noteQuery);
     pools.set(url, pool);
   }
   return pool;

@@ -4,6 +4,8 @@ import { z, type ZodType } from "zod";
 import type { TRole } from "@/schemas/roles";
 import type { Actor } from "@/server/auth/actor";
 import { requireActor, type AuthMode } from "@/server/auth/require-actor";
+import { isConnectionError, isNotConnectedError, waitForDatabase } from "@/server/db/connection-error";
+import { withWriteLedger } from "@/server/db/write-ledger";
 import { internalMessage, logInternalError } from "./internal-error";
 import { AppError, type AppErrorCode } from "./app-error";
 
@@ -72,7 +74,7 @@ export function action<TInput = Record<string, unknown>, TAuth extends AuthMode 
         if (!parsed.success) return failed({ ok: false, code: "invalid_input", message: "Check the highlighted fields", fields: fieldErrors(parsed.error.issues) });
         input = parsed.data;
       }
-      const result = (await handler({ actor: actor as ActionContext<TInput, TAuth>["actor"], input })) ?? { ok: true };
+      const result = (await runOnceMore(() => handler({ actor: actor as ActionContext<TInput, TAuth>["actor"], input }))) ?? { ok: true };
       return result && !result.ok ? failed(result) : result;
     } catch (error) {
       unstable_rethrow(error); // redirect() and notFound() are control flow, not failures
@@ -82,8 +84,30 @@ export function action<TInput = Record<string, unknown>, TAuth extends AuthMode 
         return failed({ ok: false, code: error.code, message: error.message, ...(details.length ? { fields } : {}) });
       }
       if (error instanceof z.ZodError) return failed({ ok: false, code: "invalid_input", message: "Check the highlighted fields", fields: fieldErrors(error.issues) });
+      if (error instanceof UncertainWrite) {
+        return failed({ ok: false, code: "unavailable", message: "The database connection was lost while saving. Reload the page to see whether the change was saved before trying again." });
+      }
+      if (isConnectionError(error)) return failed({ ok: false, code: "unavailable", message: "The database could not be reached just now; nothing was saved. Try again in a moment." });
       const id = logInternalError("Server action", error);
       return failed({ ok: false, code: "internal", message: internalMessage(id, "; nothing was saved") });
     }
   };
+}
+
+class UncertainWrite extends Error {}
+
+/**
+ * Runs an action's work; when its database connection is lost (PostgreSQL restarting, a
+ * failover) and it cannot have changed anything — no COMMIT sent, nothing written outside a
+ * transaction (see write-ledger.ts) — runs it once more when the database answers again. One
+ * that may have saved is reported as uncertain, never repeated.
+ */
+async function runOnceMore<T>(work: () => Promise<T>): Promise<T> {
+  const { ledger, outcome } = await withWriteLedger(work);
+  if (outcome.status === "fulfilled") return outcome.value;
+  const error = outcome.reason;
+  if (!isConnectionError(error)) throw error;
+  if (ledger.decisive && !isNotConnectedError(error)) throw new UncertainWrite("database connection lost after a write was sent", { cause: error });
+  if (!(await waitForDatabase(8000))) throw error;
+  return work();
 }

@@ -5,6 +5,7 @@ import type { Actor } from "@/server/auth/actor";
 import { requireActor, type AuthMode } from "@/server/auth/require-actor";
 import { assertSameOrigin } from "@/server/auth/same-origin";
 import { isConnectionError, isNotConnectedError, waitForDatabase } from "@/server/db/connection-error";
+import { withWriteLedger } from "@/server/db/write-ledger";
 import { AppError } from "./app-error";
 import { readCappedBody } from "./read-bytes";
 import { internalMessage, logInternalError, requestIdOf } from "./internal-error";
@@ -121,27 +122,27 @@ export function route<TBody = undefined, TQuery = Record<string, string | string
   };
   return async (req, ctx) => {
     const safe = SAFE_METHODS.has(req.method);
-    // A write is tried again only when it never reached the database; keep its body for that.
+    // A write is tried again only when it cannot have changed anything; keep its body for that.
     const spare = safe ? undefined : req.clone();
-    try {
-      return await attempt(req, ctx);
-    } catch (first) {
-      if (!(first instanceof LostConnection)) throw first;
-      // A read that lost its database connection (PostgreSQL restarting, a failover) is run once
-      // more when the database answers again: nothing was changed, so repeating it is safe. So
-      // is a write that could not connect at all. A write whose connection went in the middle is
-      // not repeated: its transaction either committed or was rolled back with the connection.
-      const again = safe ? req : isNotConnectedError(first.cause) ? spare : undefined;
-      if (again && (await waitForDatabase(RETRY_WAIT_MS))) {
-        try {
-          return await attempt(again, ctx);
-        } catch (second) {
-          if (!(second instanceof LostConnection)) throw second;
-        }
+    const { ledger, outcome } = await withWriteLedger(() => attempt(req, ctx));
+    if (outcome.status === "fulfilled") return outcome.value;
+    const first = outcome.reason;
+    if (!(first instanceof LostConnection)) throw first;
+    // A request that lost its database connection (PostgreSQL restarting, a failover) is run once
+    // more when the database answers again if it cannot have changed anything: a read, a write
+    // that could not connect at all, or a write whose transaction never sent its COMMIT (the
+    // server rolls back a transaction whose connection goes). A write whose COMMIT was sent, or
+    // that wrote outside a transaction, may have been saved: it is refused (503), never repeated.
+    const again = safe ? req : isNotConnectedError(first.cause) || !ledger.decisive ? spare : undefined;
+    if (again && (await waitForDatabase(RETRY_WAIT_MS))) {
+      try {
+        return await attempt(again, ctx);
+      } catch (second) {
+        if (!(second instanceof LostConnection)) throw second;
       }
-      console.warn(`${req.method} ${new URL(req.url).pathname}: database connection lost (${first.cause instanceof Error ? first.cause.message : String(first.cause)})`);
-      return errorResponse(new AppError("unavailable", "The database could not be reached just now. Try again in a moment."), 503);
     }
+    console.warn(`${req.method} ${new URL(req.url).pathname}: database connection lost (${first.cause instanceof Error ? first.cause.message : String(first.cause)})`);
+    return errorResponse(new AppError("unavailable", "The database could not be reached just now. Try again in a moment."), 503);
   };
 }
 
