@@ -24,7 +24,7 @@ afterAll(async () => {
 
 
 describe("the demo project's draft report", () => {
-  test("is a PDF whose text matches the API's results, watermarked as a draft", async () => {
+  test("is a PDF whose text matches the API's results, watermarked as a draft", { timeout: 180_000 }, async () => {
     const project = await testDb()("projects").where({ reference: "TS-2417" }).first("id", "name");
     const res = await request(app.server).get(`/api/projects/${project.id}/report`).set(consultant).buffer(true).parse(binaryBody);
     expect(res.status, String(res.body)).toBe(200);
@@ -56,7 +56,7 @@ describe("the demo project's draft report", () => {
     for (const label of labels) expect(text).toContain(label);
   });
 
-  test("names on its cover who last edited rows and who accepted them, whoever downloads it", async () => {
+  test("names on its cover who last edited rows and who accepted them, whoever downloads it", { timeout: 180_000 }, async () => {
     const db = testDb();
     const project = await db("projects").where({ reference: "TS-2417" }).first("id", "firm_id");
     const who = async (email: string) => (await db("users").where({ email }).first("id", "name")) as { id: number; name: string };
