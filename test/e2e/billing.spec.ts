@@ -100,11 +100,13 @@ test("the demo admin upgrades through Checkout; a row beyond the free 40 and the
   await expect.poll(demoRows).toBe(rowsBefore + 1);
   await expect(consultant.getByRole("alert").filter({ hasText: "The free plan holds 40 rows" })).toHaveCount(0);
 
-  // … the projects page no longer shows the limits, and the second project is saved.
+  // … the projects page no longer shows the limits, and the second project is saved and opened.
   await consultant.goto("/projects");
   await expect(consultant.getByRole("complementary", { name: "Plan" })).toHaveCount(0);
   await createProject(consultant, reference);
-  await expect(consultant.getByRole("status")).toHaveText(`Project ${reference} created`);
+  await expect(consultant).toHaveURL(/\/projects\/[0-9a-f-]{36}$/);
+  await expect(consultant.getByRole("heading", { level: 1, name: "Larchfield Community Library, plant-room annexe" })).toBeVisible();
+  await consultant.goto("/projects");
   await expect(consultant.getByRole("cell", { name: reference })).toBeVisible();
 });
 

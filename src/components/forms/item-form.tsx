@@ -9,7 +9,8 @@ import { ApiError } from "@/components/schedule/api-client";
 export type FieldDef =
   | { name: string; label: string; kind: "text"; hint?: string }
   | { name: string; label: string; kind: "number"; spec: NumberSpec; hint?: string }
-  | { name: string; label: string; kind: "select"; options: readonly Option[]; hint?: string };
+  // A select's hint may follow the option chosen (a design case's kind).
+  | { name: string; label: string; kind: "select"; options: readonly Option[]; hint?: string | ((value: string) => string) };
 
 export type FieldErrors = Record<string, string>;
 
@@ -54,6 +55,9 @@ export function serverErrors(error: unknown, prefix = ""): { message: string; fi
 
 /** The inputs of a list of fields, labelled with their units, each with its error underneath. */
 export function FieldInputs({ fields, values, errors, system, idPrefix, disabled }: { fields: readonly FieldDef[]; values: Record<string, unknown>; errors: FieldErrors; system: UnitSystem; idPrefix: string; disabled: boolean }) {
+  // The inputs stay uncontrolled; only the selects' choices are followed, for their hints.
+  const [chosen, setChosen] = useState<Record<string, string>>({});
+  const selected = (f: Extract<FieldDef, { kind: "select" }>) => chosen[f.name] ?? String(values[f.name] ?? f.options[0]?.value ?? "");
   return (
     <>
       {fields.map((f) => {
@@ -68,7 +72,15 @@ export function FieldInputs({ fields, values, errors, system, idPrefix, disabled
               {unit ? ` (${unit})` : ""}
             </label>
             {f.kind === "select" ? (
-              <select id={id} name={f.name} defaultValue={String(values[f.name] ?? "")} disabled={disabled} className={control} aria-invalid={error ? true : undefined}>
+              <select
+                id={id}
+                name={f.name}
+                defaultValue={String(values[f.name] ?? "")}
+                onChange={(e) => setChosen((c) => ({ ...c, [f.name]: e.target.value }))}
+                disabled={disabled}
+                className={control}
+                aria-invalid={error ? true : undefined}
+              >
                 {f.options.map((o) => (
                   <option key={o.value} value={o.value}>
                     {o.label}
@@ -93,7 +105,7 @@ export function FieldInputs({ fields, values, errors, system, idPrefix, disabled
                 {error}
               </p>
             ) : f.hint ? (
-              <p className="text-micro text-muted">{f.hint}</p>
+              <p className="text-micro text-muted">{typeof f.hint === "function" ? f.hint(f.kind === "select" ? selected(f) : "") : f.hint}</p>
             ) : null}
           </div>
         );

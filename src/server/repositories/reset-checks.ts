@@ -7,11 +7,19 @@ import { recordAudit } from "@/server/services/record-audit";
 const CHUNK = 1000;
 
 /**
- * Sends rows back to unchecked because they (or something they are computed from) changed, and
- * records `editor` as their last editor, who may then not check them. Rows that were accepted or
- * queried get an audit row saying why their check was reset.
+ * Who a reset names as the rows' last editor: the person who edited the rows themselves (null when
+ * nobody is known), or "keep" for a change made elsewhere in the project (a design case, the site,
+ * a zone, a build-up), which moves the rows' results but is not an edit of them: each row keeps
+ * the last editor it had, and its checkers stay free to check it.
  */
-export async function resetChecks(trx: Knex.Transaction, actor: Actor, projectId: string, sheet: TCheckSheet, rowIds: readonly string[], editor: number | null, reason: string): Promise<void> {
+export type ResetEditor = number | null | "keep";
+
+/**
+ * Sends rows back to unchecked because they (or something they are computed from) changed, and
+ * records `editor` as their last editor (unless "keep"), who may then not check them. Rows that
+ * were accepted or queried get an audit row saying why their check was reset.
+ */
+export async function resetChecks(trx: Knex.Transaction, actor: Actor, projectId: string, sheet: TCheckSheet, rowIds: readonly string[], editor: ResetEditor, reason: string): Promise<void> {
   for (let i = 0; i < rowIds.length; i += CHUNK) {
     const ids = rowIds.slice(i, i + CHUNK);
     const open = await trx("row_checks")
@@ -20,16 +28,16 @@ export async function resetChecks(trx: Knex.Transaction, actor: Actor, projectId
       .whereNot("state", "unchecked")
       .select<{ row_id: string; state: string }[]>("row_id", "state");
     const now = new Date().toISOString();
+    const edited = editor === "keep" ? {} : { last_edited_by: editor, last_edited_at: now };
     await trx("row_checks")
-      .insert(ids.map((row_id) => ({ firm_id: actor.firm.id, project_id: projectId, sheet, row_id, state: "unchecked", last_edited_by: editor, last_edited_at: now })))
+      .insert(ids.map((row_id) => ({ firm_id: actor.firm.id, project_id: projectId, sheet, row_id, state: "unchecked", ...edited })))
       .onConflict(["project_id", "sheet", "row_id"])
       .merge({
         state: "unchecked",
         checked_by: null,
         checked_at: null,
         checked_row_version: null,
-        last_edited_by: editor,
-        last_edited_at: now,
+        ...edited,
         version: trx.raw("row_checks.version + 1"),
         updated_at: trx.fn.now(),
       });

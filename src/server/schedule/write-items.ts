@@ -4,7 +4,7 @@ import type { Actor } from "@/server/auth/actor";
 import { isUniqueViolation } from "@/server/db/unique-violation";
 import { AppError } from "@/server/http/app-error";
 import { attachLayers } from "@/server/repositories/schedule";
-import { assertPlanAllows } from "@/server/services/assert-plan-allows";
+import { assertPlanAllows, rowsBeforeChange } from "@/server/services/assert-plan-allows";
 import { checkChanges, type CheckedChange, type ItemChange, type RowConflict, type RowProblem } from "./check-changes";
 import { ENTITIES, readColumns, type EntityName } from "./entities";
 import { noteScheduleChanges, type ScheduleChange } from "@/server/services/note-schedule-changes";
@@ -29,7 +29,7 @@ function refuseConflicts(conflicts: RowConflict[]): never {
   throw new AppError("conflict", `${plural(conflicts.length, "row")} changed since you read ${conflicts.length === 1 ? "it" : "them"}; nothing was saved`, conflicts);
 }
 
-async function countRows(trx: Knex.Transaction | Knex, projectId: string): Promise<number> {
+export async function countRows(trx: Knex.Transaction | Knex, projectId: string): Promise<number> {
   const { rows } = await trx.raw<{ rows: { n: string }[] }>("select (select count(*) from surfaces where project_id = ?) + (select count(*) from duct_runs where project_id = ?) as n", [projectId, projectId]);
   return Number(rows[0]!.n);
 }
@@ -126,7 +126,15 @@ async function updateAll(trx: Knex.Transaction, actor: Actor, name: EntityName, 
  * every change is checked first (stale versions → 409 naming each row with its
  * current state; bad values → 422 naming row and field), and only a clean set is written.
  */
-export async function writeItems(trx: Knex.Transaction | Knex, actor: Actor, projectId: string, changes: ItemChange[], opts: { missing?: "conflict" | "not_found" } = {}): Promise<WriteResult> {
+export async function writeItems(
+  trx: Knex.Transaction | Knex,
+  actor: Actor,
+  projectId: string,
+  changes: ItemChange[],
+  // rowsBefore: the project's rows before a change its caller began in the transaction (a replace
+  // import's deletes), from rowsBeforeChange; otherwise counted here before this change's writes.
+  opts: { missing?: "conflict" | "not_found"; rowsBefore?: number | null } = {},
+): Promise<WriteResult> {
   const { checked, problems, conflicts } = await checkChanges(trx, actor.firm.id, projectId, changes);
   // A single-item route names one row by its URL: a row that is not there (or is another
   // firm's) is 404 there; in a bulk change it is a conflict (someone deleted it meanwhile).
@@ -136,13 +144,17 @@ export async function writeItems(trx: Knex.Transaction | Knex, actor: Actor, pro
   if (problems.length) refuseProblems(problems);
   // A lone edit is checked outside a transaction (no lock: its UPDATE is guarded by the version
   // read), but the write, its audit row and its check reset still commit together or not at all.
-  const write = (w: Knex.Transaction) => writeChecked(w, actor, projectId, changes, checked);
+  const write = (w: Knex.Transaction) => writeChecked(w, actor, projectId, changes, checked, opts.rowsBefore);
   return (trx as Knex.Transaction).isTransaction === true ? write(trx as Knex.Transaction) : (trx as Knex).transaction(write);
 }
 
 /** Writes changes that passed every check, with their audit rows and check resets, in `trx`. */
-async function writeChecked(trx: Knex.Transaction, actor: Actor, projectId: string, changes: ItemChange[], checked: CheckedChange[]): Promise<WriteResult> {
+async function writeChecked(trx: Knex.Transaction, actor: Actor, projectId: string, changes: ItemChange[], checked: CheckedChange[], rowsBefore?: number | null): Promise<WriteResult> {
   const result: WriteResult = { created: [], updated: [], deleted: [] };
+  const addsRows = checked.some((c) => c.op === "create" && (c.entity === "surfaces" || c.entity === "duct_runs"));
+  // The free plan refuses growth past its row limit, not a change that keeps the count (a batch
+  // that deletes as many rows as it adds), so the count before this change's writes is kept.
+  if (addsRows && rowsBefore === undefined) rowsBefore = await rowsBeforeChange(trx, actor.firm.id, () => countRows(trx, projectId));
   // For the audit trail and the check states, written in this same transaction.
   const noted: ScheduleChange[] = [];
   const deletes = checked.filter((c) => c.op === "delete");
@@ -167,9 +179,7 @@ async function writeChecked(trx: Knex.Transaction, actor: Actor, projectId: stri
     }
     // The free plan's row limit, counted after the inserts (and deletes) of this transaction:
     // a refusal (402) rolls all of it back.
-    if (creates.some((c) => c.entity === "surfaces" || c.entity === "duct_runs")) {
-      await assertPlanAllows(trx, actor.firm.id, { rows: () => countRows(trx, projectId) });
-    }
+    if (addsRows) await assertPlanAllows(trx, actor.firm.id, { rows: () => countRows(trx, projectId), rowsBefore });
     // Every design case multiplies the work of each result and report: the free plan caps them too.
     if (creates.some((c) => c.entity === "design_cases")) {
       await assertPlanAllows(trx, actor.firm.id, { designCases: async () => Number((await trx("design_cases").where({ project_id: projectId }).count({ n: "*" }))[0]!.n) });

@@ -12,6 +12,13 @@ export interface PlanNeeds {
   projects?: PlanCount;
   /** Rows (surfaces + duct runs) the one project will hold once the change is saved. */
   rows?: PlanCount;
+  /**
+   * Rows the project held before the change (from `rowsBeforeChange`). With it, a change that does
+   * not add rows passes even past the limit: replacing a sheet by as many rows (export, edit,
+   * import back), or editing a project that holds more than the free plan does (the firm stopped
+   * paying, or the demo). Without it, every count over the limit is refused.
+   */
+  rowsBefore?: number | null;
   /** Design cases the one project will hold once the change is saved. */
   designCases?: PlanCount;
   /** The change issues a revision. */
@@ -46,6 +53,10 @@ const UPGRADE = "A firm admin can upgrade under Firm › Billing; nothing alread
  *   await assertPlanAllows(trx, actor.firm.id, { projects: async () => (await countProjects(trx)) + 1 });
  *   // adding rows to a schedule: count after inserting, inside the same transaction
  *   await assertPlanAllows(trx, actor.firm.id, { rows: () => countRows(trx, projectId) });
+ *   // a change that deletes rows first (a replace import): only growth past the limit is refused
+ *   const rowsBefore = await rowsBeforeChange(trx, actor.firm.id, () => countRows(trx, projectId));
+ *   // … deletes and inserts …
+ *   await assertPlanAllows(trx, actor.firm.id, { rows: () => countRows(trx, projectId), rowsBefore });
  *   // issuing a revision / a clean report
  *   await assertPlanAllows(trx, actor.firm.id, { revisions: true });
  */
@@ -63,7 +74,8 @@ export async function assertPlanAllows(trx: Knex.Transaction, firmId: string, ne
   }
   if (needs.rows !== undefined) {
     const requested = await count(needs.rows);
-    if (requested > FREE_PLAN.rowsPerProject) {
+    const grows = needs.rowsBefore === undefined || needs.rowsBefore === null || requested > needs.rowsBefore;
+    if (requested > FREE_PLAN.rowsPerProject && grows) {
       throw refuse("rows", FREE_PLAN.rowsPerProject, requested, `The free plan holds ${FREE_PLAN.rowsPerProject} rows per project (this change would make ${requested}); a paid plan has no limit. ${UPGRADE}`);
     }
   }
@@ -76,6 +88,17 @@ export async function assertPlanAllows(trx: Knex.Transaction, firmId: string, ne
   if (needs.revisions) throw refuse("revisions", 0, 1, `Issuing revisions needs a paid plan. ${UPGRADE}`);
   if (needs.cleanReport) throw refuse("cleanReport", 0, 1, `Reports without the “not for issue” mark need a paid plan. ${UPGRADE}`);
   return plan;
+}
+
+/**
+ * The rows a project holds before a change that may delete rows and then add others, for
+ * `rowsBefore`: for a free firm counted under the same lock as the check (so two writers of one
+ * firm cannot both count the old total); null for a paid firm, which has no limit (no lock, no count).
+ */
+export async function rowsBeforeChange(trx: Knex.Transaction, firmId: string, count: () => Promise<number>): Promise<number | null> {
+  if ((await getPlan(firmId, trx)).plan === "paid") return null;
+  await trx("firms").where({ id: firmId }).forUpdate().first("id");
+  return count();
 }
 
 function refuse(limit: keyof PlanNeeds, allowed: number, requested: number, message: string): AppError {

@@ -10,7 +10,8 @@ import type { ItemChange, RowProblem } from "@/server/schedule/check-changes";
 import { ENTITIES, readColumns } from "@/server/schedule/entities";
 import { detectFormat, type Table, type UploadFormat } from "@/server/schedule/read-upload";
 import { readUploadInWorker } from "@/server/schedule/read-upload-in-worker";
-import { writeItems } from "@/server/schedule/write-items";
+import { countRows, writeItems } from "@/server/schedule/write-items";
+import { rowsBeforeChange } from "./assert-plan-allows";
 import { noteScheduleChanges } from "./note-schedule-changes";
 
 export interface ImportOptions {
@@ -54,6 +55,9 @@ export async function importSchedule(actor: Actor, projectId: string, opts: Impo
     const problems: CellProblem[] = [];
     const changes: ItemChange[] = [];
     const headers = new Map<string, string>();
+    // Counted before a replace deletes the sheet: the free plan refuses growth past its limit,
+    // not a sheet imported back in place of itself.
+    const rowsBefore = await rowsBeforeChange(trx, actor.firm.id, () => countRows(trx, projectId));
 
     for (const [sheet, table] of Object.entries(tables) as [TSheet, Table][]) {
       const parsed = parseSheet(table, sheet, lookups);
@@ -74,7 +78,7 @@ export async function importSchedule(actor: Actor, projectId: string, opts: Impo
     const headingProblems = problems.filter((p) => p.row === 1);
     if (headingProblems.length) throw new AppError("invalid_input", "The file lacks columns the schedule needs; nothing was imported", headingProblems);
     try {
-      await writeItems(trx, actor, projectId, changes);
+      await writeItems(trx, actor, projectId, changes, { rowsBefore });
     } catch (error) {
       if (!(error instanceof AppError && error.code === "invalid_input")) throw error;
       for (const p of error.details as RowProblem[]) {

@@ -28,9 +28,11 @@ async function projectRowIds(trx: Knex.Transaction, projectId: string, sheet: TC
 /**
  * The checking side of every write to a project's data, called by the writer inside its own
  * transaction: an audit row for each change (before and after), and every row whose results the
- * change can move goes back to unchecked with the writer as its last editor — the row itself, the
- * surfaces of a changed build-up, the rows of a changed zone, every row for a design case or a
- * site change. A change that leaves every value as it was (a reorder, a no-op save) keeps checks.
+ * change can move goes back to unchecked — the row itself, the surfaces of a changed build-up, the
+ * rows of a changed zone, every row for a design case or a site change. Only a row edited itself
+ * gets the writer as its last editor (who may then not check it); a project-level change leaves
+ * each row's last editor as it was, so whoever made it may still check rows they never edited. A
+ * change that leaves every value as it was (a reorder, a no-op save) keeps checks.
  */
 // Ids per statement: far below PostgreSQL's 65,535 bind parameters.
 const ID_CHUNK = 10_000;
@@ -69,5 +71,5 @@ export async function noteScheduleChanges(trx: Knex.Transaction, actor: Actor, p
     }
     if (direct[sheet].length > 0) await resetChecks(trx, actor, projectId, sheet, direct[sheet], editor, `${sheet === "surfaces" ? "surface" : "duct run"} changed`);
   }
-  for (const i of indirect) await resetChecks(trx, actor, projectId, i.sheet, await projectRowIds(trx, projectId, i.sheet, i.where), editor, i.reason);
+  for (const i of indirect) await resetChecks(trx, actor, projectId, i.sheet, await projectRowIds(trx, projectId, i.sheet, i.where), "keep", i.reason);
 }

@@ -6,6 +6,7 @@ import { SHEETS } from "@/schemas/schedule";
 import { SHEET_TITLES } from "@/schedule/sheet-columns";
 import type { useSheetEditing } from "@/components/grid/use-sheet-editing";
 import { useProject } from "@/components/schedule/schedule-context";
+import { ExportMenu } from "./export-menu";
 
 const button = "rounded-chip border border-line bg-surface px-3 py-1.5 text-small font-medium hover:bg-sunken disabled:opacity-50 disabled:hover:bg-surface";
 
@@ -85,23 +86,15 @@ export function ScheduleToolbar(props: {
             </button>
           </>
         ) : null}
-        <details className="relative">
-          <summary className={`${button} cursor-pointer list-none`}>Export ▾</summary>
-          <div className="absolute right-0 z-10 mt-1 grid w-64 gap-1 rounded-chip border border-line bg-surface p-2 text-small shadow-panel">
-            <a className="rounded px-2 py-1 hover:bg-sunken" href={exportUrl("csv", `&sheet=${props.sheet}&case=${props.caseId}`)} download>
-              {SHEET_TITLES[props.sheet]} as CSV (with results)
-            </a>
-            <a className="rounded px-2 py-1 hover:bg-sunken" href={exportUrl("xlsx", `&case=${props.caseId}`)} download>
-              Whole schedule as XLSX (with results)
-            </a>
-            <a className="rounded px-2 py-1 hover:bg-sunken" href={exportUrl("csv", `&sheet=${props.sheet}&template=1`)} download>
-              {SHEET_TITLES[props.sheet]} template (CSV)
-            </a>
-            <a className="rounded px-2 py-1 hover:bg-sunken" href={exportUrl("xlsx", "&template=1")} download>
-              Template workbook (XLSX)
-            </a>
-          </div>
-        </details>
+        <ExportMenu
+          buttonClass={button}
+          items={[
+            { label: `${SHEET_TITLES[props.sheet]} as CSV (with results)`, href: exportUrl("csv", `&sheet=${props.sheet}&case=${props.caseId}`) },
+            { label: "Whole schedule as XLSX (with results)", href: exportUrl("xlsx", `&case=${props.caseId}`) },
+            { label: `${SHEET_TITLES[props.sheet]} template (CSV)`, href: exportUrl("csv", `&sheet=${props.sheet}&template=1`) },
+            { label: "Template workbook (XLSX)", href: exportUrl("xlsx", "&template=1") },
+          ]}
+        />
       </div>
     </div>
   );

@@ -14,6 +14,7 @@ import { Notices } from "@/components/schedule/notices";
 import { useProject, useSchedule } from "@/components/schedule/schedule-context";
 import { UnitsSwitch } from "@/components/schedule/units-switch";
 import { ZoneTotalsPanel } from "@/components/schedule/zone-totals-panel";
+import { needsSetup, ProjectSetup } from "./project-setup";
 import { ScheduleToolbar } from "./schedule-toolbar";
 
 /** The schedule: two sheets in the grid, recalculated in the browser for the chosen design case, with zone totals beside. */
@@ -55,13 +56,8 @@ export function ScheduleView({ initialSheet = "surfaces", initialCase }: { initi
     return t;
   }, [schedule, sheet, byRow]);
 
-  if (!dc || !results) {
-    return (
-      <p className="rounded-panel border border-dashed border-line bg-surface p-8 text-small text-muted">
-        No design case yet. Add one (outdoor conditions) under Design cases: the grid computes every row for the case you choose.
-      </p>
-    );
-  }
+  // A project without a design case (or with nothing yet for a row to name) is set up first.
+  if (!dc || !results || needsSetup(schedule)) return <ProjectSetup />;
 
   return (
     <div className="grid gap-4">

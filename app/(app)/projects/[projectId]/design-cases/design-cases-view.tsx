@@ -8,9 +8,15 @@ import { readFields, shownValue, type FieldDef } from "@/components/forms/item-f
 import { useSchedule } from "@/components/schedule/schedule-context";
 import { unitLabel } from "@/units/units";
 
+// What the case's kind takes from the zones and duct runs (src/calc/schedule/cases.ts).
+const KIND_HINTS: Record<string, string> = {
+  heating: "Inside air at each zone's heating set point; duct runs take their heating entering air. Usually no sun: leave the irradiance blank.",
+  cooling: "Inside air at each zone's cooling set point; duct runs take their cooling entering air and cooling surround where given. Enter the sun on each face below.",
+};
+
 const FIELDS: FieldDef[] = [
   { name: "name", label: "Name", kind: "text" },
-  { name: "kind", label: "Kind", kind: "select", options: CASE_KIND_OPTIONS, hint: "Heating uses the zones' heating set points and the ducts' heating supply temperatures" },
+  { name: "kind", label: "Kind", kind: "select", options: CASE_KIND_OPTIONS, hint: (kind) => KIND_HINTS[kind] ?? "" },
   ...Object.entries(DESIGN_CASE_NUMBERS).map(([name, spec]): FieldDef => ({ name, label: spec.label, kind: "number", spec, ...("hint" in spec ? { hint: spec.hint } : {}) })),
 ];
 // A new case starts under a clear sky, as the engine assumes when no cloud cover is given.
@@ -24,7 +30,7 @@ const SOLAR: Extra = {
     const table = (values.solar_W_m2 ?? {}) as Record<string, number>;
     return (
       <fieldset className="grid gap-2">
-        <legend className="text-micro font-medium text-muted">Solar irradiance on the faces ({unitLabel("heat_flux", system)}); blank = none. Used by cooling cases.</legend>
+        <legend className="text-micro font-medium text-muted">Solar irradiance on the faces ({unitLabel("heat_flux", system)}); blank = none.</legend>
         <div className="grid grid-cols-3 gap-2 sm:grid-cols-5 lg:grid-cols-9">
           {FACES.map((o) => {
             const f = solarField(o);
