@@ -88,7 +88,7 @@ export const DESIGN_CASE_NUMBERS = {
     ...FRACTION,
     digits: 1,
     label: "Cloud cover",
-    hint: "0 clear sky … 1 overcast. Cloud warms the sky a surface radiates to; clear (0) is the cautious choice for heating and for condensation on ducts outdoors",
+    hint: "0 clear sky … 1 overcast. Clear (0) is the cautious choice for heating and for condensation on outdoor ducts",
   },
 } satisfies Record<string, NumberSpec>;
 

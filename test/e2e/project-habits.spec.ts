@@ -57,18 +57,27 @@ test("Create project opens the new project, which says what to set up first and 
   await expect(setup.getByRole("link", { name: "Add zones →" })).toHaveAttribute("href", /\/zones$/);
   await expect(setup.getByRole("link", { name: "Add build-ups →" })).toHaveAttribute("href", /\/buildups$/);
   await expect(setup.getByRole("link", { name: "Add a design case →" })).toHaveAttribute("href", /\/design-cases$/);
+  await expect(setup.getByRole("link", { name: "Site and units" })).toHaveAttribute("href", /\/settings$/);
   if (SHOTS) await page.screenshot({ path: `${SHOTS}/project-empty.png`, fullPage: true });
 
   // The import is there at once, before any design case exists.
-  await setup.getByRole("button", { name: "Import a schedule…" }).click();
+  const importButton = setup.getByRole("button", { name: "Import a schedule…" });
+  await expect(importButton).toBeEnabled();
+  await importButton.click();
+  await expect(importButton).toHaveAttribute("aria-expanded", "true");
   await expect(page.getByRole("region", { name: "Import a schedule" })).toBeVisible();
   if (SHOTS) await page.screenshot({ path: `${SHOTS}/project-empty-import.png`, fullPage: true });
 
   // Each step's link opens its page; once a zone exists the step says so.
   await setup.getByRole("link", { name: "Add zones →" }).click();
   await expect(page).toHaveURL(/\/zones$/);
-  await page.getByLabel("Name").last().fill("Workshop");
-  await page.getByRole("button", { name: "Add zone" }).click();
+  const zone = page.locator("form").filter({ has: page.getByRole("heading", { name: "New zone" }) });
+  await zone.getByLabel("Name").fill("Workshop");
+  await zone.getByLabel(/^Floor area/).fill("220");
+  await zone.getByLabel(/^Heating set point/).fill("16");
+  await zone.getByLabel(/^Cooling set point/).fill("26");
+  await zone.getByLabel(/^Inside RH/).fill("50");
+  await zone.getByRole("button", { name: "Add zone" }).click();
   await expect(page.getByRole("heading", { name: /^Workshop/ })).toBeVisible();
   await page.getByRole("navigation", { name: "Project" }).getByRole("link", { name: "Schedule" }).click();
   await expect(page.getByRole("region", { name: "Set up the project" }).getByRole("listitem").nth(0)).toContainText("1 zone");

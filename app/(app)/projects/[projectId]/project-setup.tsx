@@ -15,7 +15,8 @@ export function needsSetup(s: Pick<TSchedule, "design_cases" | "zones" | "buildu
   return s.design_cases.length === 0 || (s.surfaces.length + s.duct_runs.length === 0 && (s.zones.length === 0 || s.buildups.length === 0));
 }
 
-const link = "rounded-chip border border-line bg-surface px-3 py-1.5 text-small font-medium hover:bg-sunken";
+const secondary = "rounded-chip border border-line bg-surface px-3 py-1.5 text-small font-medium hover:bg-sunken";
+const primary = "rounded-chip bg-accent px-3 py-1.5 text-small font-semibold text-accent-ink hover:opacity-90";
 
 /** The schedule page of a project not yet set up: what to add first, in order, with links, and the import at once. */
 export function ProjectSetup() {
@@ -54,7 +55,12 @@ export function ProjectSetup() {
         <p className="max-w-prose text-small text-muted">
           {rows > 0
             ? `The schedule holds ${s.surfaces.length} surfaces and ${s.duct_runs.length} duct runs; they are computed once the project has a design case.`
-            : "The schedule's rows name a zone and a build-up, and are computed for a design case: add these first, then the rows (in the grid or from a file)."}
+            : "The schedule's rows name a zone and a build-up, and are computed for a design case: add these first, then the rows (in the grid or from a file)."}{" "}
+          The site (altitude, terrain, wind law, default method) is under{" "}
+          <Link href={`${base}/settings`} className="text-accent hover:underline">
+            Site and units
+          </Link>
+          .
         </p>
       </header>
       <ol className="grid gap-3 md:grid-cols-3">
@@ -79,10 +85,10 @@ export function ProjectSetup() {
       {canEdit ? (
         <div className="grid gap-3 border-t border-line pt-4">
           <div className="flex flex-wrap items-center gap-3">
-            <button type="button" className={`${link} bg-accent font-semibold text-accent-ink hover:bg-accent`} onClick={() => setImporting((v) => !v)}>
+            <button type="button" aria-expanded={importing} className={primary} onClick={() => setImporting((v) => !v)}>
               Import a schedule…
             </button>
-            <a className={link} href={`/api/projects/${projectId}/export?format=xlsx&template=1`} download>
+            <a className={secondary} href={`/api/projects/${projectId}/export?format=xlsx&template=1`} download>
               Template workbook (XLSX)
             </a>
             <p className="text-small text-muted">Rows are matched to zones and build-ups by name: those must exist first.</p>

@@ -10,8 +10,8 @@ import { unitLabel } from "@/units/units";
 
 // What the case's kind takes from the zones and duct runs (src/calc/schedule/cases.ts).
 const KIND_HINTS: Record<string, string> = {
-  heating: "Inside air at each zone's heating set point; duct runs take their heating entering air. Usually no sun: leave the irradiance blank.",
-  cooling: "Inside air at each zone's cooling set point; duct runs take their cooling entering air and cooling surround where given. Enter the sun on each face below.",
+  heating: "Zones at their heating set points, ducts at their heating entering air; usually no sun.",
+  cooling: "Zones at their cooling set points, ducts at their cooling entering air and surround; sun below.",
 };
 
 const FIELDS: FieldDef[] = [
