@@ -165,38 +165,27 @@ export function caseBreakdowns(s: Schedule, dc: DesignCase, rows: CaseRows): Cas
   const buildup = new Lines(s.buildups.filter((b) => usedBuildups.has(b.id)).map((b) => [b.id, b.name, true]));
   const zoneRows = new Map<string, ZoneRowResult[]>(s.zones.map((z) => [z.id, []]));
   const left_out: LeftOutRow[] = [];
-  const failed = (r: CalcResult | undefined): LeftOutRow["reason"] | null => (r === undefined ? "error" : r.ok ? null : r.error.code === "not_computed" ? "not_computed" : "error");
-  const why = (r: CalcResult | undefined) => (r === undefined ? "no result" : r.ok ? "" : r.error.message);
+  // A row's heat flow, or why it has none (recorded in left_out).
+  const flow = (label: string, sheet: LeftOutRow["sheet"], zone_id: string, r: CalcResult | undefined): number | null => {
+    const out = (reason: LeftOutRow["reason"], message: string) => (left_out.push({ label, sheet, reason, message }), null);
+    if (r === undefined) return out("error", "no result");
+    if (!r.ok) return out(r.error.code === "not_computed" ? "not_computed" : "error", r.error.message);
+    if (!zoneRows.has(zone_id)) return out("error", `zone ${zone_id} is not in this project`);
+    const Q = (r as unknown as { Q_W: unknown }).Q_W;
+    return typeof Q === "number" && Number.isFinite(Q) ? Q : out("error", "no finite heat flow");
+  };
 
   for (const row of s.surfaces) {
-    const r = rows.surface(row.id);
-    const bad = failed(r);
-    if (bad !== null || !zoneRows.has(row.zone_id)) {
-      left_out.push({ label: row.label, sheet: "surfaces", reason: bad ?? "error", message: bad ? why(r) : `zone ${row.zone_id} is not in this project` });
-      continue;
-    }
-    const Q = (r as { Q_W: number }).Q_W;
-    if (!Number.isFinite(Q)) {
-      left_out.push({ label: row.label, sheet: "surfaces", reason: "error", message: "no finite heat flow" });
-      continue;
-    }
+    const Q = flow(row.label, "surfaces", row.zone_id, rows.surface(row.id));
+    if (Q === null) continue;
     zoneRows.get(row.zone_id)!.push({ source: "surface", Q_W: Q });
     orientation.add(orientationOf(row.tilt_deg, row.azimuth_deg), Q, row.area_m2);
     element.add(elementOf(row.tilt_deg, buildups.get(row.buildup_id)), Q, row.area_m2);
     buildup.add(row.buildup_id, Q, row.area_m2);
   }
   for (const row of s.ductRuns) {
-    const r = rows.duct(row.id);
-    const bad = failed(r);
-    if (bad !== null || !zoneRows.has(row.zone_id)) {
-      left_out.push({ label: row.label, sheet: "duct_runs", reason: bad ?? "error", message: bad ? why(r) : `zone ${row.zone_id} is not in this project` });
-      continue;
-    }
-    const Q = (r as { Q_W: number }).Q_W;
-    if (!Number.isFinite(Q)) {
-      left_out.push({ label: row.label, sheet: "duct_runs", reason: "error", message: "no finite heat flow" });
-      continue;
-    }
+    const Q = flow(row.label, "duct_runs", row.zone_id, rows.duct(row.id));
+    if (Q === null) continue;
     const in_zone = row.in_served_zone === true;
     zoneRows.get(row.zone_id)!.push({ source: "duct_run", Q_W: Q, in_zone });
     if (in_zone) left_out.push({ label: row.label, sheet: "duct_runs", reason: "in_zone", message: "inside the zone it serves: its heat stays in the zone" });
