@@ -25,7 +25,8 @@ export function reportBreakdowns(input: ReportInput, results: ScheduleResults[])
 function linesTable(w: Writer, input: ReportInput, b: Breakdowns, title: string, column: string, note: string, pick: (c: CaseBreakdowns) => BreakdownLine[]): void {
   const c = input.convert;
   const first = b.cases[0]!;
-  w.need(24);
+  // Title, two heading rows and the lines kept together when they fit on a page (≈ 5 mm a line).
+  w.need(Math.min(120, 20 + 5 * (pick(first).length + 1)));
   w.doc.setFont(FONT, "bold").setFontSize(9).setTextColor(INK).text(pdfText(title), PAGE.margin, w.y + 3);
   w.doc.setFont(FONT, "normal").setFontSize(7).setTextColor(MUTED).text(pdfText(note), PAGE.margin, w.y + 6.5);
   w.doc.setTextColor(INK);
@@ -66,7 +67,14 @@ export function breakdownSection(w: Writer, input: ReportInput, results: Schedul
   linesTable(w, input, b, "By orientation", "Orientation", "Surfaces to outside air; adds up to the fabric loss and gain.", (k) => k.orientation);
   linesTable(w, input, b, "By element type", "Element", "Surfaces and distribution ducts; adds up to the zones' heat loss and gain.", (k) => k.element);
   linesTable(w, input, b, "By build-up", "Build-up", "Surfaces to outside air; adds up to the fabric loss and gain.", (k) => k.buildup);
-  for (const k of b.cases) if (k.left_out.length > 0) w.paragraph(`${k.name}: ${leftOutSentence(k.left_out)} ${k.left_out.map((l) => l.label).join(", ")}.`, 7.5, MUTED);
+  // What no line holds, once for the cases that leave out the same rows.
+  const said = new Map<string, string[]>();
+  for (const k of b.cases) {
+    if (k.left_out.length === 0) continue;
+    const text = `${leftOutSentence(k.left_out)} ${k.left_out.map((l) => l.label).join(", ")}.`;
+    said.set(text, [...(said.get(text) ?? []), k.name]);
+  }
+  for (const [text, names] of said) w.paragraph(`${names.length === b.cases.length ? "Every case" : names.join("; ")}: ${text}`, 7.5, INK);
   w.paragraph(BREAKDOWN_RULES.join(" "), 7.5, MUTED);
 
   w.heading("4.2  Peak case of each zone", 11);

@@ -43,7 +43,7 @@ describe("report: totals by orientation, element and build-up, and the peak case
       expect(text).toContain(cell(r.zones.reduce((a, z) => a + z.loss_W, 0), "W"));
       expect(text).toContain(cell(r.zones.reduce((a, z) => a + z.gain_W, 0), "W"));
     }
-    expect(text).toContain("Not in these totals: 1 row not computed (over ground). S-099 Ground slab.");
+    expect(text).toContain("Every case: Not in these totals: 1 row not computed (over ground). S-099 Ground slab.");
     expect(text).not.toMatch(/not_computed|in_zone|loss_W/);
   });
 
