@@ -17,7 +17,7 @@ export function CaseBreakdownTables({ b, system }: { b: CaseBreakdowns; system: 
   ];
   return (
     <div className="grid gap-3">
-      <div className="grid content-start gap-4 lg:grid-cols-3 2xl:grid-cols-1">
+      <div className="grid content-start items-start gap-4 lg:grid-cols-3 2xl:grid-cols-1">
         {tables.map(([key, title, lines, note]) => (
           <LinesTable key={key} testId={`breakdown-${key}`} title={title} lines={lines} note={note} system={system} />
         ))}
@@ -50,9 +50,9 @@ function LinesTable({ testId, title, lines, note, system }: { testId: string; ti
       <thead className="text-micro text-muted">
         <tr>
           <th className="py-1 text-left font-medium">{title}</th>
-          <th className="py-1 text-right font-medium">Area {unitLabel("area", system)}</th>
-          <th className="py-1 text-right font-medium">Loss {unitLabel("power", system)}</th>
-          <th className="py-1 text-right font-medium">Gain {unitLabel("power", system)}</th>
+          <th className="py-1 pl-2 text-right font-medium">Area {unitLabel("area", system)}</th>
+          <th className="py-1 pl-2 text-right font-medium">Loss {unitLabel("power", system)}</th>
+          <th className="py-1 pl-2 text-right font-medium">Gain {unitLabel("power", system)}</th>
         </tr>
       </thead>
       <tbody>
