@@ -12,6 +12,8 @@ const expect = baseExpect.configure({ timeout: 15_000 });
 // Set SHOTS_DIR to keep screenshots of the panel at 1366×768.
 const SHOTS = process.env.SHOTS_DIR;
 const num = (s: string) => Number(s.replace(/,/g, "").trim());
+// Element screenshots scroll the panel under the app's sticky bar: leave the bar out of them.
+const NO_BAR = "header.sticky { visibility: hidden !important; }";
 const totalRow = (table: Locator) => table.locator("tr", { has: table.page().getByRole("rowheader", { name: "Total", exact: true }) });
 
 test("the panel shows the case's totals by orientation, element and build-up, and each zone's peak case", async ({ page }) => {
@@ -44,7 +46,7 @@ test("the panel shows the case's totals by orientation, element and build-up, an
   await expect(left).toContainText("not computed (over ground)");
   await expect(left).toContainText("inside the zone it serves");
 
-  if (SHOTS) await panel.screenshot({ path: `${SHOTS}/totals-panel-1366x768.png` });
+  if (SHOTS) await panel.screenshot({ path: `${SHOTS}/totals-panel-1366x768.png`, style: NO_BAR });
 
   // Peak cases: open the every-case table; each zone's named peak is the largest of its row there.
   await panel.getByText("Every design case and each zone's peak case").click();
@@ -70,7 +72,7 @@ test("the panel shows the case's totals by orientation, element and build-up, an
 
   if (SHOTS) {
     await peaks.scrollIntoViewIfNeeded();
-    await panel.screenshot({ path: `${SHOTS}/totals-panel-peaks-1366x768.png` });
+    await panel.screenshot({ path: `${SHOTS}/totals-panel-peaks-1366x768.png`, style: NO_BAR });
     await page.screenshot({ path: `${SHOTS}/totals-page-1366x768.png` });
   }
 });

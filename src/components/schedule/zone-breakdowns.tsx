@@ -47,7 +47,7 @@ function LinesTable({ testId, title, lines, note, system }: { testId: string; ti
       <caption className="pb-1 text-left text-micro text-muted" title={note}>
         <span className="font-semibold text-ink">By {title.toLowerCase()}</span> · {note}
       </caption>
-      <thead className="text-micro text-muted">
+      <thead className="whitespace-nowrap text-micro text-muted">
         <tr>
           <th className="py-1 text-left font-medium">{title}</th>
           <th className="py-1 pl-2 text-right font-medium">Area {unitLabel("area", system)}</th>
