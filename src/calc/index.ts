@@ -23,3 +23,8 @@ export { OVER_GROUND_MESSAGE, scheduleResults, type Schedule, type ScheduleResul
 export { working } from "./working/index";
 export type { Working, WorkingLine, MethodUsed, WorkingCharts, LocalHPoint, WindPoint, MethodSpreadPoint } from "./working/index";
 export { ductRunRowWorking, insideVerdict, methodName, surfaceRowWorking } from "./working/schedule-row";
+export {
+  BREAKDOWN_RULES, ELEMENT_LABELS, ELEMENT_TYPES, ORIENTATION_BINS, ORIENTATION_LABELS, VERTICAL_BAND_DEG, caseBreakdowns, caseRowsOf, elementOf, isGlazing,
+  leftOutSentence, orientationOf, scheduleBreakdowns, zonePeaks,
+  type BreakdownLine, type Breakdowns, type CaseBreakdowns, type CasePeak, type CaseRows, type ElementType, type LeftOutRow, type OrientationBin, type ZonePeak,
+} from "./schedule/breakdowns";

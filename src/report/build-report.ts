@@ -8,6 +8,7 @@ import { ductRunRowWorking, scheduleResults, surfaceRowWorking, type MethodUsed,
 import { finishPages, Writer } from "./layout";
 import { conventions, cover, designCases, methodIdentifiers, methodRefs, methodStatement, zoneTotals } from "./sections";
 import { spreadSection } from "./checks";
+import { breakdownSection } from "./breakdowns";
 import { scheduleSummary } from "./summary";
 import { ductTables, surfaceTables, warningsList, workingsAppendix } from "./rows";
 import { useReportFont } from "./report-font";
@@ -93,6 +94,7 @@ export function* reportSteps(input: ReportInput, every = 25): Generator<ReportPr
   methodStatement(w, [...methods.values()]);
   conventions(w);
   zoneTotals(w, input, results);
+  breakdownSection(w, input, results);
   const tables = Math.max(1, 2 * results.length);
   let table = 0;
   const tabling = () => ({ fraction: SHARE.workings + (SHARE.tables * ++table) / tables, stage: "Writing the sections and row tables" });

@@ -171,5 +171,10 @@ describe("XLSX import, export and templates", () => {
     expect((totals.getRow(1).values as string[]).slice(1)).toEqual(expect.arrayContaining(["Fabric loss (W)", "Distribution loss (W)", "Distribution gain (W)"]));
     const texts = totals.getSheetValues().flatMap((r) => (Array.isArray(r) ? r.slice(1) : [])).map(String);
     expect(texts).toContain(exclusionsSentence());
+    // The breakdowns of every case beside them, with each zone's peak case named.
+    expect(wb2.worksheets.map((w) => w.name)).toEqual(["Surfaces", "Duct runs", "Zone totals", "Breakdowns", "Read me"]);
+    const breakdowns = wb2.getWorksheet("Breakdowns")!.getSheetValues().flatMap((r) => (Array.isArray(r) ? r.slice(1) : [])).map(String);
+    for (const t of ["Peak case of each zone", "Not in these totals"]) expect(breakdowns).toContain(t);
+    expect(breakdowns.some((t) => t.startsWith("By element type"))).toBe(true);
   });
 });

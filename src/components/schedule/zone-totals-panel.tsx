@@ -1,20 +1,23 @@
 "use client";
 
 import { useDeferredValue, useMemo, useState } from "react";
-import { exclusionsSentence, type ScheduleResults } from "@/calc/index";
+import { caseBreakdowns, exclusionsSentence, scheduleBreakdowns, type ScheduleResults } from "@/calc/index";
 import type { TSchedule } from "@/schemas/schedule";
-import { resultsFor } from "@/schedule/engine-schedule";
+import { engineDesignCase, engineSchedule, resultsFor } from "@/schedule/engine-schedule";
 import { formatQuantity } from "@/units/format";
 import { toDisplay, unitLabel } from "@/units/units";
 import { ZoneTotalsChart } from "@/components/charts/zone-totals-chart";
 import { EngineeringCaution } from "@/components/engineering-caution";
+import { panelCaseRows } from "./breakdown-rows";
 import { useProject } from "./schedule-context";
+import { CaseBreakdownTables, ZonePeaks } from "./zone-breakdowns";
 
 /**
  * Zone totals beside the grid: heat loss and gain of each zone in the chosen design case, in W
  * and W/m² of floor area, split into fabric and distribution (ducts crossing unconditioned or
  * outdoor space), with the ducts inside the zone they serve shown for reference only; a bar chart
- * of them, each zone's governing figure in every case, and what every total leaves out.
+ * of them, each zone's governing figure in every case, and what every total leaves out; beneath,
+ * the case's totals by orientation, element type and build-up, and each zone's peak cases.
  */
 export function ZoneTotalsPanel({ schedule, results }: { schedule: TSchedule; results: ScheduleResults }) {
   const { system } = useProject();
@@ -26,7 +29,15 @@ export function ZoneTotalsPanel({ schedule, results }: { schedule: TSchedule; re
   // repainted (deferred), so neither the first paint nor typing waits for them.
   const [open, setOpen] = useState(false);
   const later = useDeferredValue(schedule);
-  const byCase = useMemo(() => (open ? later.design_cases.map((dc) => ({ dc, zones: resultsFor(later, dc).zones })) : []), [later, open]);
+  const all = useMemo(() => {
+    if (!open) return null;
+    const perCase = later.design_cases.map((dc) => ({ dc, results: resultsFor(later, dc) }));
+    const b = scheduleBreakdowns(engineSchedule(later), later.design_cases.map(engineDesignCase), perCase.map((c) => panelCaseRows(c.results)));
+    return { byCase: perCase.map(({ dc, results }) => ({ dc, zones: results.zones })), peaks: b.peaks };
+  }, [later, open]);
+  const byCase = all?.byCase ?? [];
+  const current = schedule.design_cases.find((d) => d.id === results.design_case_id);
+  const breakdowns = useMemo(() => (current ? caseBreakdowns(engineSchedule(schedule), engineDesignCase(current), panelCaseRows(results)) : null), [schedule, current, results]);
   const bars = results.zones.map((z) => ({ zone: z.name, loss: toDisplay("power", z.loss_W, system), gain: toDisplay("power", z.gain_W, system) }));
   const total = results.zones.reduce((a, z) => ({ loss: a.loss + z.loss_W, gain: a.gain + z.gain_W }), { loss: 0, gain: 0 });
 
@@ -34,7 +45,7 @@ export function ZoneTotalsPanel({ schedule, results }: { schedule: TSchedule; re
     <section aria-label="Zone totals" className="grid content-start gap-4 rounded-panel border border-line bg-surface p-4 shadow-panel">
       <header>
         <h2 className="text-lead font-semibold">Zone totals</h2>
-        <p className="text-small text-muted">{schedule.design_cases.find((d) => d.id === results.design_case_id)?.name}</p>
+        <p className="text-small text-muted">{current?.name}</p>
       </header>
       <div className="grid content-start gap-4 lg:grid-cols-2 lg:gap-8 2xl:grid-cols-1 2xl:gap-4">
         <div className="grid content-start gap-2">
@@ -100,8 +111,16 @@ export function ZoneTotalsPanel({ schedule, results }: { schedule: TSchedule; re
         </div>
         <ZoneTotalsChart data={bars} unit={W} />
       </div>
-      <details className="text-small" onToggle={(e) => setOpen(e.currentTarget.open)}>
-        <summary className="cursor-pointer font-medium">Every design case</summary>
+      {breakdowns ? (
+        <details open className="text-small" data-testid="breakdowns">
+          <summary className="cursor-pointer font-medium">By orientation, element and build-up</summary>
+          <div className="mt-2">
+            <CaseBreakdownTables b={breakdowns} system={system} />
+          </div>
+        </details>
+      ) : null}
+      <details className="text-small" onToggle={(e) => setOpen(e.currentTarget.open)} data-testid="every-case">
+        <summary className="cursor-pointer font-medium">Every design case and each zone&apos;s peak case</summary>
         <table className="mt-2 w-full" aria-label="Zone totals in every design case">
           <thead className="text-micro text-muted">
             <tr>
@@ -129,6 +148,7 @@ export function ZoneTotalsPanel({ schedule, results }: { schedule: TSchedule; re
             ))}
           </tbody>
         </table>
+        {all ? <ZonePeaks peaks={all.peaks} system={system} /> : null}
       </details>
       <EngineeringCaution className="border-t border-line pt-3 text-micro" />
     </section>

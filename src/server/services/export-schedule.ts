@@ -2,11 +2,12 @@ import "server-only";
 import ExcelJS from "exceljs";
 import Papa from "papaparse";
 import { ENGINEERING_CAUTION } from "@/components/engineering-caution";
-import { exclusionsSentence, type ScheduleResults } from "@/calc/index";
+import { caseRowsOf, exclusionsSentence, scheduleBreakdowns, type ScheduleResults } from "@/calc/index";
 import { labelOf } from "@/schemas/schedule-fields";
-import type { TSchedule, TSheet } from "@/schemas/schedule";
+import type { TDesignCase, TSchedule, TSheet } from "@/schemas/schedule";
+import { BREAKDOWNS_SHEET, breakdownsTable } from "@/schedule/breakdowns-table";
 import { CSV_ESCAPE_FORMULAE } from "@/schedule/csv-formulae";
-import { resultsFor } from "@/schedule/engine-schedule";
+import { engineDesignCase, engineSchedule, resultsFor } from "@/schedule/engine-schedule";
 import { RESULT_COLUMNS, resultBand, resultHeader, resultValue, rowProblem, type ResultColumn, type RowOutcome } from "@/schedule/result-columns";
 import { SHEET_COLUMNS, SHEET_TITLES, columnHeader, flagLabel, type SheetColumn } from "@/schedule/sheet-columns";
 import type { Actor } from "@/server/auth/actor";
@@ -138,6 +139,16 @@ export async function exportSchedule(actor: Actor, projectId: string, opts: Expo
     // The byte-order mark lets spreadsheet programs read m², ° and · as UTF-8.
     return { filename: `${base}-${opts.sheet}.csv`, contentType: "text/csv; charset=utf-8", body: new TextEncoder().encode(`\uFEFF${csv}\r\n`) };
   }
+  const body = await scheduleWorkbook(s, opts, results === null ? undefined : dc, results);
+  return { filename: `${base}.xlsx`, contentType: "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet", body };
+}
+
+/**
+ * The XLSX of a schedule already read: the sheets (or templates), and with a design case its
+ * zone totals and the breakdowns by orientation, element and build-up of every case.
+ */
+export async function scheduleWorkbook(s: TSchedule, opts: Pick<ExportOptions, "sheet" | "template">, dc?: TDesignCase, known?: ScheduleResults | null): Promise<Uint8Array<ArrayBuffer>> {
+  const results = dc && !opts.template ? (known ?? resultsFor(s, dc)) : null;
   const wb = new ExcelJS.Workbook();
   wb.creator = "Filmsheet";
   for (const sheet of opts.sheet ? [opts.sheet] : (["surfaces", "duct_runs"] as const)) {
@@ -146,13 +157,18 @@ export async function exportSchedule(actor: Actor, projectId: string, opts: Expo
     ws.getRow(1).font = { bold: true };
     ws.columns.forEach((c) => (c.width = 16));
   }
-  if (results) {
+  if (results && dc) {
     const ws = wb.addWorksheet("Zone totals", { views: [{ state: "frozen", ySplit: 1 }] });
-    ws.addRows(zoneTotalsTable(s, results, dc?.name ?? ""));
+    ws.addRows(zoneTotalsTable(s, results, dc.name));
     ws.getRow(1).font = { bold: true };
     ws.columns.forEach((c, i) => (c.width = i === 0 ? 28 : 18));
+    // Every case, for the breakdowns side by side and each zone's peak case; the exported one is not computed twice.
+    const perCase = s.design_cases.map((d) => caseRowsOf(d.id === dc.id ? results : resultsFor(s, d)));
+    const b = scheduleBreakdowns(engineSchedule(s), s.design_cases.map(engineDesignCase), perCase);
+    const bs = wb.addWorksheet(BREAKDOWNS_SHEET);
+    bs.addRows(breakdownsTable(b, dc.id, s.project.unit_system));
+    bs.columns.forEach((c, i) => (c.width = i === 0 ? 30 : 18));
   }
   readMe(wb.addWorksheet("Read me"), s);
-  const body = new Uint8Array(await wb.xlsx.writeBuffer());
-  return { filename: `${base}.xlsx`, contentType: "application/vnd.openxmlformats-officedocument.spreadsheetml.sheet", body };
+  return new Uint8Array(await wb.xlsx.writeBuffer());
 }
