@@ -5,11 +5,13 @@
 // A body of 1 MiB or more is cut in two between cases (scripts/lib/calc-split.ts) and its second
 // half parsed and computed on a worker thread (scripts/calc-worker.ts) while this thread does the
 // first; the halves' texts joined by a comma are the whole answer's text, so the bytes are those of
-// one thread. Anything that does not cut cleanly goes the one-thread way. FILMSHEET_CALC_THREADS=1
-// keeps every body on one thread.
+// one thread. Anything that does not cut cleanly goes the one-thread way. The worker is used when
+// a core is free (load average) or FILMSHEET_CALC_THREADS=2; FILMSHEET_CALC_THREADS=1 keeps every
+// body on one thread.
 // FILMSHEET_CALC_TIMING=1 prints the wall and CPU time of each phase as one JSON line on stderr
 // (CPU time is the process's: while the worker runs, it counts both threads).
-import { fstatSync, readSync, existsSync } from "node:fs";
+import { existsSync, readSync } from "node:fs";
+import { availableParallelism, loadavg } from "node:os";
 import { fileURLToPath } from "node:url";
 import { performance } from "node:perf_hooks";
 import { Worker } from "node:worker_threads";
@@ -52,59 +54,70 @@ function fail(payload: unknown): never {
 const SPLIT_MIN_BYTES = 1 << 20;
 // Only the bundle has its worker beside it; run from scripts/ through tsx, the CLI stays on one thread.
 const WORKER_FILE = fileURLToPath(new URL("./calc-worker.mjs", import.meta.url));
-const threads = process.env.FILMSHEET_CALC_THREADS === "1" ? 1 : import.meta.url.endsWith(".mjs") && existsSync(WORKER_FILE) ? 2 : 1;
+const hasWorker = import.meta.url.endsWith(".mjs") && existsSync(WORKER_FILE);
+// A second thread shortens the run only when a core is free for it; on a busy machine it costs
+// more CPU than it saves (its own start and warm-up), so by default it is used only when the load
+// average leaves a core idle. FILMSHEET_CALC_THREADS=1 or 2 decides instead (tests, benchmarks).
+const wanted = process.env.FILMSHEET_CALC_THREADS;
+const threads = !hasWorker || wanted === "1" ? 1 : wanted === "2" || loadavg()[0] <= availableParallelism() - 1 ? 2 : 1;
 
 /**
- * All of stdin, into memory a worker can share. One synchronous read loop into one growing buffer
- * (readFileSync on a pipe allocates 64 KiB per read, and a pipe answers a few KiB at a time).
- * `onBytes` hears the running total, so the worker can start while the rest arrives.
+ * All of stdin. One synchronous read loop into 1 MiB blocks, joined once at the end (readFileSync
+ * on a pipe allocates 64 KiB per read, and a pipe answers a few KiB at a time); `shared` puts the
+ * joined bytes in memory a worker can read. `onBytes` hears the running total, so the worker can
+ * start while the rest arrives.
  */
-async function readStdin(onBytes: (n: number) => void): Promise<Buffer> {
-  let size = 1 << 20;
-  try {
-    const st = fstatSync(0);
-    if (st.isFile()) size = st.size + 1;
-  } catch {
-    // No size to go by: grow as needed.
-  }
-  let buf = Buffer.from(new SharedArrayBuffer(size));
+async function readStdin(onBytes: (n: number) => void, shared: () => boolean): Promise<Buffer> {
+  const BLOCK = 1 << 20;
+  const blocks: Buffer[] = [];
+  let block = Buffer.allocUnsafe(BLOCK);
+  let used = 0;
   let n = 0;
-  const grow = (need: number) => {
-    if (need <= buf.length) return;
-    const next = Buffer.from(new SharedArrayBuffer(Math.max(need, buf.length * 2)));
-    buf.copy(next, 0, 0, n);
-    buf = next;
+  const take = (bytes: Buffer) => {
+    blocks.push(bytes);
+    n += bytes.length;
+    onBytes(n);
   };
   for (;;) {
-    grow(n + 1);
     let got: number;
     try {
-      got = readSync(0, buf, n, buf.length - n, null);
+      got = readSync(0, block, used, block.length - used, null);
     } catch (e) {
       const code = (e as NodeJS.ErrnoException).code;
       if (code === "EOF") break;
       // A non-blocking stdin (some parents hand one over) answers EAGAIN: read the rest as a stream.
       if (code !== "EAGAIN") throw e;
-      for await (const chunk of process.stdin) {
-        const c = chunk as Buffer;
-        grow(n + c.length);
-        c.copy(buf, n);
-        n += c.length;
-        onBytes(n);
-      }
+      if (used > 0) take(block.subarray(0, used));
+      used = 0;
+      for await (const chunk of process.stdin) take(chunk as Buffer);
       break;
     }
     if (got === 0) break;
-    n += got;
-    onBytes(n);
+    used += got;
+    if (used === block.length) {
+      take(block);
+      block = Buffer.allocUnsafe(BLOCK);
+      used = 0;
+    }
   }
-  return buf.subarray(0, n);
+  if (used > 0) take(block.subarray(0, used));
+  if (!shared()) return Buffer.concat(blocks, n);
+  const all = Buffer.from(new SharedArrayBuffer(n));
+  let at = 0;
+  for (const b of blocks) {
+    b.copy(all, at);
+    at += b.length;
+  }
+  return all;
 }
 
 let worker: Worker | null = null;
-const bytes = await readStdin((n) => {
-  if (worker === null && threads === 2 && n >= SPLIT_MIN_BYTES) worker = new Worker(WORKER_FILE);
-});
+const bytes = await readStdin(
+  (n) => {
+    if (worker === null && threads === 2 && n >= SPLIT_MIN_BYTES) worker = new Worker(WORKER_FILE);
+  },
+  () => worker !== null,
+);
 timing?.tick("read");
 
 /** The first half's cases when the body was cut and that half parsed, the worker given the second. */

@@ -112,7 +112,8 @@ describe("npm run calc (the bundle)", { timeout: 60_000 }, () => {
 });
 
 // From 1 MiB up the CLI cuts the body between cases and computes the second half on a worker
-// thread (scripts/calc.ts); FILMSHEET_CALC_THREADS=1 keeps it on one thread.
+// thread (scripts/calc.ts) when a core is free; FILMSHEET_CALC_THREADS=2 asks for the worker
+// whatever the load, FILMSHEET_CALC_THREADS=1 keeps the body on one thread.
 describe("npm run calc on a large body (two threads)", { timeout: 120_000 }, () => {
   const tricky = ['","', "]", "}", "[{", '\\"},{"kind":"x"', "Façade N° 3 — 北 , ] }"];
   const large = Array.from({ length: 2600 }, (_, i) => ({
@@ -122,6 +123,7 @@ describe("npm run calc on a large body (two threads)", { timeout: 120_000 }, () 
   }));
   const text = JSON.stringify({ cases: large });
   const oneThread = { FILMSHEET_CALC_THREADS: "1" };
+  const twoThreads = { FILMSHEET_CALC_THREADS: "2" };
   /** The body with a second comma where the CLI cuts it: each half parses, the whole does not. */
   function strayCommaAtCut(body: string): string {
     const b = Buffer.from(body);
@@ -131,7 +133,7 @@ describe("npm run calc on a large body (two threads)", { timeout: 120_000 }, () 
 
   test("the answer is the bytes of calculate() and of one thread, and the worker computed part of it", () => {
     expect(Buffer.byteLength(text)).toBeGreaterThan(1 << 20);
-    const out = cli(text, { FILMSHEET_CALC_TIMING: "1" });
+    const out = cli(text, { ...twoThreads, FILMSHEET_CALC_TIMING: "1" });
     expect(out.status, out.stderr).toBe(0);
     expect(out.stdout).toBe(JSON.stringify(calculate({ cases: large })) + "\n");
     expect(out.stdout).toBe(cli(text, oneThread).stdout);
@@ -146,14 +148,14 @@ describe("npm run calc on a large body (two threads)", { timeout: 120_000 }, () 
     ["the first half", text.replace('"kind"', "kind")],
     ["a stray comma at the cut", strayCommaAtCut(text)],
   ])("invalid JSON in %s: the endpoint's error body, nothing else, exit code 2", (_label, bad) => {
-    const out = cli(bad);
+    const out = cli(bad, twoThreads);
     expect(out.status).toBe(2);
     expect(out.stdout).toBe(JSON.stringify({ error: { code: "bad_request", message: "Body is not valid JSON" } }) + "\n");
   });
 
   test("a large body of another shape (a second key) is answered on one thread, as before", () => {
     const other = text.slice(0, -1) + ',"note":[1,2]}';
-    const out = cli(other);
+    const out = cli(other, twoThreads);
     expect(out.status, out.stderr).toBe(0);
     expect(out.stdout).toBe(cli(other, oneThread).stdout);
     expect(out.stdout).toBe(JSON.stringify(calculate({ cases: large })) + "\n");
