@@ -9,6 +9,8 @@ import { fileURLToPath } from "node:url";
 export const ROOT = join(dirname(fileURLToPath(import.meta.url)), "..", "..");
 export const CALC_ENTRY = join(ROOT, "scripts", "calc.ts");
 export const CALC_BUNDLE = join(ROOT, ".build", "calc", "calc.mjs");
+/** The second thread of a large body (scripts/calc-worker.ts), bundled beside the CLI as calc-worker.mjs. */
+export const CALC_WORKER_ENTRY = join(ROOT, "scripts", "calc-worker.ts");
 const SELF = fileURLToPath(import.meta.url);
 
 const manifestPath = (outfile) => join(dirname(outfile), "inputs.json");
@@ -48,10 +50,13 @@ export function bundleIsStale(outfile = CALC_BUNDLE) {
 export async function buildBundle(entry = CALC_ENTRY, outfile = CALC_BUNDLE) {
   const { build } = await import("esbuild");
   const outdir = dirname(outfile);
+  // The CLI's own bundle carries its worker (same chunks, so the engine is bundled once).
+  const entryPoints = { [basename(outfile, ".mjs")]: entry };
+  if (entry === CALC_ENTRY) entryPoints["calc-worker"] = CALC_WORKER_ENTRY;
   const result = await build({
-    entryPoints: [entry],
+    entryPoints,
     outdir,
-    entryNames: basename(outfile, ".mjs"),
+    entryNames: "[name]",
     outExtension: { ".js": ".mjs" },
     splitting: true,
     chunkNames: "chunk-[hash]",

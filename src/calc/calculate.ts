@@ -1,6 +1,7 @@
 /** The contract's entry points: one case, or a whole request body. */
 import { CalcBodyError, CaseReader, InputError, type CalcResult } from "./contract";
 import { KIND_NAMES, KINDS } from "./kinds";
+import { surfaceResultFinite, type SurfaceResult } from "./surface";
 
 function fail(id: string | null, field: string, message: string): CalcResult {
   return { id, ok: false, error: { code: "invalid_input", field, message } };
@@ -34,7 +35,10 @@ export function calculateCase(c: unknown): CalcResult {
   }
   try {
     const out = KINDS[kind](new CaseReader(raw), id);
-    if (!allFinite(out as Record<string, unknown>)) {
+    // The `surface` kind's result has a fixed shape, checked field by field (see
+    // surfaceResultFinite); a loop over the keys would copy each number it reads.
+    const finite = kind === "surface" ? surfaceResultFinite(out as SurfaceResult) : allFinite(out as Record<string, unknown>);
+    if (!finite) {
       return fail(id, "kind", "the inputs lead outside the range where this method gives a finite answer");
     }
     return out;

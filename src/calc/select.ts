@@ -142,6 +142,30 @@ export function newPlateCombinedState(): PlateCombinedState {
 }
 
 /**
+ * The numeric inputs of plateCombinedAt, set field by field by its caller: an object argument
+ * passes as it is, where number arguments to a call the optimiser does not inline are boxed into
+ * fresh heap numbers on every call (the surface iteration calls it several times per case).
+ */
+export interface PlateCombinedInputs {
+  /** Surface and air temperatures, K. */
+  Ts: number;
+  Ta: number;
+  /** Velocity along the plate, m/s; forced length L and natural-convection height H, m. */
+  V: number;
+  L: number;
+  tiltDeg: number;
+  H: number;
+  ReCrit: number;
+}
+
+/** A fresh PlateCombinedInputs (doubles from the start, so its fields hold doubles in place). */
+export function newPlateCombinedInputs(): PlateCombinedInputs {
+  return { Ts: 0.5, Ta: 0.5, V: 0.5, L: 0.5, tiltDeg: 0.5, H: 0.5, ReCrit: 0.5 };
+}
+
+const INPUTS = newPlateCombinedInputs();
+
+/**
  * Combined convection on a plate (Churchill 1977, n = 3): forced on length L along the flow with
  * Re_crit 5×10^5, natural on height H at the tilt, Nu_N rescaled to L, Ri = Gr_L/Re_L² (null when
  * Re_L² is 0 or the ratio overflows). Returns h_c and fills `s`.
@@ -157,13 +181,32 @@ export function plateCombinedInto(
   ReCrit: number,
   s: PlateCombinedState,
 ): number {
+  const a = INPUTS;
+  a.Ts = Ts;
+  a.Ta = Ta;
+  a.V = V;
+  a.L = L;
+  a.tiltDeg = tiltDeg;
+  a.H = H;
+  a.ReCrit = ReCrit;
+  plateCombinedAt(props, a, s);
+  return s.h;
+}
+
+/** plateCombinedInto with its numbers in `a`; h_c is left in `s.h`. */
+export function plateCombinedAt(props: AirProperties, a: PlateCombinedInputs, s: PlateCombinedState): void {
+  const Ts = a.Ts;
+  const Ta = a.Ta;
+  const V = a.V;
+  const L = a.L;
+  const H = a.H;
   const Pr = props.Pr;
   const k = props.k_W_mK;
   const Re = (V * L) / props.nu_m2_s;
-  const NuF = nuPlateForced(Re, Pr, ReCrit);
+  const NuF = nuPlateForced(Re, Pr, a.ReCrit);
   const Gr = grashof(props, Ts - Ta, H);
   const Ra = Gr * Pr;
-  const NuN_H = nuPlateNatural(Ra, Pr, tiltDeg, Ts >= Ta, s.natural);
+  const NuN_H = nuPlateNatural(Ra, Pr, a.tiltDeg, Ts >= Ta, s.natural);
   const NuN = (NuN_H * L) / H;
   const Nu = nuCombinedChurchill(NuF, NuN, 3);
   const Re2 = Re * Re;
@@ -185,5 +228,4 @@ export function plateCombinedInto(
   s.Pr = Pr;
   s.Ri = Ri;
   s.h = (Nu * k) / L;
-  return s.h;
 }

@@ -26,6 +26,17 @@ export type PhaseTick = (phase: "engine" | "serialize") => void;
  */
 export function writeCalcAnswer(cases: readonly unknown[], write: (chunk: string) => void, tick?: PhaseTick): void {
   write('{"results":[');
+  writeCalcResults(cases, write, tick);
+  write("]}");
+}
+
+/**
+ * The results of `cases` as the text between the answer's brackets, batch by batch; with
+ * `following`, each piece starts with the comma that joins it to results written before (the
+ * command line computes the two halves of a large body on two threads, and the halves' texts
+ * joined by that comma are the text of the whole).
+ */
+export function writeCalcResults(cases: readonly unknown[], write: (chunk: string) => void, tick?: PhaseTick, following = false): void {
   for (let i = 0; i < cases.length; i += ANSWER_BATCH) {
     const { results } = calculate({ cases: cases.slice(i, i + ANSWER_BATCH) });
     tick?.("engine");
@@ -33,9 +44,8 @@ export function writeCalcAnswer(cases: readonly unknown[], write: (chunk: string
     // and join the batches with the same comma.
     const text = JSON.stringify(results);
     tick?.("serialize");
-    write(i === 0 ? text.slice(1, -1) : "," + text.slice(1, -1));
+    write(i === 0 && !following ? text.slice(1, -1) : "," + text.slice(1, -1));
   }
-  write("]}");
 }
 
 /** The whole answer as one string (the HTTP endpoint's bodies are at most 10,000 cases). */

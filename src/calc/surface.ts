@@ -4,15 +4,15 @@
  * (T_inside − T_s)/(R_si + R) + α·G = h_c (T_s − T_out) + h_r (T_s − T_r), solved for T_s.
  */
 import { SIGMA, T0 } from "./constants";
-import { airProperties, airPropertiesInto, newAirProperties, type AirProperties } from "./properties/air";
+import { airProperties, airPropertiesOf, newAirProperties, type AirProperties } from "./properties/air";
 import { hcIso6946, hcMcAdams } from "./convection/empirical";
 import { hRadiation, radiantTemperature, skyTemperatureCloudy, skyViewFactor } from "./radiation/radiation";
 import { warnAir } from "./kinds/common";
 import { warnPlateCombined } from "./kinds/external";
 import { regimeFromRichardson } from "./convection/combined";
 import type { CalcWarning } from "./contract";
-import { newPlateCombinedState, plateCombinedInto, type PlateCombinedState } from "./select";
-import { windAtHeight } from "./kinds/wind";
+import { newPlateCombinedInputs, newPlateCombinedState, plateCombinedAt, type PlateCombinedState } from "./select";
+import { windSpeedAt } from "./kinds/wind";
 import type { Terrain } from "./wind/wind-profile";
 import { exposureWeight } from "./wind/wind-profile";
 import { addWarning, checkRange } from "./validity";
@@ -121,9 +121,12 @@ export function newSurfaceTrace(): SurfaceTrace {
 }
 
 // Scratch objects of the iteration, refilled on every call: the engine is synchronous and
-// surfaceCore does not call itself, so one pair per module instance is enough.
+// surfaceCore does not call itself, so one set per module instance is enough. The iteration hands
+// its numbers to the property and convection functions in these objects' fields (see
+// airPropertiesOf): number arguments would be boxed into fresh heap numbers on every call.
 const PROPS = newAirProperties();
 const STATE = newPlateCombinedState();
+const INPUTS = newPlateCombinedInputs();
 
 // A Newton step smaller than this means T_s is within it of the root (the contract asks 0.001 K).
 const TOL_K = 1e-3;
@@ -144,10 +147,10 @@ export function surfaceCore(
   const law = s.law === undefined ? d.law : s.law;
   const metHeight = s.met_height_m === undefined ? d.met_height_m : s.met_height_m;
   const leeward = s.leeward_factor === undefined ? d.leeward_factor : s.leeward_factor;
-  const wind = windAtHeight(s.V_met_m_s, s.height_m, s.terrain, law, metHeight, warnings);
+  const Vlocal = windSpeedAt(s.V_met_m_s, s.height_m, s.terrain, law, metHeight, warnings);
   const w = exposureWeight(s.wind_from_deg, s.azimuth_deg, s.tilt_deg);
   const windward = w >= 0.5;
-  const Vs = wind.V_m_s * (leeward + (1 - leeward) * w);
+  const Vs = Vlocal * (leeward + (1 - leeward) * w);
   const ReCrit = s.Re_crit === undefined ? d.Re_crit : s.Re_crit;
   const cloud = s.cloud_cover === undefined ? d.cloud_cover : s.cloud_cover;
   const Tin = s.T_inside_C + T0;
@@ -175,12 +178,25 @@ export function surfaceCore(
   let converged = false;
   let iterations = 0;
   const eps = s.emissivity;
+  const inputs = INPUTS;
+  if (state !== null) {
+    inputs.Ta = To;
+    inputs.V = Vs;
+    inputs.L = s.length_m;
+    inputs.tiltDeg = s.tilt_deg;
+    inputs.H = s.panel_height_m;
+    inputs.ReCrit = ReCrit;
+    props.p_Pa = p;
+  }
   while (iterations < 100) {
     iterations++;
     let slopeN = 0;
     if (state !== null) {
-      airPropertiesInto((x + To) / 2, p, props);
-      hc = plateCombinedInto(props, x, To, Vs, s.length_m, s.tilt_deg, s.panel_height_m, ReCrit, state);
+      props.T_K = (x + To) / 2;
+      airPropertiesOf(props);
+      inputs.Ts = x;
+      plateCombinedAt(props, inputs, state);
+      hc = state.h;
       const hN = state.hN;
       if (hc > 0) slopeN = ((state.natural.turbulent ? 1 / 3 : 1 / 4) * hN * hN * hN) / (hc * hc);
     }
@@ -245,7 +261,7 @@ export function surfaceCore(
   return {
     id,
     ok: true,
-    V_local_m_s: wind.V_m_s,
+    V_local_m_s: Vlocal,
     V_surface_m_s: Vs,
     windward,
     exposure: w,
@@ -262,6 +278,22 @@ export function surfaceCore(
     q_sky_solar_W_m2: q - qAir,
     regime,
     correlation: state !== null ? "churchill-combined-plate" : s.method === "iso6946" ? "iso6946-simplified" : "mcadams-wind",
-    warnings,
+    // An array that grew by push holds room for 16 or more; the result keeps an exact copy (most
+    // of a large schedule's results stay in memory until the answer is written).
+    warnings: warnings.length === 0 ? warnings : warnings.slice(),
   };
+}
+
+/**
+ * True when every number of a `surface` result is finite (calculateCase's check for this kind):
+ * x·0 is 0 for finite x and NaN otherwise. Reading the fields by name keeps them unboxed, where a
+ * loop over the keys would copy each number into a new heap number.
+ */
+export function surfaceResultFinite(r: SurfaceResult): boolean {
+  return (
+    r.V_local_m_s * 0 + r.V_surface_m_s * 0 + r.exposure * 0 + r.h_c_W_m2K * 0 + r.h_r_W_m2K * 0 + r.h_o_W_m2K * 0 +
+      r.T_surface_C * 0 + r.T_sky_C * 0 + r.T_solair_C * 0 + r.U_W_m2K * 0 + r.q_W_m2 * 0 + r.Q_W * 0 +
+      r.q_air_W_m2 * 0 + r.q_sky_solar_W_m2 * 0 ===
+    0
+  );
 }

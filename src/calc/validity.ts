@@ -23,8 +23,6 @@ function fmt(v: number): string {
   return String(Math.round(v * 1000) / 1000);
 }
 
-const rangeTexts = new WeakMap<Range, string>();
-
 export function rangeText(r: Range): string {
   const u = r.unit ? ` ${r.unit}` : "";
   if (r.min !== undefined && r.max !== undefined) return `${fmt(r.min)}…${fmt(r.max)}${u}`;
@@ -40,6 +38,26 @@ export function inRange(value: number, r: Range): boolean {
   return true;
 }
 
+// The words after the value ("… is outside the range 10000…1.000e9 of <title>; the value is
+// extrapolated") depend only on the range and the title: made once and shared by every warning
+// that uses them, so a large schedule's warnings hold one short string each, not a copy.
+const tails = new WeakMap<Range, Map<string, string>>();
+
+function tailText(r: Range, title: string): string {
+  let byTitle = tails.get(r);
+  if (byTitle === undefined) {
+    byTitle = new Map();
+    tails.set(r, byTitle);
+  }
+  let tail = byTitle.get(title);
+  if (tail === undefined) {
+    const u = r.unit ? ` ${r.unit}` : "";
+    tail = `${u} is outside the range ${rangeText(r)} of ${title}; the value is extrapolated`;
+    byTitle.set(title, tail);
+  }
+  return tail;
+}
+
 /** Pushes an `out_of_range` warning when the value of `quantity` lies outside range `r`. */
 export function checkRange(
   warnings: CalcWarning[] | null,
@@ -50,21 +68,18 @@ export function checkRange(
   r: Range,
 ): void {
   if (warnings === null || inRange(value, r)) return;
-  const u = r.unit ? ` ${r.unit}` : "";
-  let text = rangeTexts.get(r);
-  if (text === undefined) {
-    text = rangeText(r);
-    rangeTexts.set(r, text);
+  warnings.push(outOfRange(methodId, quantity, value, r, quantity + " = " + fmt(value) + tailText(r, title)));
+}
+
+/** The warning object, one literal per set of bounds (a fixed shape each, no spread). */
+function outOfRange(method: string, quantity: string, value: number, r: Range, message: string): CalcWarning {
+  const code = "out_of_range";
+  if (r.min !== undefined) {
+    return r.max !== undefined
+      ? { code, message, method, quantity, value, min: r.min, max: r.max }
+      : { code, message, method, quantity, value, min: r.min };
   }
-  warnings.push({
-    code: "out_of_range",
-    message: `${quantity} = ${fmt(value)}${u} is outside the range ${text} of ${title}; the value is extrapolated`,
-    method: methodId,
-    quantity,
-    value,
-    ...(r.min !== undefined ? { min: r.min } : {}),
-    ...(r.max !== undefined ? { max: r.max } : {}),
-  });
+  return r.max !== undefined ? { code, message, method, quantity, value, max: r.max } : { code, message, method, quantity, value };
 }
 
 /** Adds a plain warning once (same code and message). */

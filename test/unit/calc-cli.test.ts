@@ -11,6 +11,7 @@ import { ANSWER_BATCH, calcAnswerText } from "../../src/calc/serialize";
 import { ZCalcBody, calcBodyError } from "../../src/schemas/calc";
 import { CALC_BUNDLE, bundleIsStale, ensureBundle } from "../../scripts/lib/calc-bundle.mjs";
 import { ROOT } from "../support/paths";
+import { splitCases } from "../../scripts/lib/calc-split";
 
 beforeAll(async () => {
   await ensureBundle();
@@ -107,6 +108,57 @@ describe("npm run calc (the bundle)", { timeout: 60_000 }, () => {
     const timing = JSON.parse(out.stderr.trim().split("\n").pop()!);
     expect(timing.cases).toBe(publicCases.length);
     expect(Object.keys(timing.phases).sort()).toEqual(["engine", "parse", "read", "serialize", "write"]);
+  });
+});
+
+// From 1 MiB up the CLI cuts the body between cases and computes the second half on a worker
+// thread (scripts/calc.ts) when a core is free; FILMSHEET_CALC_THREADS=2 asks for the worker
+// whatever the load, FILMSHEET_CALC_THREADS=1 keeps the body on one thread.
+describe("npm run calc on a large body (two threads)", { timeout: 120_000 }, () => {
+  const tricky = ['","', "]", "}", "[{", '\\"},{"kind":"x"', "Façade N° 3 — 北 , ] }"];
+  const large = Array.from({ length: 2600 }, (_, i) => ({
+    ...publicCases[i % publicCases.length],
+    id: `${tricky[i % tricky.length]}#${i}`,
+    note: "x".repeat(300),
+  }));
+  const text = JSON.stringify({ cases: large });
+  const oneThread = { FILMSHEET_CALC_THREADS: "1" };
+  const twoThreads = { FILMSHEET_CALC_THREADS: "2" };
+  /** The body with a second comma where the CLI cuts it: each half parses, the whole does not. */
+  function strayCommaAtCut(body: string): string {
+    const b = Buffer.from(body);
+    const cut = splitCases(b)!;
+    return Buffer.concat([b.subarray(0, cut.tailStart), Buffer.from(","), b.subarray(cut.tailStart)]).toString();
+  }
+
+  test("the answer is the bytes of calculate() and of one thread, and the worker computed part of it", () => {
+    expect(Buffer.byteLength(text)).toBeGreaterThan(1 << 20);
+    const out = cli(text, { ...twoThreads, FILMSHEET_CALC_TIMING: "1" });
+    expect(out.status, out.stderr).toBe(0);
+    expect(out.stdout).toBe(JSON.stringify(calculate({ cases: large })) + "\n");
+    expect(out.stdout).toBe(cli(text, oneThread).stdout);
+    const timing = JSON.parse(out.stderr.trim().split("\n").pop()!);
+    expect(timing.cases).toBe(large.length);
+    expect(timing.threads.first_half_cases).toBeGreaterThan(0);
+    expect(timing.threads.first_half_cases).toBeLessThan(large.length);
+  });
+
+  test.each([
+    ["the second half", text.slice(0, -200) + ",,]}"],
+    ["the first half", text.replace('"kind"', "kind")],
+    ["a stray comma at the cut", strayCommaAtCut(text)],
+  ])("invalid JSON in %s: the endpoint's error body, nothing else, exit code 2", (_label, bad) => {
+    const out = cli(bad, twoThreads);
+    expect(out.status).toBe(2);
+    expect(out.stdout).toBe(JSON.stringify({ error: { code: "bad_request", message: "Body is not valid JSON" } }) + "\n");
+  });
+
+  test("a large body of another shape (a second key) is answered on one thread, as before", () => {
+    const other = text.slice(0, -1) + ',"note":[1,2]}';
+    const out = cli(other, twoThreads);
+    expect(out.status, out.stderr).toBe(0);
+    expect(out.stdout).toBe(cli(other, oneThread).stdout);
+    expect(out.stdout).toBe(JSON.stringify(calculate({ cases: large })) + "\n");
   });
 });
 

@@ -81,6 +81,20 @@ export function muAirDiluteLemmonJacobsen(T_K: number): number {
  *   oxygen, argon, and air", Int. J. Thermophys. 25 (2004) 21–69.
  */
 export function airPropertiesInto(T_K: number, p_Pa: number, out: AirProperties): AirProperties {
+  out.T_K = T_K;
+  out.p_Pa = p_Pa;
+  return airPropertiesOf(out);
+}
+
+/**
+ * airPropertiesInto at the temperature and pressure already in `out.T_K` and `out.p_Pa`. The
+ * engine's iterations set those two fields and call this: an object argument passes as it is,
+ * where number arguments to a call the optimiser does not inline are boxed into fresh heap numbers
+ * on every call, garbage the collector then has to sweep.
+ */
+export function airPropertiesOf(out: AirProperties): AirProperties {
+  const T_K = out.T_K;
+  const p_Pa = out.p_Pa;
   const rho = p_Pa / (R_AIR * T_K);
   // Reduced density on the molar basis of Lemmon & Jacobsen (mol/dm³), from the same ideal gas.
   const delta = p_Pa / (R_UNIVERSAL * T_K) / 1000 / RHOC;
@@ -114,8 +128,6 @@ export function airPropertiesInto(T_K: number, p_Pa: number, out: AirProperties)
   const k = (lambda0 + lambdaR) * 1e-3;
   const cp = cpAirTable(T_K);
   // Written field by field into `out`, so iterations can reuse one object without allocating.
-  out.T_K = T_K;
-  out.p_Pa = p_Pa;
   out.rho_kg_m3 = rho;
   out.cp_J_kgK = cp;
   out.mu_Pa_s = mu;
