@@ -10,7 +10,7 @@ import type { Knex } from "knex";
 
 const BOOKKEEPING = ["version", "position", "created_at", "updated_at", "firm_id", "project_id"].map((k) => ` - '${k}'`).join("");
 
-const SNAPSHOT = (sheet: "surfaces" | "duct_runs") => `
+export const backfillAcceptances = (sheet: "surfaces" | "duct_runs") => `
 UPDATE row_checks c SET
   accepted_at = c.checked_at,
   accepted_by = c.checked_by,
@@ -42,8 +42,8 @@ export async function up(knex: Knex): Promise<void> {
     t.boolean("accepted_in_bulk").notNullable().defaultTo(false);
     t.jsonb("accepted_inputs");
   });
-  await knex.raw(SNAPSHOT("surfaces"));
-  await knex.raw(SNAPSHOT("duct_runs"));
+  await knex.raw(backfillAcceptances("surfaces"));
+  await knex.raw(backfillAcceptances("duct_runs"));
 }
 
 export async function down(knex: Knex): Promise<void> {
