@@ -25,7 +25,7 @@ const filters = (page: Page) => page.getByRole("navigation", { name: "Filter row
 const listed = (page: Page) => page.getByRole("table", { name: "Rows to check" }).locator("tbody tr[aria-selected]");
 const chosen = (page: Page) => page.getByRole("table", { name: "Rows to check" }).locator("tbody tr[aria-selected=true]");
 const status = (page: Page, text: string | RegExp) => page.getByRole("status").filter({ hasText: text });
-const countIn = async (page: Page, name: RegExp) => Number((await filters(page).getByRole("link", { name }).textContent())!.match(/\((\d+)\)/)![1]);
+const countIn = async (page: Page, role: "link" | "button", name: RegExp) => Number((await filters(page).getByRole(role, { name }).textContent())!.match(/\((\d+)\)/)![1]);
 
 test("a checker filters, moves and checks by keyboard, accepts the rows shown in bulk, and reads what changed in a row sent back", async ({ browser }) => {
   const checker = await signedIn(browser, "checker@demo.filmsheet.test");
@@ -36,7 +36,7 @@ test("a checker filters, moves and checks by keyboard, accepts the rows shown in
   await expect(checker.getByLabel("Keyboard")).toContainText("A accept · Q query");
 
   // With warnings: only rows that have one, each saying how many.
-  const warned = await countIn(checker, /With warnings/);
+  const warned = await countIn(checker, "button", /With warnings/);
   expect(warned).toBeGreaterThan(0);
   await filters(checker).getByRole("button", { name: /With warnings/ }).click();
   await expect(checker).toHaveURL(/warnings=yes/);
@@ -48,9 +48,9 @@ test("a checker filters, moves and checks by keyboard, accepts the rows shown in
 
   // Unchecked surfaces, worked from the keyboard.
   await filters(checker).getByRole("link", { name: /^Unchecked \(/ }).click();
-  await filters(checker).getByRole("link", { name: "Surfaces", exact: true }).click();
   await expect(checker).toHaveURL(/state=unchecked/);
-  await expect(checker).toHaveURL(/sheet=surfaces/);
+  await filters(checker).getByRole("link", { name: "Surfaces", exact: true }).click();
+  await expect(checker).toHaveURL(/state=unchecked&sheet=surfaces/);
   const before = await listed(checker).count();
   const labelAt = (i: number) => listed(checker).nth(i).locator("td").first().getByRole("link").textContent();
   await expect(chosen(checker)).toHaveCount(1);
@@ -122,8 +122,9 @@ test("a checker filters, moves and checks by keyboard, accepts the rows shown in
   // Bulk: the unchecked duct runs, confirmed with their number and the filter, then each says "in bulk".
   await tab(checker, "Check").click();
   await filters(checker).getByRole("link", { name: /^Unchecked \(/ }).click();
+  await expect(checker).toHaveURL(/state=unchecked/);
   await filters(checker).getByRole("link", { name: "Duct runs", exact: true }).click();
-  await expect(checker).toHaveURL(/sheet=duct_runs/);
+  await expect(checker).toHaveURL(/state=unchecked&sheet=duct_runs/);
   const ducts = await listed(checker).count();
   expect(ducts).toBeGreaterThan(1);
   const firstDuct = (await listed(checker).first().locator("td").first().getByRole("link").textContent())!;
@@ -140,6 +141,7 @@ test("a checker filters, moves and checks by keyboard, accepts the rows shown in
   await expect(checker.getByText("No row matches this filter.")).toBeVisible();
 
   await filters(checker).getByRole("link", { name: /^Accepted \(/ }).click();
+  await expect(checker).toHaveURL(/state=accepted/);
   const accepted = listed(checker).filter({ hasText: firstDuct });
   await expect(accepted).toContainText("(in bulk)");
   await accepted.locator("td").first().getByRole("link").click();
@@ -148,4 +150,12 @@ test("a checker filters, moves and checks by keyboard, accepts the rows shown in
   await expect(history).toContainText(`Accepted ${firstDuct} in bulk`);
   await expect(history).toContainText(`one of ${ducts} rows shown by the filter “Unchecked · Duct runs”`);
   if (SHOTS) await checker.screenshot({ path: `${SHOTS}/check-bulk-row-1366x768.png` });
+
+  // A duct run's working names the friction factor used for each purpose, and shows both.
+  const inside = checker.getByRole("region", { name: "Inside the duct" });
+  await expect(inside.getByRole("row").filter({ hasText: "Friction factor for heat transfer (smooth duct)" })).toContainText("Smooth-duct friction factor (Petukhov)");
+  await expect(inside.getByRole("row").filter({ hasText: "Nusselt number" })).toContainText("Gnielinski");
+  await expect(inside.getByRole("row").filter({ hasText: "Friction factor for the pressure drop" })).toContainText("Colebrook–White");
+  await expect(inside).toContainText("Pressure drop per metre of straight duct");
+  if (SHOTS) await inside.screenshot({ path: `${SHOTS}/check-duct-friction-1366x768.png` });
 });
