@@ -97,6 +97,8 @@ test("a consultant and a checker take the demo project from draft to revision A,
   await consultant.keyboard.type("3.6");
   await consultant.keyboard.press("Enter");
   await expect(height).toHaveText("3.6");
+  // The cell shows what was typed at once; the save lands a moment later (longer on a busy machine).
+  await expect.poll(async () => (await db("surfaces").where({ firm_id: firmId, label: ROW }).first("panel_height_m"))?.panel_height_m, { timeout: 20_000 }).toBe(3.6);
   // The grid opens the row's working too.
   await consultant.locator(`.ag-row[row-id="${gridRow}"] [col-id="working"] a`).click();
   // It opens on the design case shown in the grid (?case=…).
