@@ -119,6 +119,19 @@ test("a checker filters, moves and checks by keyboard, accepts the rows shown in
   await expect(since).not.toContainText("area_m2");
   if (SHOTS) await checker.screenshot({ path: `${SHOTS}/check-changed-row-1366x768.png` });
 
+  // The working has keys too: Q goes to the comment (where A is a letter), A accepts.
+  await expect(checker.getByLabel("Keyboard")).toContainText("A accept · Q write a query · N next unchecked");
+  await checker.keyboard.press("q");
+  const comment = checker.getByRole("form", { name: "Check this row" }).getByLabel("Comment");
+  await expect(comment).toBeFocused();
+  await checker.keyboard.type("a");
+  await expect(comment).toHaveValue("a");
+  await comment.fill("");
+  await checker.getByRole("heading", { level: 2, name: `Surface ${third}` }).click();
+  await checker.keyboard.press("a");
+  await expect(status(checker, "Accepted")).toBeVisible();
+  await expect(since).toHaveCount(0);
+
   // Bulk: the unchecked duct runs, confirmed with their number and the filter, then each says "in bulk".
   await tab(checker, "Check").click();
   await filters(checker).getByRole("link", { name: /^Unchecked \(/ }).click();

@@ -10,6 +10,7 @@ import { plainWord } from "@/report/plain-words";
 import type { RowWorking } from "@/server/services/get-row-working";
 import { CheckRowForm, CommentForm } from "./row-forms";
 import { SinceAccepted } from "./since-accepted";
+import { WorkingKeys } from "./working-keys";
 
 const KIND_LABELS: Record<string, { label: string; tone: string }> = {
   query: { label: "Query", tone: "text-danger" },
@@ -85,6 +86,7 @@ export function RowWorkingView({ data, history, canCheck, canComment, isConsulta
               <p className="text-small text-muted">Last edited by {check.last_edited_by_name ?? "nobody recorded (as first entered)"}.</p>
               {canCheck && isLastEditor ? <p className="text-small text-caution">You last edited this row, so another checker must check it.</p> : null}
               {canCheck && !isLastEditor && (canAccept || canQuery) ? <CheckRowForm row={key} version={row.version} canAccept={canAccept} canQuery={canQuery} /> : null}
+              <WorkingKeys canCheck={canCheck && !isLastEditor && (canAccept || canQuery)} nextHref={data.next_unchecked ? workingPath(project.id, data.next_unchecked.sheet, data.next_unchecked.id, data.design_case_id) : null} />
             </div>
           </Panel>
 
