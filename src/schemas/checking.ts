@@ -42,10 +42,20 @@ export const ZRevisionParams = z.object({
 const ZLetter = z.string({ error: "Name two revisions, e.g. from=A&to=B" }).regex(/^[A-Z]{1,4}$/, "A revision is named by capital letters (A, B, … AA)");
 export const ZCompareQuery = z.object({ from: ZLetter, to: ZLetter });
 
+// A filter toggle in the address: present and "yes" (or "1", "true") when on.
+const ZToggle = z
+  .enum(["yes", "1", "true", "no", "0", "false"], { error: "must be yes or no" })
+  .transform((v) => v === "yes" || v === "1" || v === "true")
+  .optional();
 export const ZBoardQuery = z.object({
   state: z.enum(CHECK_STATES, { error: `state must be one of ${CHECK_STATES.join(", ")}` }).optional(),
   sheet: ZSheetParam.optional(),
+  /** Rows with a warning or an error in any design case. */
+  warnings: ZToggle,
+  /** Rows accepted once and sent back to unchecked (or queried) since by a change. */
+  changed: ZToggle,
 });
+export type TBoardFilter = z.infer<typeof ZBoardQuery>;
 export const ZWorkingQuery = z.object({ case: z.uuid({ error: "case must be a design case id" }).optional() });
 export const ZHistoryQuery = z.object({
   before: z.coerce.number({ error: "before must be a history entry id" }).int().positive().optional(),
@@ -54,10 +64,27 @@ export const ZHistoryQuery = z.object({
 
 /** Rows accepted together, each at the version the checker read: "surfaces:<id>:<version>" in forms. */
 const ZRowAtVersion = z.object({ sheet: ZSheetParam, id: z.uuid({ error: "Row id must be a UUID" }), row_version: ZRowVersion });
-export const ZAcceptRows = z.object({
-  rows: z.preprocess(
-    (v) => (Array.isArray(v) ? v.map((r) => (typeof r === "string" ? Object.fromEntries(["sheet", "id", "row_version"].map((k, i) => [k, r.split(":")[i]])) : r)) : v),
-    z.array(ZRowAtVersion, { error: "rows must be a list of rows" }).min(1, "Choose at least one row").max(10_000, "At most 10,000 rows at once"),
-  ),
-});
+/**
+ * Several rows accepted at once: the checker was shown the filter that listed them and confirmed
+ * their number ("Accept 37 rows shown by filter …?"). Both are required and recorded with each
+ * row's acceptance; a count that is not the number of rows sent means the list changed under the
+ * checker, and nothing is accepted.
+ */
+export const ZAcceptRows = z
+  .object({
+    rows: z.preprocess(
+      (v) => (Array.isArray(v) ? v.map((r) => (typeof r === "string" ? Object.fromEntries(["sheet", "id", "row_version"].map((k, i) => [k, r.split(":")[i]])) : r)) : v),
+      z.array(ZRowAtVersion, { error: "rows must be a list of rows" }).min(1, "Choose at least one row").max(10_000, "At most 10,000 rows at once"),
+    ),
+    filter: text("filter", 300).min(1, "filter is required: the filter that listed these rows, as shown to the checker"),
+    confirmed_count: z.coerce
+      .number({ error: "confirmed_count is required: the number of rows the checker confirmed" })
+      .int("confirmed_count must be a whole number")
+      .positive("confirmed_count must be a positive whole number"),
+  })
+  .superRefine((v, ctx) => {
+    if (v.confirmed_count !== v.rows.length) {
+      ctx.addIssue({ code: "custom", path: ["confirmed_count"], message: `confirmed_count is ${v.confirmed_count} but ${v.rows.length} ${v.rows.length === 1 ? "row was" : "rows were"} sent: confirm the rows shown again` });
+    }
+  });
 export type TAcceptRows = z.infer<typeof ZAcceptRows>;

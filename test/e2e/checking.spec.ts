@@ -97,6 +97,8 @@ test("a consultant and a checker take the demo project from draft to revision A,
   await consultant.keyboard.type("3.6");
   await consultant.keyboard.press("Enter");
   await expect(height).toHaveText("3.6");
+  // The cell shows what was typed at once; the save lands a moment later (longer on a busy machine).
+  await expect.poll(async () => (await db("surfaces").where({ firm_id: firmId, label: ROW }).first("panel_height_m"))?.panel_height_m, { timeout: 20_000 }).toBe(3.6);
   // The grid opens the row's working too.
   await consultant.locator(`.ag-row[row-id="${gridRow}"] [col-id="working"] a`).click();
   // It opens on the design case shown in the grid (?case=…).
@@ -104,7 +106,7 @@ test("a consultant and a checker take the demo project from draft to revision A,
   await expect(consultant.locator("[data-state=unchecked]").first()).toBeVisible();
   const history = consultant.getByRole("region", { name: "History of this row" });
   await expect(history).toContainText(`Changed surface ${ROW}`);
-  await expect(history).toContainText("panel_height_m: 4 → 3.6");
+  await expect(history).toContainText("Panel height: 4.0 m → 3.6 m");
   await expect(history).toContainText("Check reset to unchecked (was queried)");
 
   // The consultant asks for a check.
@@ -120,9 +122,11 @@ test("a consultant and a checker take the demo project from draft to revision A,
   await checkForm(checker).getByRole("button", { name: "Accept" }).click();
   await expect(status(checker, "Accepted")).toBeVisible();
   await tab(checker, "Check").click();
-  const listed = checker.getByRole("form", { name: "Accept the listed rows" });
-  await listed.getByRole("checkbox").check();
-  await listed.getByRole("button", { name: /^Accept \d+ listed rows?$/ }).click();
+  // Accepting every row shown asks first, naming the count and the filter.
+  await checker.getByRole("button", { name: /^Accept the \d+ rows? shown…$/ }).click();
+  const confirm = checker.getByRole("alertdialog", { name: "Confirm accepting the rows shown" });
+  await expect(confirm).toContainText(/Accept \d+ rows? shown by filter “All rows”\?/);
+  await confirm.getByRole("button", { name: /^Accept \d+ rows?$/ }).click();
   await expect(status(checker, /^\d+ rows? accepted$/)).toBeVisible();
 
   // Every row accepted: revision A.

@@ -65,14 +65,14 @@ describe("set-based writes", () => {
     const checker = await testDb()("users").where({ email: "checker@demo.filmsheet.test" }).first("id", "name", "email");
     const as: Actor = { ...actor, via: "session", userId: checker.id, name: checker.name, email: checker.email, roles: ["checker"] };
     const rows = ids.map((id) => ({ sheet: "surfaces" as const, id, row_version: 2 }));
-    const { result, statements } = await counting(() => acceptRows(as, fx.projectId, { rows }));
+    const { result, statements } = await counting(() => acceptRows(as, fx.projectId, { rows, filter: "Unchecked", confirmed_count: N }));
     expect(result).toEqual({ accepted: N });
     expect(statements).toBeLessThan(20);
     const checks = await testDb()("row_checks").where({ project_id: fx.projectId, sheet: "surfaces" }).whereIn("row_id", ids).select("state", "checked_by", "checked_row_version");
     expect(checks).toHaveLength(N);
     expect(checks.every((c) => c.state === "accepted" && c.checked_by === checker.id && c.checked_row_version === 2)).toBe(true);
     // Accepting them again is refused, all of them named, none changed.
-    const again = await acceptRows(as, fx.projectId, { rows: rows.slice(0, 3) }).catch((e: unknown) => e);
+    const again = await acceptRows(as, fx.projectId, { rows: rows.slice(0, 3), filter: "Unchecked", confirmed_count: 3 }).catch((e: unknown) => e);
     expect(again).toMatchObject({ code: "conflict" });
     expect((again as { details: unknown[] }).details).toHaveLength(3);
   });

@@ -193,13 +193,13 @@ describe("accepting the rows listed, all or nothing", () => {
 
   test("a checker accepts every row listed at the versions read, each with its audit row", async () => {
     const fx = await projectWithRowIn("queried");
-    const res = await request(app.server).post(`/api/projects/${fx.projectId}/checks`).set(as.checker).send({ rows: all(fx) });
+    const res = await request(app.server).post(`/api/projects/${fx.projectId}/checks`).set(as.checker).send({ rows: all(fx), filter: "All rows", confirmed_count: 5 });
     expect(res.status, res.text).toBe(200);
     expect(res.body).toEqual({ accepted: 5 });
     for (const id of fx.surfaceIds) expect(await stateOf(fx.projectId, "surfaces", id)).toBe("accepted");
     expect((await auditOf(fx.projectId, { entity: "row_check", action: "accept" })).length).toBe(5);
     const board = await request(app.server).get(`/api/projects/${fx.projectId}/checks`).set(as.consultant);
-    expect(board.body.counts).toEqual({ rows: 5, unchecked: 0, accepted: 5, queried: 0 });
+    expect(board.body.counts).toEqual({ rows: 5, unchecked: 0, accepted: 5, queried: 0, changed: 0, warnings: expect.any(Number) });
     expect(board.body.next_unchecked).toBeNull();
   });
 
@@ -210,7 +210,7 @@ describe("accepting the rows listed, all or nothing", () => {
   ])("refused when %s: 409 naming it, and no row is accepted", async (_what, arrange, message) => {
     const fx = await makeProject("tarnbrook-sill");
     await arrange(fx);
-    const res = await request(app.server).post(`/api/projects/${fx.projectId}/checks`).set(as.dual).send({ rows: all(fx) });
+    const res = await request(app.server).post(`/api/projects/${fx.projectId}/checks`).set(as.dual).send({ rows: all(fx), filter: "All rows", confirmed_count: 5 });
     expect(res.status, res.text).toBe(409);
     expect(res.body.error.message).toBe("1 of 5 rows cannot be accepted; none was");
     expect(res.body.error.details).toEqual([expect.objectContaining({ message: expect.stringContaining(message) })]);
@@ -220,7 +220,7 @@ describe("accepting the rows listed, all or nothing", () => {
 
   test("a bad list is refused naming the field", async () => {
     const fx = await makeProject("tarnbrook-sill");
-    const res = await request(app.server).post(`/api/projects/${fx.projectId}/checks`).set(as.checker).send({ rows: [{ sheet: "walls", id: "x", row_version: 0 }] });
+    const res = await request(app.server).post(`/api/projects/${fx.projectId}/checks`).set(as.checker).send({ rows: [{ sheet: "walls", id: "x", row_version: 0 }], filter: "All rows", confirmed_count: 1 });
     expect(res.status).toBe(422);
     expect(res.body.error.details.map((d: { field: string }) => d.field).sort()).toEqual(["body.rows.0.id", "body.rows.0.row_version", "body.rows.0.sheet"]);
   });

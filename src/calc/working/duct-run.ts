@@ -1,6 +1,8 @@
 /** The working of a `duct_run` case: every step of the duct-run evaluation, in order. */
 import type { CalcResult } from "../contract";
+import { fDarcyPetukhov } from "../convection/internal";
 import { ductRunCore, newDuctRunTrace, type DuctRunInput } from "../duct-run";
+import { RE_LAMINAR_MAX, RE_TURBULENT_MIN, type DuctInternal } from "../kinds/internal";
 import { LineWriter } from "./lines";
 import type { Working } from "./types";
 
@@ -41,11 +43,9 @@ export function ductRunWorking(d: DuctRunInput, result: CalcResult): Working {
   if (tr.inside_props !== null) w.air(tr.inside_props, "mean air temperature of the run", "T_m");
   const i = tr.internal;
   if (i !== null) {
-    w.add("Velocity", "v", i.velocity_m_s, "m/s", "V̇/A")
-      .add("Reynolds number", "Re", i.Re, "", "v D_h/ν")
-      .add("Nusselt number", "Nu", i.Nu, "", i.regime, i.correlation)
-      .add("Friction factor (Darcy)", "f", i.f_darcy, "", i.regime === "laminar" ? "laminar" : "Colebrook", i.regime === "laminar" ? undefined : "colebrook")
-      .add("Inside film coefficient", "h_i", o.h_i_W_m2K, "W/m²K", "Nu k/D_h")
+    w.add("Velocity", "v", i.velocity_m_s, "m/s", "V̇/A").add("Reynolds number", "Re", i.Re, "", "v D_h/ν");
+    frictionLines(w, i, round, tr.inside_props?.rho_kg_m3 ?? null, d.roughness_m);
+    w.add("Inside film coefficient", "h_i", o.h_i_W_m2K, "W/m²K", "Nu k/D_h")
       .add("Inside film resistance", "R′_i", tr.R_i_mK_W, "m·K/W", "1/(h_i P_i)");
   }
   w.to("Insulation").add(
@@ -93,4 +93,30 @@ export function ductRunWorking(d: DuctRunInput, result: CalcResult): Working {
     .add("Least insulation that avoids it (still air)", "t_min", o.min_insulation_thickness_m, "m", "to 0.1 mm, at most 0.5 m, no sun; null: not within 0.5 m");
   if (result.ok) for (const x of result.warnings) if (x.method !== undefined) w.use(x.method);
   return { kind: "duct_run", result, lines: w.lines, methods: w.methods(), charts: { local_h: null, h_vs_wind: null, current: null } };
+}
+
+/**
+ * The two friction factors of the inside flow, each named for what it is used for: Gnielinski's
+ * Nusselt number is fitted with Petukhov's smooth-tube factor, whatever the wall, while the
+ * pressure drop takes Colebrook–White's on the wall's roughness. They differ (a rough wall has
+ * the larger), so the working shows both beside the line that uses each.
+ */
+function frictionLines(w: LineWriter, i: DuctInternal, round: boolean, rho: number | null, roughness_m: number): void {
+  const laminarNu = round ? "fully developed laminar, 3.66" : "fully developed laminar (Shah and London, by aspect ratio)";
+  if (i.regime === "laminar") {
+    w.add("Nusselt number", "Nu", i.Nu, "", laminarNu, i.correlation);
+  } else {
+    // Across the band 2300…3000 the Nusselt number is blended up to Gnielinski's value at 3000.
+    const ReP = i.regime === "turbulent" ? i.Re : RE_TURBULENT_MIN;
+    const at = i.regime === "turbulent" ? "" : ` at Re ${RE_TURBULENT_MIN}, the end of the blend`;
+    w.add("Friction factor for heat transfer (smooth duct)", "f_P", fDarcyPetukhov(ReP), "", `(0.790 ln Re − 1.64)⁻²${at}; used only in the Nusselt number`, "petukhov-friction");
+    if (i.regime === "turbulent") w.add("Nusselt number", "Nu", i.Nu, "", "(f_P/8)(Re − 1000)Pr / [1 + 12.7 (f_P/8)^½ (Pr^⅔ − 1)]", "gnielinski-petukhov");
+    else w.add("Nusselt number", "Nu", i.Nu, "", `linear in Re from the laminar value at ${RE_LAMINAR_MAX} to Gnielinski's (with f_P) at ${RE_TURBULENT_MIN}`, "duct-transitional-blend");
+  }
+  w.add("Relative roughness of the wall", "ε_r/D_h", roughness_m / i.Dh_m, "");
+  const fLam = round ? "64/Re" : "(f Re)/Re, f Re by Shah and London for the aspect ratio";
+  if (i.regime === "laminar") w.add("Friction factor for the pressure drop", "f", i.f_darcy, "", `${fLam}; laminar flow, roughness does not count`);
+  else if (i.regime === "transitional") w.add("Friction factor for the pressure drop", "f", i.f_darcy, "", `linear in Re from ${fLam} at ${RE_LAMINAR_MAX} to Colebrook–White at ${RE_TURBULENT_MIN}`, "colebrook");
+  else w.add("Friction factor for the pressure drop", "f", i.f_darcy, "", "1/√f = −2 log10(ε_r/(3.7 D_h) + 2.51/(Re √f)), solved by iteration", "colebrook");
+  if (rho !== null) w.add("Pressure drop per metre of straight duct", "Δp/L", (i.f_darcy * rho * i.velocity_m_s ** 2) / (2 * i.Dh_m), "Pa/m", "f ρ v²/(2 D_h)");
 }

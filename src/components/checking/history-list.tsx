@@ -1,4 +1,5 @@
 import { fieldChanges } from "@/checking/compare-revisions";
+import { describeItemChange } from "@/checking/describe-input-changes";
 import type { THistoryEntry } from "@/checking/history-entry";
 import { when } from "./when";
 
@@ -29,10 +30,18 @@ export function describeEntry(e: HistoryItem): { title: string; details: string[
       return { title: `Added ${noun} ${name}`.trim(), details: [] };
     case "delete":
       return { title: `Deleted ${noun} ${name}`.trim(), details: [] };
-    case "update":
-      return { title: `Changed ${noun} ${name}`.trim(), details: fieldChanges(e.before ?? {}, e.after ?? {}).filter((f) => f.field !== "updated_at").map((f) => `${f.field}: ${show(f.before)} → ${show(f.after)}`) };
-    case "accept":
+    case "update": {
+      // Fields by their headings and values with units; an unknown item keeps the stored names.
+      const words = describeItemChange(e.entity, e.before ?? {}, e.after ?? {});
+      const details = words ?? fieldChanges(e.before ?? {}, e.after ?? {}).filter((f) => f.field !== "updated_at").map((f) => `${f.field}: ${show(f.before)} → ${show(f.after)}`);
+      return { title: `Changed ${noun} ${name}`.trim(), details };
+    }
+    case "accept": {
+      // Accepted from the check list with others: the filter and the number the checker confirmed.
+      const bulk = e.after?.bulk as { rows?: number; filter?: string } | undefined;
+      if (bulk) return { title: `Accepted ${name} in bulk`.replace("  ", " "), details: [`one of ${bulk.rows ?? "several"} rows shown by the filter “${bulk.filter ?? ""}”, accepted together`] };
       return { title: `Accepted ${name}`.trim() + quoted(e.after?.comment), details: [] };
+    }
     case "query":
       return { title: `Queried ${name}`.trim() + quoted(e.after?.comment), details: [] };
     case "reset":

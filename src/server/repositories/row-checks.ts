@@ -1,5 +1,6 @@
 import "server-only";
 import type { Knex } from "knex";
+import type { AcceptedInputs } from "@/checking/accepted-inputs";
 import type { TCheckSheet, TCheckState } from "@/checking/check-machine";
 import type { Actor } from "@/server/auth/actor";
 import { AppError } from "@/server/http/app-error";
@@ -24,6 +25,13 @@ export interface RowCheck {
   checked_row_version: number | null;
   last_edited_by: number | null;
   last_edited_at: string | null;
+  /** The last acceptance, kept when the row goes back to unchecked (migration 20261214120000). */
+  accepted_at: string | null;
+  accepted_by: number | null;
+  accepted_row_version: number | null;
+  accepted_in_bulk: boolean;
+  /** What the row's results were computed from when accepted (src/checking/accepted-inputs.ts). */
+  accepted_inputs: AcceptedInputs | null;
   version: number;
 }
 

@@ -5,6 +5,7 @@ import type { Actor } from "@/server/auth/actor";
 import { checkRefusal } from "@/server/checking/check-rules";
 import { db } from "@/server/db/knex";
 import { AppError } from "@/server/http/app-error";
+import { currentInputs, rowInputColumns } from "@/server/repositories/accepted-inputs";
 import { SHEET_NOUN, type RowCheck, type ScheduleRowRef } from "@/server/repositories/row-checks";
 import { recordAudit } from "./record-audit";
 
@@ -12,8 +13,9 @@ import { recordAudit } from "./record-audit";
 const CHUNK = 1000;
 
 /**
- * A checker accepts several rows at once (those listed in the check view), each at the version
- * they read. All or nothing: one row that may not be accepted — changed since, already accepted,
+ * A checker accepts several rows at once (those listed in the check view, after confirming the
+ * filter and their number), each at the version they read; each row's check and history record
+ * that it was accepted in bulk. All or nothing: one row that may not be accepted — changed since, already accepted,
  * last edited by this checker — refuses the lot, naming every such row.
  */
 export async function acceptRows(actor: Actor, projectId: string, input: TAcceptRows): Promise<{ accepted: number }> {
@@ -24,13 +26,14 @@ export async function acceptRows(actor: Actor, projectId: string, input: TAccept
   return db().transaction(async (trx) => {
     // Set-based: the rows and their checks are read and locked a sheet at a time (in id order,
     // as the sort above), not one query per row, so accepting a whole sheet stays a few statements.
-    const found = new Map<string, ScheduleRowRef>();
+    const found = new Map<string, ScheduleRowRef & Record<string, unknown>>();
     const checks = new Map<string, RowCheck>();
     for (const sheet of [...new Set(rows.map((r) => r.sheet))]) {
       const ids = rows.filter((r) => r.sheet === sheet).map((r) => r.id);
       for (let i = 0; i < ids.length; i += CHUNK) {
         const part = ids.slice(i, i + CHUNK);
-        const stored = await trx(sheet).where({ firm_id: actor.firm.id, project_id: projectId }).whereIn("id", part).orderBy("id").forUpdate().select<ScheduleRowRef[]>("id", "label", "version", "zone_id", "position");
+        // Every input column: what each row is computed from is kept with its acceptance.
+        const stored = await trx(sheet).where({ firm_id: actor.firm.id, project_id: projectId }).whereIn("id", part).orderBy("id").forUpdate().select<(ScheduleRowRef & Record<string, unknown>)[]>(rowInputColumns(sheet));
         for (const row of stored) found.set(`${sheet}:${row.id}`, row);
         const held = await trx("row_checks").where({ project_id: projectId, sheet }).whereIn("row_id", part).orderBy("row_id").forUpdate().select<RowCheck[]>("*");
         for (const check of held) checks.set(`${sheet}:${check.row_id}`, check);
@@ -48,23 +51,36 @@ export async function acceptRows(actor: Actor, projectId: string, input: TAccept
     }
     if (refusals.length > 0) throw new AppError("conflict", `${refusals.length} of ${rows.length} rows cannot be accepted; none was`, refusals);
     const at = new Date().toISOString();
+    const inputs = await currentInputs(trx, actor.firm.id, projectId, ok.map((r) => ({ sheet: r.sheet, row: found.get(`${r.sheet}:${r.id}`)! })));
     for (let i = 0; i < ok.length; i += CHUNK) {
       await trx("row_checks")
-        .insert(ok.slice(i, i + CHUNK).map((r) => ({ firm_id: actor.firm.id, project_id: projectId, sheet: r.sheet, row_id: r.id, state: "accepted", checked_by: userId, checked_at: at, checked_row_version: r.version })))
+        .insert(
+          ok.slice(i, i + CHUNK).map((r) => ({
+            firm_id: actor.firm.id, project_id: projectId, sheet: r.sheet, row_id: r.id, state: "accepted", checked_by: userId, checked_at: at, checked_row_version: r.version,
+            accepted_at: at, accepted_by: userId, accepted_row_version: r.version, accepted_in_bulk: true, accepted_inputs: inputs.get(`${r.sheet}:${r.id}`)!,
+          })),
+        )
         .onConflict(["project_id", "sheet", "row_id"])
         .merge({
           state: "accepted",
           checked_by: userId,
           checked_at: at,
           checked_row_version: trx.raw("excluded.checked_row_version"),
+          accepted_at: at,
+          accepted_by: userId,
+          accepted_row_version: trx.raw("excluded.accepted_row_version"),
+          accepted_in_bulk: true,
+          accepted_inputs: trx.raw("excluded.accepted_inputs"),
           version: trx.raw("row_checks.version + 1"),
           updated_at: trx.fn.now(),
         });
     }
+    // Each row's history says it was accepted in bulk, with the filter and the number confirmed.
+    const bulk = { rows: ok.length, filter: input.filter };
     await recordAudit(
       trx,
       actor,
-      ok.map((r) => ({ projectId, entity: "row_check", entityId: r.id, action: "accept", before: { sheet: r.sheet, label: r.label, state: r.state }, after: { sheet: r.sheet, label: r.label, state: "accepted", row_version: r.version } })),
+      ok.map((r) => ({ projectId, entity: "row_check", entityId: r.id, action: "accept", before: { sheet: r.sheet, label: r.label, state: r.state }, after: { sheet: r.sheet, label: r.label, state: "accepted", row_version: r.version, bulk } })),
     );
     return { accepted: ok.length };
   });

@@ -11,7 +11,8 @@ import { AppError } from "@/server/http/app-error";
 import { appUrl } from "@/server/http/app-url";
 import { enqueueEmail } from "@/server/jobs/enqueue-email";
 import { notificationRecipients } from "@/server/repositories/notification-recipients";
-import { findCheck, findRowOrThrow, saveCheck } from "@/server/repositories/row-checks";
+import { currentInputs, rowInputColumns } from "@/server/repositories/accepted-inputs";
+import { findCheck, findRowOrThrow, saveCheck, type RowCheck } from "@/server/repositories/row-checks";
 import { getProjectOrThrow } from "./get-project";
 import { actorName, recordAudit } from "./record-audit";
 
@@ -41,11 +42,19 @@ export async function checkRow(actor: Actor, projectId: string, sheet: TCheckShe
     const refusal = checkRefusal(sheet, row, check, actor.userId!, input.move, input.row_version);
     if (refusal) throw new AppError(refusal.status, refusal.message, [{ field: refusal.field, message: refusal.message }]);
     const next = nextCheckState(input.move, state)!;
+    const at = new Date().toISOString();
+    // An acceptance keeps what the row was computed from, for "what changed since" once it is reset.
+    let accepted: Partial<RowCheck> = {};
+    if (next === "accepted") {
+      const stored = await trx(sheet).where({ id: rowId, firm_id: actor.firm.id }).first(rowInputColumns(sheet));
+      const inputs = (await currentInputs(trx, actor.firm.id, projectId, [{ sheet, row: stored }])).get(`${sheet}:${rowId}`)!;
+      accepted = { accepted_at: at, accepted_by: actor.userId, accepted_row_version: row.version, accepted_in_bulk: false, accepted_inputs: inputs };
+    }
 
     const saved = await saveCheck(
       trx,
       { firmId: actor.firm.id, projectId, sheet, rowId },
-      { state: next, checked_by: actor.userId, checked_at: new Date().toISOString(), checked_row_version: row.version },
+      { state: next, checked_by: actor.userId, checked_at: at, checked_row_version: row.version, ...accepted },
     );
     if (input.comment) {
       await trx("row_comments").insert({

@@ -1,7 +1,9 @@
 import "server-only";
 import { ductRunRowWorking, surfaceRowWorking, type Working } from "@/calc/index";
 import { snapshotSchedule } from "@/checking/build-snapshot";
+import { inputChanges, rowInputs, type InputSources } from "@/checking/accepted-inputs";
 import type { TCheckSheet, TCheckState } from "@/checking/check-machine";
+import { describeInputChanges, type ShownChange } from "@/checking/describe-input-changes";
 import type { TProject } from "@/schemas/project";
 import type { Actor } from "@/server/auth/actor";
 import { db } from "@/server/db/knex";
@@ -19,7 +21,27 @@ export interface RowWorking {
   /** The design case shown; null when the project has none yet. */
   design_case_id: string | null;
   working: Working | null;
-  check: { state: TCheckState; checked_by_name: string | null; checked_at: string | null; checked_row_version: number | null; last_edited_by: number | null; last_edited_by_name: string | null };
+  check: {
+    state: TCheckState;
+    checked_by_name: string | null;
+    checked_at: string | null;
+    checked_row_version: number | null;
+    /** The current acceptance was one of several from the check view's list. */
+    accepted_in_bulk: boolean;
+    last_edited_by: number | null;
+    last_edited_by_name: string | null;
+  };
+  /**
+   * For a row accepted once and sent back since (unchecked, or queried after): who accepted it,
+   * when, and what it depends on that changed since, in words. Null otherwise.
+   */
+  since_accepted: {
+    accepted_by_name: string | null;
+    accepted_at: string | null;
+    in_bulk: boolean;
+    row_version: number | null;
+    changes: ShownChange[];
+  } | null;
   comments: RowComment[];
   /** The next unchecked row after this one in schedule order (wrapping round), for "next unchecked". */
   next_unchecked: { sheet: TCheckSheet; id: string } | null;
@@ -51,7 +73,7 @@ export async function getRowWorking(actor: Actor, projectId: string, sheet: TChe
     listRowComments(actor, projectId, sheet, rowId),
     q("row_checks").where({ firm_id: actor.firm.id, project_id: projectId }).select("sheet", "row_id", "state"),
   ]);
-  const names = await userNames(q, [check?.checked_by ?? null, check?.last_edited_by ?? null]);
+  const names = await userNames(q, [check?.checked_by ?? null, check?.last_edited_by ?? null, check?.accepted_by ?? null]);
   const name = (id: number | null | undefined) => (id == null ? null : (names.get(id) ?? null));
 
   // Schedule order: surfaces then duct runs; look after this row first, then wrap round.
@@ -73,9 +95,23 @@ export async function getRowWorking(actor: Actor, projectId: string, sheet: TChe
       checked_by_name: name(check?.checked_by),
       checked_at: check?.checked_at ? new Date(check.checked_at).toISOString() : null,
       checked_row_version: check?.checked_row_version ?? null,
+      accepted_in_bulk: check?.state === "accepted" && check.accepted_in_bulk,
       last_edited_by: check?.last_edited_by ?? null,
       last_edited_by_name: name(check?.last_edited_by),
     },
+    since_accepted:
+      check?.accepted_inputs && check.state !== "accepted"
+        ? {
+            accepted_by_name: name(check.accepted_by),
+            accepted_at: check.accepted_at ? new Date(check.accepted_at).toISOString() : null,
+            in_bulk: check.accepted_in_bulk,
+            row_version: check.accepted_row_version,
+            changes: describeInputChanges(
+              inputChanges(check.accepted_inputs, rowInputs(sheet, row as unknown as Record<string, unknown>, { project: schedule.project, zones: schedule.zones, buildups: schedule.buildups, design_cases: schedule.design_cases } as unknown as InputSources)),
+              { sheet, system: schedule.project.unit_system, zones: new Map(schedule.zones.map((z) => [z.id, z.name])), buildups: new Map(schedule.buildups.map((b) => [b.id, b.name])) },
+            ),
+          }
+        : null,
     comments,
     next_unchecked: next,
   };

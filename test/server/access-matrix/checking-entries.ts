@@ -60,7 +60,7 @@ export const CHECKING_ENTRIES: MatrixEntry[] = [
     method: "POST",
     request: async () => {
       const fx = await makeProject("tarnbrook-sill");
-      return { path: `/api/projects/${fx.projectId}/checks`, body: { rows: fx.surfaceIds.map((id) => ({ sheet: "surfaces", id, row_version: 1 })) } };
+      return { path: `/api/projects/${fx.projectId}/checks`, body: { rows: fx.surfaceIds.map((id) => ({ sheet: "surfaces", id, row_version: 1 })), filter: "Unchecked · Surfaces", confirmed_count: fx.surfaceIds.length } };
     },
     expect: only(200, "checker"),
   },

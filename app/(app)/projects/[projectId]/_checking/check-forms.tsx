@@ -2,7 +2,7 @@
 
 import { useActionState } from "react";
 import { FormMessage, SubmitButton, TextAreaField } from "@/components/forms/form-parts";
-import { acceptRowsAction, issueRevisionAction, requestCheckAction } from "../check/actions";
+import { issueRevisionAction, requestCheckAction } from "../check/actions";
 
 /** A consultant asks the firm's checkers to check the project. */
 export function RequestCheckForm({ projectId }: { projectId: string }) {
@@ -38,33 +38,6 @@ export function IssueRevisionForm({ projectId, letter, open }: { projectId: stri
       ) : (
         <p className="text-small text-muted">The issue button appears here once the last row is accepted.</p>
       )}
-      <FormMessage state={state} />
-    </div>
-  );
-}
-
-/** Accepts every row listed (each at the version shown), after the checker confirms reading them. */
-export function AcceptListedForm({ projectId, rows }: { projectId: string; rows: { sheet: string; id: string; version: number }[] }) {
-  const [state, run] = useActionState(acceptRowsAction, null);
-  return (
-    <div className="grid gap-2">
-      {rows.length > 0 ? (
-        <form action={run} className="grid gap-2" aria-label="Accept the listed rows">
-          <input type="hidden" name="projectId" value={projectId} />
-          {rows.map((r) => (
-            <input key={`${r.sheet}:${r.id}`} type="hidden" name="rows[]" value={`${r.sheet}:${r.id}:${r.version}`} />
-          ))}
-          <label className="flex items-start gap-2 text-small">
-            <input type="checkbox" name="confirm" required className="mt-1" />
-            <span>I have read the working of each of these {rows.length} rows and accept them as they stand.</span>
-          </label>
-          <div>
-            <SubmitButton tone="quiet">
-              Accept {rows.length} listed {rows.length === 1 ? "row" : "rows"}
-            </SubmitButton>
-          </div>
-        </form>
-      ) : null}
       <FormMessage state={state} />
     </div>
   );

@@ -9,6 +9,8 @@ import { WorkingView } from "@/components/working/working-view";
 import { plainWord } from "@/report/plain-words";
 import type { RowWorking } from "@/server/services/get-row-working";
 import { CheckRowForm, CommentForm } from "./row-forms";
+import { SinceAccepted } from "./since-accepted";
+import { WorkingKeys } from "./working-keys";
 
 const KIND_LABELS: Record<string, { label: string; tone: string }> = {
   query: { label: "Query", tone: "text-danger" },
@@ -67,6 +69,8 @@ export function RowWorkingView({ data, history, canCheck, canComment, isConsulta
         </nav>
       </header>
 
+      {data.since_accepted ? <SinceAccepted since={data.since_accepted} /> : null}
+
       <div className="grid gap-6 xl:grid-cols-[minmax(0,2fr)_minmax(18rem,1fr)]">
         <div className="min-w-0">
           {data.working && dc ? (
@@ -77,11 +81,12 @@ export function RowWorkingView({ data, history, canCheck, canComment, isConsulta
         </div>
 
         <aside className="grid content-start gap-4">
-          <Panel title="Check" lead={check.checked_by_name ? `${check.state === "queried" ? "Queried" : "Accepted"} by ${check.checked_by_name}, ${when(check.checked_at)}` : "Not yet checked"}>
+          <Panel title="Check" lead={check.checked_by_name ? `${check.state === "queried" ? "Queried" : "Accepted"} by ${check.checked_by_name}, ${when(check.checked_at)}${check.accepted_in_bulk ? ", in bulk from the check list" : ""}` : "Not yet checked"}>
             <div className="grid gap-3">
               <p className="text-small text-muted">Last edited by {check.last_edited_by_name ?? "nobody recorded (as first entered)"}.</p>
               {canCheck && isLastEditor ? <p className="text-small text-caution">You last edited this row, so another checker must check it.</p> : null}
               {canCheck && !isLastEditor && (canAccept || canQuery) ? <CheckRowForm row={key} version={row.version} canAccept={canAccept} canQuery={canQuery} /> : null}
+              <WorkingKeys canCheck={canCheck && !isLastEditor && (canAccept || canQuery)} nextHref={data.next_unchecked ? workingPath(project.id, data.next_unchecked.sheet, data.next_unchecked.id, data.design_case_id) : null} />
             </div>
           </Panel>
 

@@ -1,25 +1,49 @@
 import Link from "next/link";
-import { CHECK_STATES, SHEET_LABELS, STATE_LABELS, type TCheckSheet, type TCheckState } from "@/checking/check-machine";
+import { CHECK_STATES, STATE_LABELS } from "@/checking/check-machine";
 import { historyPath, revisionsPath, rowPath } from "@/checking/paths";
-import { StateBadge } from "@/components/checking/state-badge";
 import { SectionHeader } from "@/components/checking/section-header";
 import { Panel } from "@/components/panel";
 import type { CheckBoard } from "@/server/services/get-check-board";
 import { PaidOnlyNote } from "@/components/billing/paid-only-note";
-import { AcceptListedForm, IssueRevisionForm, RequestCheckForm } from "../_checking/check-forms";
+import type { TBoardFilter } from "@/schemas/checking";
+import { IssueRevisionForm, RequestCheckForm } from "../_checking/check-forms";
+import { CheckList } from "./check-list";
 import { MuteForm } from "../_checking/mute-form";
 
-type Filter = { state?: TCheckState; sheet?: TCheckSheet };
+type Filter = TBoardFilter;
 
 function filterHref(projectId: string, f: Filter): string {
-  const q = new URLSearchParams(Object.entries(f).filter(([, v]) => v !== undefined) as [string, string][]).toString();
+  const q = new URLSearchParams(
+    Object.entries(f)
+      .filter(([, v]) => v !== undefined && v !== false)
+      .map(([k, v]) => [k, v === true ? "yes" : String(v)]),
+  ).toString();
   return `/projects/${projectId}/check${q ? `?${q}` : ""}`;
 }
 
+const same = (a: Filter, b: Filter) => a.state === b.state && a.sheet === b.sheet && !!a.warnings === !!b.warnings && !!a.changed === !!b.changed;
+
+/** The filter in words, as the bulk accept's confirmation shows it and each row's history keeps it. */
+export function filterWords(f: Filter): string {
+  const parts = [f.state ? STATE_LABELS[f.state] : null, f.sheet ? (f.sheet === "surfaces" ? "Surfaces" : "Duct runs") : null, f.warnings ? "With warnings" : null, f.changed ? "Changed since accepted" : null].filter(Boolean);
+  return parts.length === 0 ? "All rows" : parts.join(" · ");
+}
+
 function FilterLink({ projectId, filter, to, children }: { projectId: string; filter: Filter; to: Filter; children: React.ReactNode }) {
-  const current = filter.state === to.state && filter.sheet === to.sheet;
+  const current = same(filter, to);
   return (
     <Link href={filterHref(projectId, to)} aria-current={current ? "page" : undefined} className="rounded-chip border border-line px-2 py-1 text-small hover:bg-sunken aria-[current=page]:border-accent aria-[current=page]:bg-accent-soft">
+      {children}
+    </Link>
+  );
+}
+
+/** A filter that is on or off whatever else is chosen (warnings, changed since accepted). */
+function ToggleLink({ projectId, filter, name, children }: { projectId: string; filter: Filter; name: "warnings" | "changed"; children: React.ReactNode }) {
+  const on = !!filter[name];
+  return (
+    <Link href={filterHref(projectId, { ...filter, [name]: !on })} aria-pressed={on} role="button" className="rounded-chip border border-line px-2 py-1 text-small hover:bg-sunken aria-[pressed=true]:border-caution aria-[pressed=true]:bg-caution/10">
+      {on ? "✓ " : ""}
       {children}
     </Link>
   );
@@ -31,8 +55,6 @@ export function CheckView({ board, filter, muted, canCheck, canRequest, userId, 
   const pid = project.id;
   const accepted = counts.rows === 0 ? 0 : Math.round((100 * counts.accepted) / counts.rows);
   const ready = counts.rows > 0 && counts.accepted === counts.rows;
-  // Rows listed that this checker may accept in one go: not accepted, and not last edited by them.
-  const acceptable = rows.filter((r) => r.state !== "accepted" && r.last_edited_by !== userId);
   return (
     <div className="grid gap-6">
       <SectionHeader title="Check" lead={<>Read each row&apos;s working, then accept it or query it. When every row is accepted, a checker issues revision {board.next_revision}.</>}>
@@ -71,70 +93,41 @@ export function CheckView({ board, filter, muted, canCheck, canRequest, userId, 
 
       <Panel
         title="Rows"
-        lead={`${rows.length} shown`}
+        lead={`${rows.length} shown · filter: ${filterWords(filter)}`}
         actions={
           <nav aria-label="Filter rows" className="flex flex-wrap gap-1">
-            <FilterLink projectId={pid} filter={filter} to={{ sheet: filter.sheet }}>All ({counts.rows})</FilterLink>
+            <FilterLink projectId={pid} filter={filter} to={{ sheet: filter.sheet, warnings: filter.warnings, changed: filter.changed }}>All ({counts.rows})</FilterLink>
             {CHECK_STATES.map((s) => (
-              <FilterLink key={s} projectId={pid} filter={filter} to={{ state: s, sheet: filter.sheet }}>
+              <FilterLink key={s} projectId={pid} filter={filter} to={{ ...filter, state: s }}>
                 {STATE_LABELS[s]} ({counts[s]})
               </FilterLink>
             ))}
             <span className="mx-1 w-px bg-line" aria-hidden />
             {(["surfaces", "duct_runs"] as const).map((sh) => (
-              <FilterLink key={sh} projectId={pid} filter={filter} to={{ state: filter.state, sheet: filter.sheet === sh ? undefined : sh }}>
+              <FilterLink key={sh} projectId={pid} filter={filter} to={{ ...filter, sheet: filter.sheet === sh ? undefined : sh }}>
                 {sh === "surfaces" ? "Surfaces" : "Duct runs"}
               </FilterLink>
             ))}
+            <span className="mx-1 w-px bg-line" aria-hidden />
+            <ToggleLink projectId={pid} filter={filter} name="warnings">
+              With warnings ({counts.warnings})
+            </ToggleLink>
+            <ToggleLink projectId={pid} filter={filter} name="changed">
+              Changed since accepted ({counts.changed})
+            </ToggleLink>
           </nav>
         }
       >
-        {rows.length === 0 ? (
-          <p className="text-small text-muted">{counts.rows === 0 ? "The schedule has no surfaces or duct runs yet." : "No row matches this filter."}</p>
-        ) : (
-          <div className="overflow-x-auto">
-            <table className="w-full text-small">
-              <thead className="text-left text-micro uppercase tracking-[0.08em] text-muted">
-                <tr>
-                  <th className="py-2 pr-3">Row</th>
-                  <th className="py-2 pr-3">Kind</th>
-                  <th className="py-2 pr-3">Zone</th>
-                  <th className="py-2 pr-3">State</th>
-                  <th className="py-2 pr-3">Checked by</th>
-                  <th className="py-2 pr-3">Last edited by</th>
-                  <th className="py-2 text-right">Comments</th>
-                </tr>
-              </thead>
-              <tbody>
-                {rows.map((r) => (
-                  <tr key={`${r.sheet}:${r.id}`} className="border-t border-line/60">
-                    <td className="py-1.5 pr-3">
-                      <Link href={rowPath(pid, r.sheet, r.id)} className="font-medium text-accent underline-offset-2 hover:underline">
-                        {r.label}
-                      </Link>
-                    </td>
-                    <td className="py-1.5 pr-3 text-muted">{SHEET_LABELS[r.sheet]}</td>
-                    <td className="py-1.5 pr-3">{r.zone}</td>
-                    <td className="py-1.5 pr-3">
-                      <StateBadge state={r.state} />
-                    </td>
-                    <td className="py-1.5 pr-3 text-muted">{r.checked_by_name ?? "—"}</td>
-                    <td className="py-1.5 pr-3 text-muted">{r.last_edited_by_name ?? "—"}</td>
-                    <td className="py-1.5 text-right tabular-nums">{r.comments}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-          </div>
-        )}
-        {canCheck ? (
-          <div className="mt-4 border-t border-line pt-4 empty:hidden">
-            <AcceptListedForm projectId={pid} rows={acceptable.map((r) => ({ sheet: r.sheet, id: r.id, version: r.version }))} />
-            {acceptable.length < rows.filter((r) => r.state !== "accepted").length ? (
-              <p className="mt-2 text-micro text-muted">Rows you last edited are left out: another checker must check them.</p>
-            ) : null}
-          </div>
-        ) : null}
+        <CheckList
+          projectId={pid}
+          canCheck={canCheck}
+          filterText={filterWords(filter)}
+          empty={counts.rows === 0 ? "The schedule has no surfaces or duct runs yet." : "No row matches this filter."}
+          rows={rows.map((r) => ({
+            sheet: r.sheet, id: r.id, label: r.label, zone: r.zone, version: r.version, state: r.state, checked_by_name: r.checked_by_name, accepted_in_bulk: r.accepted_in_bulk,
+            last_edited_by_name: r.last_edited_by_name, mine: userId !== null && r.last_edited_by === userId, comments: r.comments, changed_since_accepted: r.changed_since_accepted, warnings: r.warnings,
+          }))}
+        />
       </Panel>
 
       <MuteForm projectId={pid} muted={muted} />
