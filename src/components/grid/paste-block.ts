@@ -11,6 +11,7 @@ import type { UnitSystem } from "@/units/units";
 import type { Row } from "@/components/schedule/schedule-cache";
 import type { BulkOp } from "@/components/schedule/use-schedule-writes";
 import { completeChange, rowProblems } from "./cell-edits";
+import { withoutHeader } from "./range-edits";
 
 export interface PasteProblem {
   /** 1-based line of the pasted block. */
@@ -68,7 +69,8 @@ export function planPaste(args: {
       }
       const parsed = parseCell(col, text, system, args.lookups);
       if (parsed.ok) values[col.field] = parsed.value;
-      else problems.push({ ...where, column: columnHeader(col, system), message: parsed.message });
+      // parseCell's messages start with the heading (an import names no column otherwise); the line names it already.
+      else problems.push({ ...where, column: columnHeader(col, system), message: withoutHeader(parsed.message, columnHeader(col, system)) });
     });
     const complete = completeChange(sheet, base, values);
     for (const [field, message] of rowProblems(sheet, { ...base, ...complete }, system)) {

@@ -10,6 +10,8 @@ import type { Row } from "@/components/schedule/schedule-cache";
 import { sheetColumnDefs } from "./column-defs";
 import { TOTALS_ID, passesRowFilter, type GridContext, type RowFilter } from "./grid-context";
 import { gridTheme } from "./grid-theme";
+import { RangeStatus } from "./range-status";
+import { useSheetHabits, type HabitWrites } from "./use-sheet-habits";
 import "./schedule-grid.css";
 
 ModuleRegistry.registerModules([AllCommunityModule]);
@@ -40,6 +42,8 @@ export interface ScheduleGridProps {
   onReady?: (api: GridApi<Row>) => void;
   /** The design case shown: the working links open on it. */
   caseId?: string;
+  /** Fills, clears, undo and redo of the range selection (use-sheet-habits). */
+  habits?: HabitWrites;
 }
 
 /**
@@ -52,6 +56,7 @@ export function ScheduleGrid(props: ScheduleGridProps) {
   const { sheet, schedule, results, totals, system, canEdit, cellErrors } = props;
   const rowFilter = props.rowFilter ?? "all";
   const [api, setApi] = useState<GridApi<Row> | null>(null);
+  const wrapper = useRef<HTMLDivElement>(null);
   const rows = (sheet === "surfaces" ? schedule.surfaces : schedule.duct_runs) as unknown as Row[];
   const context = useRef<GridContext>({ projectId: schedule.project.id, sheet, system, canEdit, results, rowFilter, cellErrors, totals, rowCount: rows.length, buildups: new Map() }).current;
   Object.assign(context, { projectId: schedule.project.id, sheet, system, canEdit, results, rowFilter, cellErrors, totals, rowCount: rows.length, buildups: new Map(schedule.buildups.map((b) => [b.id, b])), caseId: props.caseId });
@@ -64,6 +69,8 @@ export function ScheduleGrid(props: ScheduleGridProps) {
     [sheet, zones, buildups, project.default_method, system],
   );
   const pinned = useMemo(() => [{ id: TOTALS_ID, label: `Total of ${rows.length} ${rows.length === 1 ? "row" : "rows"}` } as unknown as Row], [rows.length]);
+
+  const habits = useSheetHabits({ api, wrapper, sheet, schedule, system, canEdit, writes: props.habits });
 
   useEffect(() => {
     api?.refreshCells();
@@ -111,11 +118,13 @@ export function ScheduleGrid(props: ScheduleGridProps) {
     const shown: Row[] = [];
     api.forEachNodeAfterFilterAndSort((n) => n.data && shown.push(n.data));
     const columnIds = api.getAllDisplayedColumns().map((c) => c.getColId()).filter((id) => id !== "ag-Grid-SelectionColumn");
-    props.onPaste({ text, rows: shown, startRow: focused.rowIndex, columnIds, startColumn: focused.column.getColId() });
+    props.onPaste(habits.pasteAt({ text, rows: shown, startRow: focused.rowIndex, columnIds, startColumn: focused.column.getColId() }));
   };
 
   return (
-    <div className="fs-grid h-[34rem] min-w-0 print:h-auto" onPaste={onPaste} data-sheet={sheet}>
+    <>
+    <div ref={wrapper} className="fs-grid h-[34rem] min-w-0 print:h-auto" onPaste={onPaste} data-sheet={sheet} {...habits.scopeProps}>
+      <style>{habits.css}</style>
       <AgGridReact<Row>
         theme={gridTheme}
         rowData={rows}
@@ -141,5 +150,7 @@ export function ScheduleGrid(props: ScheduleGridProps) {
         suppressColumnVirtualisation
       />
     </div>
+    <RangeStatus size={habits.size} headings={habits.headings} onHeadings={habits.setHeadings} canEdit={canEdit} />
+    </>
   );
 }

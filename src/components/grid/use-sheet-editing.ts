@@ -1,15 +1,16 @@
 "use client";
 
-import { useCallback, useState } from "react";
+import { useCallback, useRef, useState } from "react";
 import type { TSchedule, TSheet } from "@/schemas/schedule";
 import { SHEET_COLUMNS, SHEET_TITLES, columnHeader } from "@/schedule/sheet-columns";
-import { ApiError } from "@/components/schedule/api-client";
 import type { Row } from "@/components/schedule/schedule-cache";
 import { useProject } from "@/components/schedule/schedule-context";
-import { useScheduleWrites, type BulkOp } from "@/components/schedule/use-schedule-writes";
+import type { BulkOp } from "@/components/schedule/use-schedule-writes";
 import { editCell } from "./cell-edits";
 import { cellKey } from "./grid-context";
-import { planPaste } from "./paste-block";
+import { planPaste, readBlock } from "./paste-block";
+import { problemLine, type RangePlan } from "./range-edits";
+import { useUndoableWrites } from "./use-undoable-writes";
 import type { PasteRequest } from "./schedule-grid";
 
 const newId = () => crypto.randomUUID();
@@ -29,43 +30,38 @@ function blankRow(sheet: TSheet, s: TSchedule): Row | null {
   };
 }
 
-/** Messages of a refused write, by row and column where the server named them. */
-function explain(sheet: TSheet, error: unknown, rows: Row[]): string[] {
-  if (!(error instanceof ApiError)) return [];
-  return error.details.map((d) => {
-    const col = SHEET_COLUMNS[sheet].find((c) => c.field === d.field);
-    const row = rows.find((r) => r.id === d.id);
-    return `${row ? String(row.label) : d.row ? `Change ${d.row}` : ""}${col ? ` · ${col.title}` : ""}: ${d.message}`;
-  });
-}
-
-/** Typing, pasting, adding, duplicating and deleting rows of one sheet, with cell-level errors. */
+/**
+ * Typing, pasting, filling, clearing, adding, duplicating and deleting rows of one sheet, with
+ * cell-level errors; every write is one step of undo and redo (useUndoableWrites).
+ */
 export function useSheetEditing(sheet: TSheet, schedule: TSchedule) {
-  const { system, notify } = useProject();
-  const { bulk } = useScheduleWrites();
+  const { system, notify, dismiss } = useProject();
   const [cellErrors, setCellErrors] = useState(() => new Map<string, string>());
+  // The cell the last refused edit's notice is about: saving that cell takes the notice away.
+  const noticeCell = useRef<string | null>(null);
   const rows = (sheet === "surfaces" ? schedule.surfaces : schedule.duct_runs) as unknown as Row[];
 
-  const setError = (key: string, message: string | null) =>
-    setCellErrors((m) => {
-      if (message === null && !m.has(key)) return m;
-      const next = new Map(m);
-      if (message === null) next.delete(key);
-      else next.set(key, message);
-      return next;
-    });
-
-  const send = useCallback(
-    (ops: BulkOp[], done: string | null) =>
-      bulk.mutate(ops, {
-        onSuccess: () => done && notify({ tone: "ok", message: done }),
-        onError: (error) => {
-          const conflict = error instanceof ApiError && error.status === 409;
-          notify({ tone: "error", message: conflict ? `${error.message}. The grid now shows the current values.` : error.message, lines: explain(sheet, error, rows) });
-        },
-      }),
-    [bulk, notify, sheet, rows],
+  // A cell saved by any write (typing, paste, fill, clear, undo) loses its error outline and message.
+  const onWritten = useCallback(
+    (ops: BulkOp[]) => {
+      const saved = ops.flatMap((o) => (o.op === "update" ? Object.keys(o.values).map((f) => cellKey(o.id, f)) : []));
+      setCellErrors((m) => {
+        if (!saved.some((k) => m.has(k))) return m;
+        const next = new Map(m);
+        for (const k of saved) next.delete(k);
+        return next;
+      });
+      if (noticeCell.current && saved.includes(noticeCell.current)) {
+        dismiss("edit");
+        noticeCell.current = null;
+      }
+    },
+    [dismiss],
   );
+  const history = useUndoableWrites(onWritten);
+  const send = (ops: BulkOp[], label: string, done: string | null, key = "sheet-error") => history.write(ops, label, done, key);
+
+  const setError = (key: string, message: string) => setCellErrors((m) => new Map(m).set(key, message));
 
   const onEdit = (row: Row, field: string, shown: unknown) => {
     const col = SHEET_COLUMNS[sheet].find((c) => c.field === field);
@@ -74,37 +70,46 @@ export function useSheetEditing(sheet: TSheet, schedule: TSchedule) {
     const key = cellKey(row.id, field);
     if (!out.ok) {
       setError(key, out.message);
-      notify({ tone: "error", message: `Not saved — ${String(row.label)} · ${columnHeader(col, system)}: ${out.message}` });
+      noticeCell.current = key;
+      notify({ key: "edit", tone: "error", message: `Not saved — ${String(row.label)} · ${columnHeader(col, system)}: ${out.message}` });
       return;
     }
-    setError(key, null);
-    send([{ op: "update", sheet, id: row.id, values: out.values }], null);
+    send([{ op: "update", sheet, id: row.id, values: out.values }], `Edit of ${columnHeader(col, system)} in ${String(row.label)}`, null, "edit");
   };
+
+  const refuse = (what: string, lines: string[]) =>
+    notify({ key: "sheet-error", tone: "error", message: `${what}: ${lines.length} ${lines.length === 1 ? "cell needs" : "cells need"} fixing; nothing was saved`, lines });
 
   const onPaste = (p: PasteRequest) => {
     const plan = planPaste({ ...p, sheet, system, lookups: { zones: schedule.zones, buildups: schedule.buildups }, newId });
-    if (plan.problems.length) {
-      notify({ tone: "error", message: `Nothing pasted: ${plan.problems.length} ${plan.problems.length === 1 ? "cell needs" : "cells need"} fixing`, lines: plan.problems.map((x) => `Line ${x.line}${x.row ? ` (${x.row})` : ""} · ${x.column}: ${x.message}`) });
-      return;
-    }
-    const cells = p.text.trim().split(/\r?\n/).length;
-    send(plan.ops, `Pasted ${cells} ${cells === 1 ? "line" : "lines"} into ${SHEET_TITLES[sheet]}`);
+    if (plan.problems.length) return refuse("Nothing pasted", plan.problems.map((x) => `Line ${x.line}${x.row ? ` (${x.row})` : ""} · ${x.column}: ${x.message}`));
+    const lines = readBlock(p.text).length;
+    const what = `${lines} ${lines === 1 ? "line" : "lines"}`;
+    send(plan.ops, `Paste of ${what}`, `Pasted ${what} into ${SHEET_TITLES[sheet]}`);
+  };
+
+  /** A planned fill or clear: one step, or the refusal naming each cell. */
+  const applyRange = (plan: RangePlan, label: string, refused: string) => {
+    if (plan.problems.length) return refuse(refused, plan.problems.map(problemLine));
+    if (plan.ops.length === 0) return notify({ key: "sheet-ok", tone: "ok", message: `${label}: nothing to change` });
+    send(plan.ops, `${label} (${plan.cells} ${plan.cells === 1 ? "cell" : "cells"})`, null);
   };
 
   const addRow = () => {
     const last = rows[rows.length - 1];
     const row = last ? { ...last, id: newId(), version: 0, position: Number.MAX_SAFE_INTEGER, label: `${String(last.label)} (new)` } : blankRow(sheet, schedule);
     if (!row) return notify({ tone: "error", message: "Add a zone (and for surfaces a build-up) first: every row belongs to one" });
-    send([{ op: "create", sheet, row }], null);
+    send([{ op: "create", sheet, row }], "Added row", null);
   };
 
   const duplicate = (ids: string[]) =>
     send(
       rows.filter((r) => ids.includes(r.id)).map((r, i) => ({ op: "create" as const, sheet, row: { ...r, id: newId(), version: 0, position: Number.MAX_SAFE_INTEGER - ids.length + i, label: `${String(r.label)} (copy)` } })),
+      `Duplicate of ${ids.length} ${ids.length === 1 ? "row" : "rows"}`,
       `Duplicated ${ids.length} ${ids.length === 1 ? "row" : "rows"}`,
     );
 
-  const remove = (ids: string[]) => send(ids.map((id) => ({ op: "delete" as const, sheet, id })), `Deleted ${ids.length} ${ids.length === 1 ? "row" : "rows"}`);
+  const remove = (ids: string[]) => send(ids.map((id) => ({ op: "delete" as const, sheet, id })), `Delete of ${ids.length} ${ids.length === 1 ? "row" : "rows"}`, `Deleted ${ids.length} ${ids.length === 1 ? "row" : "rows"}`);
 
-  return { cellErrors, onEdit, onPaste, addRow, duplicate, remove, pending: bulk.isPending };
+  return { cellErrors, onEdit, onPaste, applyRange, addRow, duplicate, remove, pending: history.pending, undo: history.undo, redo: history.redo, undoLabel: history.undoLabel, redoLabel: history.redoLabel };
 }

@@ -11,6 +11,8 @@ export interface Notice {
   tone: "error" | "ok";
   message: string;
   lines?: string[];
+  /** A notice of a kind replaces the last one of that kind (edit errors do not stack); dismiss(key) removes it. */
+  key?: string;
 }
 
 interface ProjectContext {
@@ -22,7 +24,7 @@ interface ProjectContext {
   setSystem: (s: UnitSystem | null) => void;
   notices: Notice[];
   notify: (n: Omit<Notice, "id">) => void;
-  dismiss: (id: number) => void;
+  dismiss: (idOrKey: number | string) => void;
 }
 
 const Ctx = createContext<ProjectContext | null>(null);
@@ -49,8 +51,14 @@ function ProjectState({ projectId, canEdit, unitSystem, children }: { projectId:
   const [notices, setNotices] = useState<Notice[]>([]);
   const { data } = useQuery({ queryKey: scheduleKey(projectId), queryFn: () => api<TSchedule>("GET", `/api/projects/${projectId}/schedule`) });
   const stored = data?.project.unit_system ?? unitSystem;
-  const notify = useCallback((n: Omit<Notice, "id">) => setNotices((all) => [...all.slice(-3), { ...n, id: Date.now() + Math.random() }]), []);
-  const dismiss = useCallback((id: number) => setNotices((all) => all.filter((n) => n.id !== id)), []);
+  const notify = useCallback(
+    (n: Omit<Notice, "id">) => setNotices((all) => [...all.filter((o) => !n.key || o.key !== n.key).slice(-3), { ...n, id: Date.now() + Math.random() }]),
+    [],
+  );
+  const dismiss = useCallback(
+    (idOrKey: number | string) => setNotices((all) => (all.some((n) => n.id === idOrKey || n.key === idOrKey) ? all.filter((n) => n.id !== idOrKey && n.key !== idOrKey) : all)),
+    [],
+  );
   const value = useMemo(
     () => ({ projectId, canEdit, system: override ?? stored, setSystem: setOverride, notices, notify, dismiss }),
     [projectId, canEdit, override, stored, notices, notify, dismiss],

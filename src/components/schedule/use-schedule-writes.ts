@@ -7,12 +7,13 @@ import { ApiError, ITEM_PATHS, api } from "./api-client";
 import { findRow, mergeRows, pick, removeRows, upsertRows, type Row } from "./schedule-cache";
 import { scheduleKey, useProject } from "./schedule-context";
 
+/** Update and delete read the row's cached version when sent, unless they name one (an undo names the version this browser last wrote). */
 export type BulkOp =
   | { op: "create"; sheet: TSheet; row: Row }
-  | { op: "update"; sheet: TSheet; id: string; values: Record<string, unknown> }
-  | { op: "delete"; sheet: TSheet; id: string };
+  | { op: "update"; sheet: TSheet; id: string; values: Record<string, unknown>; version?: number }
+  | { op: "delete"; sheet: TSheet; id: string; version?: number };
 
-interface WriteResult {
+export interface WriteResult {
   created: { sheet: TSheet; row: Row }[];
   updated: { sheet: TSheet; row: Row }[];
 }
@@ -59,8 +60,8 @@ export function useScheduleWrites() {
           o.op === "create"
             ? { op: "create", sheet: o.sheet, id: o.row.id, values: fieldsOf(o.row) }
             : o.op === "update"
-              ? { op: "update", sheet: o.sheet, id: o.id, version: version(o.sheet, o.id), values: o.values }
-              : { op: "delete", sheet: o.sheet, id: o.id, version: version(o.sheet, o.id) },
+              ? { op: "update", sheet: o.sheet, id: o.id, version: o.version ?? version(o.sheet, o.id), values: o.values }
+              : { op: "delete", sheet: o.sheet, id: o.id, version: o.version ?? version(o.sheet, o.id) },
         ),
       }),
     onMutate: async (ops) => {

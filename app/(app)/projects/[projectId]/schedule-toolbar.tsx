@@ -60,6 +60,12 @@ export function ScheduleToolbar(props: {
       <div className="flex flex-wrap items-center gap-2">
         {props.canEdit ? (
           <>
+            <button type="button" className={button} disabled={!props.editing.undoLabel} title={props.editing.undoLabel ? `Undo ${props.editing.undoLabel} (Ctrl+Z)` : "Nothing to undo"} aria-label={props.editing.undoLabel ? `Undo ${props.editing.undoLabel}` : "Undo"} onClick={props.editing.undo}>
+              ↶ Undo
+            </button>
+            <button type="button" className={button} disabled={!props.editing.redoLabel} title={props.editing.redoLabel ? `Redo ${props.editing.redoLabel} (Ctrl+Y)` : "Nothing to redo"} aria-label={props.editing.redoLabel ? `Redo ${props.editing.redoLabel}` : "Redo"} onClick={props.editing.redo}>
+              ↷ Redo
+            </button>
             <button type="button" className={button} onClick={props.editing.addRow}>
               Add row
             </button>

@@ -96,6 +96,7 @@ export function ScheduleView({ initialSheet = "surfaces", initialCase }: { initi
             cellErrors={editing.cellErrors}
             onEdit={editing.onEdit}
             onPaste={editing.onPaste}
+            habits={editing}
             onSelection={setSelected}
             caseId={dc.id}
           />
