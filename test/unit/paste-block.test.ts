@@ -68,7 +68,7 @@ describe("planPaste", () => {
     const plan = planPaste({ ...base, text: "12\t90\nabc\t90\n9\t200", startRow: 0, startColumn: "area_m2", system: "SI" });
     expect(plan.ops).toEqual([]);
     expect(plan.problems).toEqual([
-      { line: 2, row: "Panel 2", column: "Area (m²)", message: 'Area (m²): "abc" is not a number' },
+      { line: 2, row: "Panel 2", column: "Area (m²)", message: '"abc" is not a number' },
       { line: 3, row: "Panel 3", column: "Tilt (°)", message: "Tilt must be between 0° and 180°" },
     ]);
   });
