@@ -60,9 +60,9 @@ describe("rangeCss", () => {
   const ids = ["label", "zone_id", "area_m2", 'odd"id'];
   test("tints and outlines exactly the range's rows and columns, and puts the handle on its last cell", () => {
     const css = rangeCss("s1", { top: 1, bottom: 2, left: 1, right: 2 }, ids);
-    expect(css).toContain('[data-range-scope="s1"] .ag-row:is([row-index="1"],[row-index="2"]) .ag-cell:is([col-id="zone_id"],[col-id="area_m2"])::after');
+    expect(css).toContain('[data-range-scope="s1"] .ag-row:not(.ag-row-pinned):is([row-index="1"],[row-index="2"]) .ag-cell:is([col-id="zone_id"],[col-id="area_m2"])::after');
     expect(css).not.toContain('[col-id="label"]');
-    expect(css).toContain('.ag-row:is([row-index="2"]) .ag-cell:is([col-id="area_m2"])::before');
+    expect(css).toContain('.ag-row:not(.ag-row-pinned):is([row-index="2"]) .ag-cell:is([col-id="area_m2"])::before');
     expect(css).toMatch(/--fs-rt:2px/);
   });
   test("a single cell gets only the handle; quotes in ids are escaped; no range, no rules", () => {

@@ -96,7 +96,7 @@ const cssString = (s: string) => `"${s.replace(/["\\]/g, "\\$&")}"`;
 const rowSel = (from: number, to: number) => {
   const parts: string[] = [];
   for (let i = from; i <= to; i++) parts.push(`[row-index="${i}"]`);
-  return `.ag-row:is(${parts.join(",")})`;
+  return `.ag-row:not(.ag-row-pinned):is(${parts.join(",")})`;
 };
 const colSel = (ids: readonly string[]) => `.ag-cell:is(${ids.map((id) => `[col-id=${cssString(id)}]`).join(",")})`;
 

@@ -77,12 +77,12 @@ export function useSheetEditing(sheet: TSheet, schedule: TSchedule) {
     send([{ op: "update", sheet, id: row.id, values: out.values }], `Edit of ${columnHeader(col, system)} in ${String(row.label)}`, null, "edit");
   };
 
-  const refuse = (what: string, lines: string[]) =>
-    notify({ key: "sheet-error", tone: "error", message: `${what}: ${lines.length} ${lines.length === 1 ? "cell needs" : "cells need"} fixing; nothing was saved`, lines });
+  const refuse = (what: string, lines: string[], noun: [string, string] = ["problem", "problems"]) =>
+    notify({ key: "sheet-error", tone: "error", message: `${what}: ${lines.length} ${lines.length === 1 ? noun[0] : noun[1]}; nothing was saved`, lines });
 
   const onPaste = (p: PasteRequest) => {
     const plan = planPaste({ ...p, sheet, system, lookups: { zones: schedule.zones, buildups: schedule.buildups }, newId });
-    if (plan.problems.length) return refuse("Nothing pasted", plan.problems.map((x) => `Line ${x.line}${x.row ? ` (${x.row})` : ""} · ${x.column}: ${x.message}`));
+    if (plan.problems.length) return refuse("Nothing pasted", plan.problems.map((x) => `Line ${x.line}${x.row ? ` (${x.row})` : ""} · ${x.column}: ${x.message}`), ["cell needs fixing", "cells need fixing"]);
     const lines = readBlock(p.text).length;
     const what = `${lines} ${lines === 1 ? "line" : "lines"}`;
     send(plan.ops, `Paste of ${what}`, `Pasted ${what} into ${SHEET_TITLES[sheet]}`);
