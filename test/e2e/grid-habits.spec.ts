@@ -238,6 +238,7 @@ test("an undo after someone else changed the row is refused with 409, says so, a
 });
 
 test("adding and deleting rows undo and redo; a deleted row comes back with its values", async ({ page }) => {
+  page.on("pageerror", (e) => console.log("page error:", e.message));
   await openDemoSchedule(page);
   const tab = page.getByRole("tab", { name: /Surfaces/ });
   const count = async () => Number(/\d+/.exec((await tab.textContent()) ?? "")?.[0]);
@@ -260,6 +261,7 @@ test("adding and deleting rows undo and redo; a deleted row comes back with its 
   const stored = await db("surfaces").where({ id }).first();
   await bodyRow(page, "RR south spandrel 2").locator('[col-id="ag-Grid-SelectionColumn"] input').check();
   await page.getByRole("button", { name: "Delete 1" }).click();
+  await expect(page.getByText("Delete 1 row?")).toBeVisible();
   const deleted = bulkDone(page);
   await page.getByRole("button", { name: "Delete", exact: true }).click();
   expect((await deleted).status()).toBe(200);

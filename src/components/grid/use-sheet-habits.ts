@@ -138,15 +138,21 @@ export function useSheetHabits(args: {
     };
     const editing = () => api.getEditingCells().length > 0;
 
-    // A Shift+click or a fill drag is ours: the grid must not see its click and move its focus.
+    // A Shift+click or a fill drag is ours: the grid must not see its click and move its focus
+    // (and if it focuses the clicked cell anyway, the range it just drew stays).
     let swallowClick = false;
+    let keepRange = false;
     const onClick = (e: MouseEvent) => {
       if (!swallowClick) return;
       swallowClick = false;
       e.stopPropagation();
     };
+    const onPointerDown = (e: PointerEvent) => {
+      if (e.shiftKey && L.range && cellAt(e.target)) e.stopPropagation();
+    };
     const onMouseDown = (e: MouseEvent) => {
       swallowClick = false;
+      keepRange = false;
       if (e.button !== 0 || editing()) return;
       const at = cellAt(e.target);
       if (!at) return;
@@ -163,6 +169,7 @@ export function useSheetHabits(args: {
         // Extend from the anchor; the grid must not move its focus to the clicked cell.
         setRange({ anchor: L.range.anchor, focus: at });
         swallowClick = true;
+        keepRange = true;
         e.preventDefault();
         e.stopPropagation();
         return;
@@ -196,6 +203,7 @@ export function useSheetHabits(args: {
     };
 
     const onKeyDown = (e: KeyboardEvent) => {
+      keepRange = false;
       if (editing() || inField(e.target)) return;
       const mod = e.ctrlKey || e.metaKey;
       const key = e.key.toLowerCase();
@@ -250,6 +258,10 @@ export function useSheetHabits(args: {
     };
 
     const onFocused = (e: { rowIndex: number | null; rowPinned?: string | null; column?: unknown }) => {
+      if (keepRange) {
+        keepRange = false;
+        return;
+      }
       if (e.rowIndex === null || e.rowPinned || !e.column || L.drag) return;
       const col = columnIds().indexOf((e.column as { getColId: () => string }).getColId());
       if (col < 0) return;
@@ -259,6 +271,7 @@ export function useSheetHabits(args: {
       setRange(singleCell({ row: e.rowIndex, col }));
     };
 
+    el.addEventListener("pointerdown", onPointerDown, true);
     el.addEventListener("mousedown", onMouseDown, true);
     el.addEventListener("mouseover", onMouseOver);
     el.addEventListener("click", onClick, true);
@@ -268,6 +281,7 @@ export function useSheetHabits(args: {
     document.addEventListener("keydown", onDocKeyDown);
     api.addEventListener("cellFocused", onFocused as never);
     return () => {
+      el.removeEventListener("pointerdown", onPointerDown, true);
       el.removeEventListener("mousedown", onMouseDown, true);
       el.removeEventListener("mouseover", onMouseOver);
       el.removeEventListener("click", onClick, true);
