@@ -238,7 +238,6 @@ test("an undo after someone else changed the row is refused with 409, says so, a
 });
 
 test("adding and deleting rows undo and redo; a deleted row comes back with its values", async ({ page }) => {
-  page.on("pageerror", (e) => console.log("page error:", e.message));
   await openDemoSchedule(page);
   const tab = page.getByRole("tab", { name: /Surfaces/ });
   const count = async () => Number(/\d+/.exec((await tab.textContent()) ?? "")?.[0]);

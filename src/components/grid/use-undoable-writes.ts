@@ -57,7 +57,15 @@ export function useUndoableWrites(onWritten: (ops: BulkOp[]) => void) {
   /** Sends `ops` as one step; `done` is the confirmation (null: none), `key` the notice's kind. */
   const write = useCallback(
     (ops: BulkOp[], label: string, done: string | null, key: string) => {
-      const step = { label, forward: ops, backward: reverseOps(ops, cached) } as Step;
+      let backward: BulkOp[];
+      try {
+        backward = reverseOps(ops, cached);
+      } catch (error) {
+        // A row gone from this browser's copy (deleted in another tab or by a refused write).
+        notify({ key, tone: "error", message: `${error instanceof Error ? error.message : String(error)}; nothing was saved` });
+        return Promise.resolve();
+      }
+      const step = { label, forward: ops, backward } as Step;
       step.pending = bulk.mutateAsync(ops).then(
         (result) => {
           remember(ops, result);

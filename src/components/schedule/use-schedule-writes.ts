@@ -37,8 +37,11 @@ export function useScheduleWrites() {
   const set = (f: (s: TSchedule) => TSchedule) => qc.setQueryData<TSchedule>(key, (s) => (s ? f(s) : s));
   const inFlight = useRef(new Map<string, number>());
   const track = (ids: string[], d: 1 | -1) => ids.forEach((id) => inFlight.current.set(id, (inFlight.current.get(id) ?? 0) + d));
+  // A delete takes its row out of the cache at once (onMutate runs before the request is built):
+  // its version is kept here until the request is sent.
+  const deleting = useRef(new Map<string, number>());
   const version = (sheet: TSheet, id: string) => {
-    const row = findRow(get(), sheet, id);
+    const row = findRow(get(), sheet, id) ?? (deleting.current.has(id) ? { version: deleting.current.get(id)! } : undefined);
     if (!row) throw new ApiError(404, "not_found", "That row is no longer in the schedule");
     return row.version;
   };
@@ -71,7 +74,11 @@ export function useScheduleWrites() {
       const removed: { sheet: TSheet; row: Row }[] = [];
       for (const o of ops) {
         if (o.op === "update") undo.push({ ...o, values: pick(findRow(before, o.sheet, o.id) ?? {}, Object.keys(o.values)) });
-        if (o.op === "delete") removed.push({ sheet: o.sheet, row: findRow(before, o.sheet, o.id)! });
+        if (o.op === "delete") {
+          const row = findRow(before, o.sheet, o.id);
+          removed.push({ sheet: o.sheet, row: row! });
+          if (row) deleting.current.set(o.id, row.version);
+        }
       }
       track(ops.map((o) => (o.op === "create" ? o.row.id : o.id)), 1);
       set((s) => {
@@ -107,7 +114,10 @@ export function useScheduleWrites() {
         return next;
       });
     },
-    onSettled: (_r, _e, ops) => track(ops.map((o) => (o.op === "create" ? o.row.id : o.id)), -1),
+    onSettled: (_r, _e, ops) => {
+      for (const o of ops) if (o.op === "delete") deleting.current.delete(o.id);
+      track(ops.map((o) => (o.op === "create" ? o.row.id : o.id)), -1);
+    },
   });
 
   /** A form's save of a design case, zone or build-up (no optimism: the form waits and shows field errors). */
