@@ -19,7 +19,7 @@ export * from "./schedule/types";
 export { buildupResistance, ductRunCase, ductSurroundC, insideSurfaceResistance, insideTemperature, outdoorDuctSurroundC, rhCarried, solarOnSurface, surfaceCase } from "./schedule/cases";
 export { insideSurfaceCheck, methodSpread, METHOD_SENSITIVE_MIN_W_M2, METHOD_SENSITIVE_SHARE, MOULD_SURFACE_RH, type InsideSurfaceCheck, type MethodSpread } from "./schedule/checks";
 export { TOTAL_EXCLUSIONS, exclusionsSentence, type Exclusion } from "./schedule/exclusions";
-export { OVER_GROUND_MESSAGE, scheduleResults, type Schedule, type ScheduleResults, type RowResult } from "./schedule/results";
+export { OVER_GROUND_MESSAGE, ductRunRowResult, scheduleResults, surfaceRowResult, zoneTotalsOf, type Schedule, type ScheduleResults, type RowResult, type ZoneTotalsRow } from "./schedule/results";
 export { working } from "./working/index";
 export type { Working, WorkingLine, MethodUsed, WorkingCharts, LocalHPoint, WindPoint, MethodSpreadPoint } from "./working/index";
 export { ductRunRowWorking, insideVerdict, methodName, surfaceRowWorking } from "./working/schedule-row";

@@ -72,9 +72,25 @@ export function ScheduleGrid(props: ScheduleGridProps) {
 
   const habits = useSheetHabits({ api, wrapper, sheet, schedule, system, canEdit, writes: props.habits });
 
+  // Units, errors or the case change what every cell shows; these are rare.
   useEffect(() => {
     api?.refreshCells();
-  }, [api, results, totals, cellErrors, system, props.caseId]);
+  }, [api, cellErrors, system, props.caseId]);
+  // An edit changes a few rows' results: repaint those rows and the totals row, not the whole grid.
+  const shownResults = useRef(results);
+  useEffect(() => {
+    if (!api) return;
+    const before = shownResults.current;
+    shownResults.current = results;
+    if (before === results) return;
+    const nodes = changedRowNodes(api, before, results);
+    if (nodes === "all") api.refreshCells();
+    else if (nodes.length) api.refreshCells({ rowNodes: nodes });
+  }, [api, results]);
+  useEffect(() => {
+    const total = api?.getPinnedBottomRow(0);
+    if (total) api!.refreshCells({ rowNodes: [total] });
+  }, [api, totals]);
 
   // Printing the page prints every row: the grid renders all of them (no virtual scrolling) for print.
   useEffect(() => {
@@ -89,9 +105,14 @@ export function ScheduleGrid(props: ScheduleGridProps) {
     };
   }, [api]);
 
-  // The quick filter reads the results of the chosen case: run it again when either changes.
+  // The quick filter reads the results of the chosen case: run it again when either changes (with
+  // no filter on, an edit need not filter and redraw every row).
+  const filtered = useRef<RowFilter>("all");
   useEffect(() => {
     if (!api) return;
+    const was = filtered.current;
+    filtered.current = rowFilter;
+    if (rowFilter === "all" && was === "all") return;
     api.onFilterChanged();
     props.onShown?.(api.getDisplayedRowCount());
     // eslint-disable-next-line react-hooks/exhaustive-deps
@@ -153,4 +174,16 @@ export function ScheduleGrid(props: ScheduleGridProps) {
     <RangeStatus size={habits.size} headings={habits.headings} onHeadings={habits.setHeadings} canEdit={canEdit} />
     </>
   );
+}
+
+/** Row nodes whose results object changed, or "all" when so many did that one whole refresh is cheaper. */
+function changedRowNodes(api: GridApi<Row>, before: Map<string, RowOutcome>, after: Map<string, RowOutcome>): IRowNode<Row>[] | "all" {
+  const nodes: IRowNode<Row>[] = [];
+  for (const [id, r] of after) {
+    if (before.get(id) === r) continue;
+    if (nodes.length >= 200) return "all";
+    const node = api.getRowNode(id);
+    if (node) nodes.push(node);
+  }
+  return nodes;
 }

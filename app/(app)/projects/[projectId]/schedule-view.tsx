@@ -2,7 +2,6 @@
 
 import { useMemo, useState } from "react";
 import type { TSheet } from "@/schemas/schedule";
-import { resultsFor } from "@/schedule/engine-schedule";
 import { RESULT_COLUMNS } from "@/schedule/result-columns";
 import { SHEET_TITLES } from "@/schedule/sheet-columns";
 import { ImportPanel } from "@/components/grid/import-panel";
@@ -13,6 +12,7 @@ import { useSheetEditing } from "@/components/grid/use-sheet-editing";
 import { Notices } from "@/components/schedule/notices";
 import { useProject, useSchedule } from "@/components/schedule/schedule-context";
 import { UnitsSwitch } from "@/components/schedule/units-switch";
+import { useScheduleResults } from "@/components/schedule/use-schedule-results";
 import { ZoneTotalsPanel } from "@/components/schedule/zone-totals-panel";
 import { needsSetup, ProjectSetup } from "./project-setup";
 import { ScheduleToolbar } from "./schedule-toolbar";
@@ -32,9 +32,8 @@ export function ScheduleView({ initialSheet = "surfaces", initialCase }: { initi
   const editing = useSheetEditing(sheet, schedule);
   const dc = schedule.design_cases.find((d) => d.id === caseId) ?? schedule.design_cases[0];
 
-  // Every edit changes `schedule`, and with it every row's results and the zone totals, here in the browser.
-  const results = useMemo(() => (dc ? resultsFor(schedule, dc) : null), [schedule, dc]);
-  const byRow = useMemo(() => new Map((results ? [...results.surfaces, ...results.duct_runs] : []).map((r) => [r.row_id, r])), [results]);
+  // An edit recalculates the rows it touched and their zones here; whole recalculations run in a worker.
+  const { results, byRow, pending } = useScheduleResults(schedule, dc);
   const filterCounts = useMemo(() => {
     const rows = results?.surfaces ?? [];
     const count = (f: RowFilter) => rows.filter((r) => passesRowFilter(f, r)).length;
@@ -57,7 +56,8 @@ export function ScheduleView({ initialSheet = "surfaces", initialCase }: { initi
   }, [schedule, sheet, byRow]);
 
   // A project without a design case (or with nothing yet for a row to name) is set up first.
-  if (!dc || !results || needsSetup(schedule)) return <ProjectSetup />;
+  // Results may still be on their way from the worker: the grid shows the rows meanwhile.
+  if (!dc || needsSetup(schedule)) return <ProjectSetup />;
 
   return (
     <div className="grid gap-4">
@@ -106,7 +106,13 @@ export function ScheduleView({ initialSheet = "surfaces", initialCase }: { initi
             {sheet === "surfaces" ? " The bands give h_o and Q by the three exterior methods (boundary layer, ISO 6946, McAdams); a row is method-sensitive when they move Q by more than 10 %. T_si and f_Rsi check the inside face against the zone air (ISO 13788)." : ""}
           </p>
         </section>
-        <ZoneTotalsPanel schedule={schedule} results={results} />
+        {results ? (
+          <ZoneTotalsPanel schedule={schedule} results={results} />
+        ) : (
+          <p role="status" className="rounded-panel border border-line bg-surface p-4 text-small text-muted">
+            Calculating {schedule.surfaces.length + schedule.duct_runs.length} rows for {dc.name}…
+          </p>
+        )}
       </div>
     </div>
   );

@@ -1,0 +1,244 @@
+// Browser benchmark of the schedule page (npm run bench:browser): a 5,000-row project (4,000
+// surfaces, 1,000 duct runs, three design cases) imported through the API, opened by the demo
+// consultant in Debian's Chromium (the flags of playwright.config.ts), unthrottled and with the
+// CPU slowed 4× (CDP Emulation.setCPUThrottlingRate). It measures:
+//   - first rows and first results on screen after navigation (median of BENCH_LOADS loads);
+//   - the longest main-thread task (longtask) and animation frame (long-animation-frame) while loading
+//     and while editing, switching and scrolling;
+//   - edit → the row's Q and its zone's totals changed on screen (Enter to the next frame);
+//   - the computation alone (the app's user-timing measures filmsheet:results:*), and in Node
+//     the full recalculation against one changed row's;
+//   - switching design case (change event to the next frame with the new figures);
+//   - fast scrolling (requestAnimationFrame gaps while the grid scrolls 600 px a frame).
+// It prints figures against the goals; it asserts nothing. The app is the production build served
+// by `next start`: its own PostgreSQL cluster (.data/pg-browser) unless BENCH_DATABASE_URL names a
+// database (recreated, migrated, seeded); BENCH_BASE_URL uses an app already serving that database.
+import { createHash, randomBytes } from "node:crypto";
+import { readFileSync } from "node:fs";
+import { cpus, loadavg } from "node:os";
+import { join } from "node:path";
+import { performance } from "node:perf_hooks";
+import knexFactory from "knex";
+import { chromium, type Browser, type Page } from "playwright-core";
+import { ROOT, clusterDir, databaseUrl, ensureBuild, ensureDatabase, ensureNodeModules, ensurePostgres, knex, startCluster, stopCluster } from "../scripts/lib/bootstrap.mjs";
+import { stopService } from "../scripts/lib/proc.mjs";
+import { DEFAULT_DEMO_PASSWORD, portFromEnv, startApp } from "../scripts/lib/services.mjs";
+import { freeTcpPort } from "../test/support/instances";
+import { CHROMIUM_ARGS } from "../playwright.config";
+import { bigProject } from "./lib/big-schedule";
+import { nodeComputation } from "./lib/node-computation";
+
+const PG_PORT = portFromEnv("BENCH_BROWSER_PG_PORT", 54389);
+const LOADS = Number(process.env.BENCH_LOADS ?? 3);
+const EDITS = Number(process.env.BENCH_EDITS ?? 6);
+const SWITCHES = Number(process.env.BENCH_SWITCHES ?? 4);
+const PROBES = readFileSync(join(ROOT, "bench/lib/browser-probes.js"), "utf8");
+const GOALS = { firstRowsMs: 1000, longTaskMs: 100, editMs: 50, computeMs: 16, switchMs: 150, fps: 60 };
+
+type Figures = {
+  firstRows: number[];
+  firstResults: number[];
+  loadLongest: number;
+  loadFrame: number;
+  edits: number[];
+  editCompute: number[];
+  switches: number[];
+  gaps: number[];
+  useLongest: number;
+  useFrame: number;
+};
+
+const median = (xs: number[]) => quantile(xs, 0.5);
+function quantile(xs: number[], q: number): number {
+  if (xs.length === 0) return NaN;
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.min(s.length - 1, Math.max(0, Math.ceil(q * s.length) - 1))]!;
+}
+const sleep = (ms: number) => new Promise((r) => setTimeout(r, ms));
+
+async function main() {
+  ensureNodeModules();
+  let stop = async () => {};
+  let base = process.env.BENCH_BASE_URL;
+  let url = process.env.BENCH_DATABASE_URL;
+  const seedEnv = (u: string) => ({ DATABASE_URL: u, NODE_ENV: "test", DEMO_PASSWORD: process.env.DEMO_PASSWORD ?? DEFAULT_DEMO_PASSWORD });
+  if (!url) {
+    ensurePostgres();
+    const dir = clusterDir("pg-browser");
+    await startCluster({ dir, port: PG_PORT });
+    url = databaseUrl(PG_PORT, "filmsheet_browser");
+    stop = async () => stopCluster(dir);
+  }
+  if (!base) {
+    await ensureDatabase(url, { fresh: true });
+    knex(["migrate:latest"], seedEnv(url));
+    knex(["seed:run"], seedEnv(url));
+    ensureBuild();
+    const port = await freeTcpPort();
+    base = `http://localhost:${port}`;
+    const app = startApp(port, { DATABASE_URL: url, APP_URL: base, AUTH_SECRET: randomBytes(32).toString("base64url"), SMTP_URL: "smtp://127.0.0.1:1?ignoreTLS=true", JOBS_WORKER: "off" });
+    const stopDb = stop;
+    stop = async () => {
+      await stopService(app.service);
+      await stopDb();
+    };
+    await app.ready();
+  }
+  const db = knexFactory({ client: "pg", connection: url, pool: { min: 0, max: 2 } });
+  const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium", args: CHROMIUM_ARGS });
+  try {
+    // A consultant's API token and a paid plan (the free plan stops at 40 rows) for the demo firm.
+    const firm = await db("firms").where({ slug: "tarnbrook-sill" }).first("id");
+    await db("firm_billing").insert({ firm_id: firm.id, subscription_status: "active", subscription_seats: 50 }).onConflict("firm_id").merge();
+    const secret = `fst_${randomBytes(32).toString("base64url")}`;
+    await db("api_tokens").insert({ firm_id: firm.id, name: "bench-browser", role: "consultant", token_hash: createHash("sha256").update(secret).digest("hex"), prefix: secret.slice(0, 10), expires_at: new Date(Date.now() + 86_400_000) });
+    const call = async (method: string, path: string, body?: unknown, type = "application/json") => {
+      const res = await fetch(`${base}${path}`, { method, headers: { authorization: `Bearer ${secret}`, "content-type": type }, body: body === undefined ? undefined : typeof body === "string" ? body : JSON.stringify(body) });
+      const json = await res.json();
+      if (!res.ok) throw new Error(`${method} ${path}: ${res.status} ${JSON.stringify(json).slice(0, 400)}`);
+      return json;
+    };
+    const t0 = performance.now();
+    const project = await bigProject(call, `BROWSER-${Date.now().toString(36).toUpperCase()}`);
+    console.log(`\nbrowser benchmark, Chromium ${browser.version()}, app ${base}; 5,000 rows imported in ${((performance.now() - t0) / 1000).toFixed(1)} s`);
+    const node = await nodeComputation(await call("GET", `/api/projects/${project}/schedule`));
+
+    const state = await signedInState(browser, base);
+    const runs: { rate: number; f: Figures; load: number[] }[] = [];
+    for (const rate of [1, 4]) {
+      const before = loadavg();
+      const f = await measure(browser, state, `${base}/projects/${project}`, rate);
+      runs.push({ rate, f, load: [before[0]!, loadavg()[0]!] });
+    }
+    print(runs, node);
+  } finally {
+    await browser.close();
+    await db.destroy();
+    await stop();
+  }
+}
+
+/** Cookies of the demo consultant, signed in through the form. */
+async function signedInState(browser: Browser, base: string) {
+  const context = await browser.newContext({ baseURL: base });
+  const page = await context.newPage();
+  await page.goto("/sign-in?callbackUrl=%2Fprojects");
+  await page.getByLabel("E-mail", { exact: true }).fill("consultant@demo.filmsheet.test");
+  await page.getByLabel("Password").fill(process.env.DEMO_PASSWORD || DEFAULT_DEMO_PASSWORD);
+  await page.getByRole("button", { name: "Sign in", exact: true }).click();
+  await page.waitForURL(/\/projects$/, { timeout: 30_000 });
+  const state = await context.storageState();
+  await context.close();
+  return state;
+}
+
+async function openPage(browser: Browser, state: Awaited<ReturnType<typeof signedInState>>, rate: number) {
+  const context = await browser.newContext({ storageState: state, viewport: { width: 1440, height: 900 } });
+  await context.addInitScript({ content: PROBES });
+  const page = await context.newPage();
+  const cdp = await context.newCDPSession(page);
+  await cdp.send("Emulation.setCPUThrottlingRate", { rate });
+  return { page, close: () => context.close() };
+}
+
+const firstFigures = (page: Page) => page.evaluate(() => (window as unknown as { __bench: { firstRow: number | null; firstResult: number | null } }).__bench);
+const readSince = (page: Page, since: number) => page.evaluate((s) => (window as unknown as { __probes: { readSince: (s: number) => { measures: { name: string; duration: number }[]; longest: number; longestFrame: number; now: number } } }).__probes.readSince(s), since);
+const now = (page: Page) => page.evaluate(() => performance.now());
+
+async function measure(browser: Browser, state: Awaited<ReturnType<typeof signedInState>>, url: string, rate: number): Promise<Figures> {
+  const f: Figures = { firstRows: [], firstResults: [], loadLongest: 0, loadFrame: 0, edits: [], editCompute: [], switches: [], gaps: [], useLongest: 0, useFrame: 0 };
+  // One load to warm the server's caches, then LOADS measured ones; the last page is used after.
+  let page: Page | undefined;
+  let close = async () => {};
+  for (let i = 0; i <= LOADS; i++) {
+    await close();
+    ({ page, close } = await openPage(browser, state, rate));
+    await page.goto(url);
+    await page.waitForFunction(() => (window as unknown as { __bench: { firstResult: number | null } }).__bench.firstResult !== null, null, { timeout: 120_000 });
+    // Let the page finish what it does after the first results (background cases, idle work).
+    await sleep(3000);
+    if (i === 0) continue;
+    const first = await firstFigures(page);
+    f.firstRows.push(first.firstRow!);
+    f.firstResults.push(first.firstResult!);
+    const r = await readSince(page, 0);
+    f.loadLongest = Math.max(f.loadLongest, r.longest);
+    f.loadFrame = Math.max(f.loadFrame, r.longestFrame);
+  }
+  page = page!;
+  const since = await now(page);
+
+  // Edits: the first row's area, alternately up and down by 10 m², watching its Q and its zone's totals.
+  const rowId = await page.locator(".ag-body .ag-row").first().getAttribute("row-id");
+  const zone = (await page.locator(`.ag-body .ag-row[row-id="${rowId}"] [col-id="zone_id"]`).first().innerText()).trim();
+  const area = page.locator(`.ag-body .ag-row[row-id="${rowId}"] [col-id="area_m2"]`).first();
+  const watched = [`.ag-body .ag-row[row-id="${rowId}"] [col-id="r:Q_W"]`, `tr[data-zone="${zone}"]`];
+  for (let i = 0; i < EDITS; i++) {
+    const a = Number((await area.innerText()).replace(/,/g, ""));
+    await area.dblclick();
+    await page.keyboard.press("ControlOrMeta+a");
+    await page.keyboard.type((i % 2 === 0 ? a + 10 : a - 10).toFixed(2));
+    const t = await now(page);
+    await page.evaluate((selectors) => (window as unknown as { __probes: { armWatch: (a: object) => void } }).__probes.armWatch({ event: "keydown", selectors }), watched);
+    await page.keyboard.press("Enter");
+    f.edits.push(await page.evaluate(() => (window as unknown as { __done: Promise<number> }).__done));
+    const m = (await readSince(page, t)).measures.filter((x) => x.name.startsWith("filmsheet:results"));
+    if (m.length) f.editCompute.push(Math.max(...m.map((x) => x.duration)));
+    await sleep(1000); // the write goes to the server; let it settle before the next edit
+  }
+
+  // Design cases: each switch watches the first row's Q and its zone's line.
+  const select = page.getByLabel("Design case");
+  const cases = await select.locator("option").evaluateAll((os) => os.map((o) => (o as HTMLOptionElement).value));
+  const current = await select.inputValue();
+  let at = cases.indexOf(current);
+  for (let i = 0; i < SWITCHES; i++) {
+    at = (at + 1) % cases.length;
+    await page.evaluate((selectors) => (window as unknown as { __probes: { armWatch: (a: object) => void } }).__probes.armWatch({ event: "change", selectors }), watched);
+    await select.selectOption(cases[at]!);
+    f.switches.push(await page.evaluate(() => (window as unknown as { __done: Promise<number> }).__done));
+    await sleep(1000);
+  }
+
+  // Fast scrolling: 600 px (about 20 rows) a frame for 150 frames.
+  f.gaps = await page.evaluate(() => (window as unknown as { __probes: { fastScroll: (a: object) => Promise<number[]> } }).__probes.fastScroll({ frames: 150, px: 600 }));
+  const r = await readSince(page, since);
+  f.useLongest = r.longest;
+  f.useFrame = r.longestFrame;
+  await close();
+  return f;
+}
+
+function print(runs: { rate: number; f: Figures; load: number[] }[], node: Awaited<ReturnType<typeof nodeComputation>>) {
+  const ms = (v: number) => (Number.isFinite(v) ? `${v.toFixed(0)} ms` : "n/a");
+  const mm = (xs: number[]) => (xs.length ? `${ms(median(xs))} (max ${ms(Math.max(...xs))})` : "n/a (not instrumented)");
+  const fps = (gaps: number[]) => {
+    const mean = gaps.reduce((a, b) => a + b, 0) / gaps.length;
+    return `${(1000 / mean).toFixed(0)} fps (frame p95 ${quantile(gaps, 0.95).toFixed(0)} ms, max ${Math.max(...gaps).toFixed(0)} ms)`;
+  };
+  const lines: [string, (f: Figures) => string, string][] = [
+    ["first rows on screen", (f) => mm(f.firstRows), `≤ ${GOALS.firstRowsMs} ms`],
+    ["first results (Q) on screen", (f) => mm(f.firstResults), ""],
+    ["longest task / frame while loading", (f) => `${ms(f.loadLongest)} / ${ms(f.loadFrame)}`, `≤ ${GOALS.longTaskMs} ms`],
+    ["edit → row and zone totals on screen", (f) => mm(f.edits), `≤ ${GOALS.editMs} ms`],
+    ["  computation of an edit (in the page)", (f) => mm(f.editCompute), `≤ ${GOALS.computeMs} ms`],
+    ["switching design case", (f) => mm(f.switches), `≤ ${GOALS.switchMs} ms`],
+    ["fast scrolling", (f) => fps(f.gaps), `${GOALS.fps} fps`],
+    ["longest task / frame editing, switching, scrolling", (f) => `${ms(f.useLongest)} / ${ms(f.useFrame)}`, `≤ ${GOALS.longTaskMs} ms`],
+  ];
+  const w0 = Math.max(...lines.map((l) => l[0].length));
+  const cols = runs.map((r) => lines.map((l) => l[1](r.f)));
+  const w = runs.map((_, i) => Math.max(14, ...cols[i]!.map((c) => c.length)));
+  const row = (cells: string[]) => console.log(cells.map((c, i) => c.padEnd(i === 0 ? w0 : (w[i - 1] ?? 10))).join("  "));
+  console.log("");
+  row(["5,000 rows", ...runs.map((r) => (r.rate === 1 ? "unthrottled" : `CPU ${r.rate}× slower`)), "goal (unthrottled)"]);
+  lines.forEach((l, j) => row([l[0], ...cols.map((c) => c[j]!), l[2]]));
+  console.log(`\nin Node (same engine, one core): full recalculation of one case ${node.fullMs.toFixed(0)} ms; one changed row and its zone ${node.rowMs.toFixed(2)} ms`);
+  console.log(`machine: ${cpus().length} cores; load average ${runs.map((r) => `${r.load[0]!.toFixed(1)}→${r.load[1]!.toFixed(1)} (${r.rate}×)`).join(", ")} — shared: other work inflates every figure`);
+  console.log("CPU throttling slows the page's main thread; a Web Worker's thread is not slowed.");
+}
+
+main().catch((error) => {
+  console.error(error);
+  process.exit(1);
+});
