@@ -16,9 +16,9 @@
   observe("longtask", b.long);
   observe("long-animation-frame", b.loaf);
   const first = new MutationObserver(() => {
-    if (b.firstRow === null && document.querySelector(".ag-body .ag-row")) b.firstRow = performance.now();
+    if (b.firstRow === null && document.querySelector(".ag-grid-scrolling-rows .ag-row")) b.firstRow = performance.now();
     if (b.firstResult === null) {
-      const q = document.querySelector('.ag-body .ag-row [col-id="r:Q_W"]');
+      const q = document.querySelector('.ag-grid-scrolling-rows .ag-row [col-id="r:Q_W"]');
       if (q && (q.textContent ?? "").trim() !== "") b.firstResult = performance.now();
     }
     if (b.firstRow !== null && b.firstResult !== null) first.disconnect();
@@ -71,7 +71,7 @@
     },
     /** Scrolls the grid `px` per frame for `frames` frames; resolves with the gaps between frames (ms). */
     fastScroll({ frames, px }) {
-      const vp = document.querySelector(".ag-body-viewport");
+      const vp = document.querySelector(".ag-grid-viewport") ?? document.querySelector(".ag-body-viewport");
       return new Promise((resolve) => {
         const gaps = [];
         let last = -1;

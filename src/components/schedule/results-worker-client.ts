@@ -6,6 +6,7 @@
 import type { RowResult, ScheduleResults } from "@/calc/index";
 import type { TDesignCase, TSchedule } from "@/schemas/schedule";
 import type { FromWorker, ToWorker } from "@/schedule/results-protocol";
+import { startResultsWorker } from "@/schedule/results-worker";
 
 export type OnCase = (schedule: TSchedule, dc: TDesignCase, results: ScheduleResults, ms: number) => void;
 
@@ -21,9 +22,11 @@ export class ResultsWorkerClient {
   private cases = new Map<string, TDesignCase>();
   private parts = new Map<string, { surfaces: RowResult[]; ducts: RowResult[] }>();
 
-  constructor(private onCase: OnCase) {
-    this.worker = new Worker(new URL("../../schedule/results.worker.ts", import.meta.url));
+  /** `onFail`: the worker could not start or broke; the page then computes in place. */
+  constructor(private onCase: OnCase, onFail: () => void) {
+    this.worker = startResultsWorker();
     this.worker.onmessage = (e: MessageEvent<FromWorker>) => this.receive(e.data);
+    this.worker.onerror = () => onFail();
   }
 
   /** Whether a case is being computed (for any schedule). */

@@ -1,6 +1,6 @@
 "use client";
 
-import { useEffect, useMemo, useRef, useState } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import type { RowResult, ScheduleResults } from "@/calc/index";
 import type { TDesignCase, TSchedule } from "@/schemas/schedule";
 import { resultsFor } from "@/schedule/engine-schedule";
@@ -47,7 +47,8 @@ export function useScheduleResults(schedule: TSchedule, dc: TDesignCase | undefi
   const seen = useRef({ order: new WeakMap<TSchedule, number>(), n: 0 }).current;
   if (!seen.order.has(schedule)) seen.order.set(schedule, ++seen.n);
   const rows = schedule.surfaces.length + schedule.duct_runs.length;
-  const inline = rows <= INLINE_ROWS || typeof Worker === "undefined";
+  const [broken, setBroken] = useState(false);
+  const inline = rows <= INLINE_ROWS || broken || typeof Worker === "undefined";
 
   const client = () =>
     (worker.current ??= new ResultsWorkerClient((s, c, results, _ms) => {
@@ -57,7 +58,7 @@ export function useScheduleResults(schedule: TSchedule, dc: TDesignCase | undefi
       if (!prev || (seen.order.get(s) ?? 0) >= (seen.order.get(prev.schedule) ?? 0)) cache.set(c.id, caseResultsOf(s, c, results));
       measure("filmsheet:results:receive", t);
       setArrived((n) => n + 1);
-    }));
+    }, () => setBroken(true)));
   useEffect(() => () => worker.current?.close(), []);
 
   // Every edit recalculates here only what it touched; arrived counts the worker's answers.
@@ -98,7 +99,7 @@ export function useScheduleResults(schedule: TSchedule, dc: TDesignCase | undefi
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [schedule, dc, shown.pending, inline]);
 
-  const resultsOf = (c: TDesignCase) => {
+  const resultsOf = useCallback((c: TDesignCase) => {
     if (c.id === dc?.id) return shown.state?.results;
     const up = updateCaseResults(cache.get(c.id), schedule, c);
     if (up) {
@@ -111,7 +112,8 @@ export function useScheduleResults(schedule: TSchedule, dc: TDesignCase | undefi
       return state.results;
     }
     return undefined;
-  };
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [schedule, dc, shown, inline]);
 
   return { results: shown.state?.results ?? null, byRow: shown.state?.byRow ?? EMPTY, pending: shown.pending, resultsOf };
 }

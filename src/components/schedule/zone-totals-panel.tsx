@@ -2,7 +2,7 @@
 
 import { useDeferredValue, useMemo, useState } from "react";
 import { caseBreakdowns, exclusionsSentence, scheduleBreakdowns, type ScheduleResults } from "@/calc/index";
-import type { TSchedule } from "@/schemas/schedule";
+import type { TDesignCase, TSchedule } from "@/schemas/schedule";
 import { engineDesignCase, engineSchedule, resultsFor } from "@/schedule/engine-schedule";
 import { formatQuantity } from "@/units/format";
 import { toDisplay, unitLabel } from "@/units/units";
@@ -19,7 +19,7 @@ import { CaseBreakdownTables, ZonePeaks } from "./zone-breakdowns";
  * of them, each zone's governing figure in every case, and what every total leaves out; beneath,
  * the case's totals by orientation, element type and build-up, and each zone's peak cases.
  */
-export function ZoneTotalsPanel({ schedule, results }: { schedule: TSchedule; results: ScheduleResults }) {
+export function ZoneTotalsPanel({ schedule, results, resultsOf }: { schedule: TSchedule; results: ScheduleResults; resultsOf?: (dc: TDesignCase) => ScheduleResults | undefined }) {
   const { system } = useProject();
   const W = unitLabel("power", system);
   const Wm2 = unitLabel("heat_flux", system);
@@ -31,10 +31,14 @@ export function ZoneTotalsPanel({ schedule, results }: { schedule: TSchedule; re
   const later = useDeferredValue(schedule);
   const all = useMemo(() => {
     if (!open) return null;
-    const perCase = later.design_cases.map((dc) => ({ dc, results: resultsFor(later, dc) }));
-    const b = scheduleBreakdowns(engineSchedule(later), later.design_cases.map(engineDesignCase), perCase.map((c) => panelCaseRows(c.results)));
+    // resultsOf: the page's results of each case (kept current, computed in its worker) when it has
+    // them; they belong to the newest schedule, so the breakdowns read that one too.
+    const from = resultsOf ? schedule : later;
+    const perCase = from.design_cases.map((dc) => ({ dc, results: resultsOf?.(dc) ?? resultsFor(from, dc) }));
+    const b = scheduleBreakdowns(engineSchedule(from), from.design_cases.map(engineDesignCase), perCase.map((c) => panelCaseRows(c.results)));
     return { byCase: perCase.map(({ dc, results }) => ({ dc, zones: results.zones })), peaks: b.peaks };
-  }, [later, open]);
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [later, open, resultsOf]);
   const byCase = all?.byCase ?? [];
   const current = schedule.design_cases.find((d) => d.id === results.design_case_id);
   const breakdowns = useMemo(() => (current ? caseBreakdowns(engineSchedule(schedule), engineDesignCase(current), panelCaseRows(results)) : null), [schedule, current, results]);

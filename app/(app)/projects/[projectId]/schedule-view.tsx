@@ -33,7 +33,7 @@ export function ScheduleView({ initialSheet = "surfaces", initialCase }: { initi
   const dc = schedule.design_cases.find((d) => d.id === caseId) ?? schedule.design_cases[0];
 
   // An edit recalculates the rows it touched and their zones here; whole recalculations run in a worker.
-  const { results, byRow, pending } = useScheduleResults(schedule, dc);
+  const { results, byRow, pending, resultsOf } = useScheduleResults(schedule, dc);
   const filterCounts = useMemo(() => {
     const rows = results?.surfaces ?? [];
     const count = (f: RowFilter) => rows.filter((r) => passesRowFilter(f, r)).length;
@@ -81,7 +81,7 @@ export function ScheduleView({ initialSheet = "surfaces", initialCase }: { initi
       {importing && canEdit ? <ImportPanel sheet={sheet} onClose={() => setImporting(false)} /> : null}
       {/* The totals sit beside the grid only on wide screens: on a laptop the grid needs the width. */}
       <div className="grid gap-4 2xl:grid-cols-[minmax(0,1fr)_20rem]">
-        <section aria-label={`${SHEET_TITLES[sheet]} sheet`} className="min-w-0">
+        <section aria-label={`${SHEET_TITLES[sheet]} sheet`} aria-busy={pending} className="min-w-0">
           {sheet === "surfaces" ? <RowFilterBar value={rowFilter} onChange={setRowFilter} counts={filterCounts} shown={shown} total={schedule.surfaces.length} /> : null}
           <ScheduleGrid
             key={sheet}
@@ -107,7 +107,7 @@ export function ScheduleView({ initialSheet = "surfaces", initialCase }: { initi
           </p>
         </section>
         {results ? (
-          <ZoneTotalsPanel schedule={schedule} results={results} />
+          <ZoneTotalsPanel schedule={schedule} results={results} resultsOf={resultsOf} />
         ) : (
           <p role="status" className="rounded-panel border border-line bg-surface p-4 text-small text-muted">
             Calculating {schedule.surfaces.length + schedule.duct_runs.length} rows for {dc.name}…
