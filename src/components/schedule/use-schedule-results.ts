@@ -40,7 +40,7 @@ function measure(name: string, start: number) {
  */
 export function useScheduleResults(schedule: TSchedule, dc: TDesignCase | undefined): ShownResults {
   const cache = useRef(new Map<string, CaseResults>()).current;
-  const worker = useRef<ResultsWorkerClient | null>(null);
+  const worker = useRef<Pick<ResultsWorkerClient, "pending" | "request" | "close"> | null>(null);
   const [arrived, setArrived] = useState(0);
   // The order in which this page saw its schedules: an answer made from an older schedule than
   // the results held for its case is not wanted.
@@ -50,15 +50,25 @@ export function useScheduleResults(schedule: TSchedule, dc: TDesignCase | undefi
   const [broken, setBroken] = useState(false);
   const inline = rows <= INLINE_ROWS || broken || typeof Worker === "undefined";
 
-  const client = () =>
-    (worker.current ??= new ResultsWorkerClient((s, c, results, _ms) => {
+  const client = () => (worker.current ??= startClient());
+  const startClient = () => {
+    try {
+      return makeClient();
+    } catch {
+      // A browser or policy that refuses the worker: compute in the page instead.
+      setBroken(true);
+      return new InlineClient();
+    }
+  };
+  const makeClient = () =>
+    new ResultsWorkerClient((s, c, results, _ms) => {
       const t = performance.now();
       const prev = cache.get(c.id);
       // Keep whichever is newer: results made from an older schedule than those held are dropped.
       if (!prev || (seen.order.get(s) ?? 0) >= (seen.order.get(prev.schedule) ?? 0)) cache.set(c.id, caseResultsOf(s, c, results));
       measure("filmsheet:results:receive", t);
       setArrived((n) => n + 1);
-    }, () => setBroken(true)));
+    }, () => setBroken(true));
   useEffect(() => () => worker.current?.close(), []);
 
   // Every edit recalculates here only what it touched; arrived counts the worker's answers.
@@ -116,4 +126,13 @@ export function useScheduleResults(schedule: TSchedule, dc: TDesignCase | undefi
   }, [schedule, dc, shown, inline]);
 
   return { results: shown.state?.results ?? null, byRow: shown.state?.byRow ?? EMPTY, pending: shown.pending, resultsOf };
+}
+
+/** Stands in for the worker when none could be started: asks for nothing (the page computes in place). */
+class InlineClient {
+  pending() {
+    return false;
+  }
+  request() {}
+  close() {}
 }
