@@ -107,7 +107,7 @@ export function ScheduleGrid(props: ScheduleGridProps) {
 
   // The quick filter reads the results of the chosen case: run it again when either changes (with
   // no filter on, an edit need not filter and redraw every row).
-  const filtered = useRef<RowFilter>("all");
+  const filtered = useRef<RowFilter | null>(null);
   useEffect(() => {
     if (!api) return;
     const was = filtered.current;
