@@ -127,10 +127,10 @@ test.describe("on the paid plan", () => {
   });
 });
 
-test("switching the project to IP units shows °F and Btu/h", async ({ page }) => {
+test("switching to IP units (the person's own view) shows °F and Btu/h", async ({ page }) => {
   await openDemoSchedule(page);
   await expect(page.locator('.ag-header-cell[col-id="r:Q_W"]')).toContainText("Heat loss (W)");
-  const saved = page.waitForResponse((r) => /\/api\/projects\/[^/]+$/.test(r.url()) && r.request().method() === "PATCH");
+  const saved = page.waitForResponse((r) => r.url().endsWith("/api/me/preferences") && r.request().method() === "PATCH");
   await page.getByRole("radio", { name: "IP" }).click();
   expect((await saved).status()).toBe(200);
   await expect(page.locator('.ag-header-cell[col-id="r:Q_W"]')).toContainText("Heat loss (Btu/h)");
@@ -141,7 +141,7 @@ test("switching the project to IP units shows °F and Btu/h", async ({ page }) =
   await page.getByRole("navigation", { name: "Project" }).getByRole("link", { name: "Zones" }).click();
   // The first zone by name, Community room, heats to 20 °C: 20 × 9/5 + 32 = 68 °F.
   await expect(page.getByLabel("Heating set point (°F)").first()).toHaveValue("68");
-  // The choice is the project's: it holds after a reload. Back to SI for the other tests.
+  // The choice is the person's: it holds after a reload. Back to SI for the other tests.
   await page.reload();
   await expect(page.getByLabel("Heating set point (°F)").first()).toBeVisible();
   await page.getByRole("navigation", { name: "Project" }).getByRole("link", { name: "Schedule" }).click();

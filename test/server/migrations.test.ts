@@ -35,6 +35,7 @@ const TABLES = [
   "sessions",
   "sign_in_attempts",
   "surfaces",
+  "user_preferences",
   "user_sessions",
   "users",
   "verification_token",

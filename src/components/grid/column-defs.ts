@@ -18,6 +18,16 @@ import { TOTALS_ID, cellKey, type GridContext } from "./grid-context";
 type P = ValueGetterParams<Row, unknown> & { context: GridContext };
 type F = ValueFormatterParams<Row, unknown> & { context: GridContext };
 
+/**
+ * A column wide enough for the longest word of its title on one line beside the filter button
+ * (≈ 6.6 px a letter in the 12 px heading, 42 px of padding and button): a word the browser
+ * cannot hyphenate would otherwise break mid-letter ("Absorpt|ance").
+ */
+export function fitTitle(title: string, base: number): number {
+  const longest = Math.max(...title.split(/\s+/).map((w) => w.length));
+  return Math.max(base, Math.ceil(longest * 6.6 + 42));
+}
+
 const isTotals = (p: { node?: { rowPinned?: string | null } | null; data?: Row }) => p.data?.id === TOTALS_ID;
 
 /** The value a row inherits when an override is blank (the build-up's absorptance or emissivity). */
@@ -42,14 +52,15 @@ function inputColumn(col: SheetColumn, s: TSchedule, system: UnitSystem): ColDef
   };
   switch (col.kind) {
     case "text":
-      return { ...base, field: col.field as never, width: 200, pinned: "left", filter: "agTextColumnFilter", cellEditor: "agTextCellEditor" };
+      return { ...base, field: col.field as never, width: 176, pinned: "left", filter: "agTextColumnFilter", cellEditor: "agTextCellEditor" };
     case "number": {
       const q = col.spec!.quantity;
       const d = decimals(q, col.spec!.digits, system);
       return {
         ...base,
         type: "numericColumn",
-        width: 104,
+        // Narrow: the headings wrap onto two lines, and a laptop then shows inputs and results together.
+        width: fitTitle(col.title, 92),
         filter: "agNumberColumnFilter",
         cellEditor: "agNumberCellEditor",
         cellEditorParams: { showStepperButtons: false },
@@ -75,7 +86,7 @@ function inputColumn(col: SheetColumn, s: TSchedule, system: UnitSystem): ColDef
     case "buildup": {
       const list = col.kind === "zone" ? s.zones : s.buildups;
       const refData = Object.fromEntries(list.map((z) => [z.id, z.name]));
-      return { ...base, field: col.field as never, width: col.kind === "zone" ? 140 : 190, refData, filter: "agTextColumnFilter", cellEditor: "agSelectCellEditor", cellEditorParams: { values: list.map((z) => z.id) } };
+      return { ...base, field: col.field as never, width: col.kind === "zone" ? 128 : 168, refData, filter: "agTextColumnFilter", cellEditor: "agSelectCellEditor", cellEditorParams: { values: list.map((z) => z.id) } };
     }
     case "choice": {
       const blank = col.blankLabel ? `${col.blankLabel} (${labelOf(col.options!, s.project.default_method)})` : undefined;
@@ -121,9 +132,7 @@ function resultColumn(c: ResultColumn, system: UnitSystem): ColDef<Row> {
     headerTooltip: c.key === "Q_W" ? Q_SIGN[c.title] ?? resultHeader(c, system) : resultHeader(c, system),
     headerClass: "fs-computed-header",
     editable: false,
-    width: c.width ?? (c.quantity ? 104 : 112),
-    // The heat flow stays in view at the right while the inputs scroll.
-    pinned: c.key === "Q_W" ? "right" : undefined,
+    width: c.width ?? fitTitle(c.title, c.quantity ? 92 : 112),
     type: numeric || c.band ? "numericColumn" : undefined,
     filter: numeric ? "agNumberColumnFilter" : "agTextColumnFilter",
     valueGetter: (p: P) => {
@@ -148,7 +157,6 @@ const notesColumn: ColDef<Row> = {
   editable: false,
   sortable: true,
   width: 136,
-  pinned: "right",
   valueGetter: (p: P) => {
     if (!p.data || isTotals(p)) return null;
     const r = p.context.results.get(p.data.id);
@@ -178,7 +186,6 @@ const workingColumn: ColDef<Row> = {
   sortable: false,
   filter: false,
   width: 96,
-  pinned: "right",
   // ag-grid-react renders a function cell renderer as a React component.
   cellRenderer: (p: ICellRendererParams<Row> & { context: GridContext }) =>
     !p.data || isTotals(p)
@@ -186,6 +193,12 @@ const workingColumn: ColDef<Row> = {
       : createElement("a", { href: workingPath(p.context.projectId, p.context.sheet, p.data.id, p.context.caseId), className: "fs-working-link", "aria-label": `Working of ${String(p.data.label)}` }, "Working ›"),
 };
 
-export function sheetColumnDefs(sheet: TSheet, s: TSchedule, system: UnitSystem): ColDef<Row>[] {
-  return [...SHEET_COLUMNS[sheet].map((c) => inputColumn(c, s, system)), ...RESULT_COLUMNS[sheet].map((c) => resultColumn(c, system)), notesColumn, workingColumn];
+/**
+ * Only the label is pinned (at the left): on a laptop every pinned column narrows the part that
+ * scrolls, and the column sets keep the columns a person needs side by side instead.
+ * `visible`: the column set's ids; every column when absent.
+ */
+export function sheetColumnDefs(sheet: TSheet, s: TSchedule, system: UnitSystem, visible?: ReadonlySet<string>): ColDef<Row>[] {
+  const all = [...SHEET_COLUMNS[sheet].map((c) => inputColumn(c, s, system)), ...RESULT_COLUMNS[sheet].map((c) => resultColumn(c, system)), notesColumn, workingColumn];
+  return visible ? all.map((c) => ({ ...c, hide: !visible.has(c.colId!) })) : all;
 }

@@ -44,6 +44,8 @@ export interface ScheduleGridProps {
   caseId?: string;
   /** Fills, clears, undo and redo of the range selection (use-sheet-habits). */
   habits?: HabitWrites;
+  /** The column set's column ids; every column when absent. */
+  visibleColumns?: ReadonlySet<string>;
 }
 
 /**
@@ -62,11 +64,12 @@ export function ScheduleGrid(props: ScheduleGridProps) {
   Object.assign(context, { projectId: schedule.project.id, sheet, system, canEdit, results, rowFilter, cellErrors, totals, rowCount: rows.length, buildups: new Map(schedule.buildups.map((b) => [b.id, b])), caseId: props.caseId });
 
   const { zones, buildups, project } = schedule;
+  const visible = props.visibleColumns;
   const columnDefs = useMemo(
-    () => sheetColumnDefs(sheet, { ...schedule, zones, buildups, project } as TSchedule, system),
-    // Rebuilt when the pick-lists, the default method or the units change, not on every edit.
+    () => sheetColumnDefs(sheet, { ...schedule, zones, buildups, project } as TSchedule, system, visible),
+    // Rebuilt when the pick-lists, the default method, the units or the column set change, not on every edit.
     // eslint-disable-next-line react-hooks/exhaustive-deps
-    [sheet, zones, buildups, project.default_method, system],
+    [sheet, zones, buildups, project.default_method, system, visible],
   );
   const pinned = useMemo(() => [{ id: TOTALS_ID, label: `Total of ${rows.length} ${rows.length === 1 ? "row" : "rows"}` } as unknown as Row], [rows.length]);
 
@@ -144,7 +147,7 @@ export function ScheduleGrid(props: ScheduleGridProps) {
 
   return (
     <>
-    <div ref={wrapper} className="fs-grid h-[34rem] min-w-0 print:h-auto" onPaste={onPaste} data-sheet={sheet} {...habits.scopeProps}>
+    <div ref={wrapper} className="fs-grid h-full min-h-[18rem] min-w-0 print:h-auto" onPaste={onPaste} data-sheet={sheet} {...habits.scopeProps}>
       <style>{habits.css}</style>
       <AgGridReact<Row>
         theme={gridTheme}

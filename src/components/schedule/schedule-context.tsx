@@ -2,9 +2,11 @@
 
 import { QueryClient, QueryClientProvider, useQuery } from "@tanstack/react-query";
 import { createContext, useCallback, useContext, useMemo, useState, type ReactNode } from "react";
+import type { TPreferences } from "@/schemas/preferences";
 import type { TSchedule } from "@/schemas/schedule";
 import type { UnitSystem } from "@/units/units";
 import { api } from "./api-client";
+import { PREFERENCES_KEY, usePreferences } from "./use-preferences";
 
 export interface Notice {
   id: number;
@@ -18,9 +20,11 @@ export interface Notice {
 interface ProjectContext {
   projectId: string;
   canEdit: boolean;
-  /** Units shown: the project's, or a reader's own choice for this visit. */
+  /** Units shown: the person's own choice, or the project's when they have not chosen. */
   system: UnitSystem;
-  /** A reader's own choice for this visit; null follows the project. */
+  /** The project's own units: the default view, and the units of its reports and exports. */
+  projectSystem: UnitSystem;
+  /** The person's own choice, saved with their view settings (never a change to the project); null follows the project. */
   setSystem: (s: UnitSystem | null) => void;
   notices: Notice[];
   notify: (n: Omit<Notice, "id">) => void;
@@ -34,9 +38,12 @@ export const scheduleKey = (projectId: string) => ["schedule", projectId] as con
  * The project's data for every page under /projects/[id]: one TanStack Query cache seeded with
  * the schedule the server rendered, the units shown, and the notices (errors and confirmations).
  */
-export function ScheduleProvider({ initial, canEdit, children }: { initial: TSchedule; canEdit: boolean; children: ReactNode }) {
+export function ScheduleProvider({ initial, preferences, canEdit, children }: { initial: TSchedule; preferences: TPreferences; canEdit: boolean; children: ReactNode }) {
   const [client] = useState(() => new QueryClient({ defaultOptions: { queries: { staleTime: 30_000, refetchOnWindowFocus: false } } }));
-  useState(() => client.setQueryData(scheduleKey(initial.project.id), initial));
+  useState(() => {
+    client.setQueryData(scheduleKey(initial.project.id), initial);
+    client.setQueryData(PREFERENCES_KEY, preferences);
+  });
   return (
     <QueryClientProvider client={client}>
       <ProjectState projectId={initial.project.id} canEdit={canEdit} unitSystem={initial.project.unit_system}>
@@ -47,7 +54,6 @@ export function ScheduleProvider({ initial, canEdit, children }: { initial: TSch
 }
 
 function ProjectState({ projectId, canEdit, unitSystem, children }: { projectId: string; canEdit: boolean; unitSystem: UnitSystem; children: ReactNode }) {
-  const [override, setOverride] = useState<UnitSystem | null>(null);
   const [notices, setNotices] = useState<Notice[]>([]);
   const { data } = useQuery({ queryKey: scheduleKey(projectId), queryFn: () => api<TSchedule>("GET", `/api/projects/${projectId}/schedule`) });
   const stored = data?.project.unit_system ?? unitSystem;
@@ -59,9 +65,12 @@ function ProjectState({ projectId, canEdit, unitSystem, children }: { projectId:
     (idOrKey: number | string) => setNotices((all) => (all.some((n) => n.id === idOrKey || n.key === idOrKey) ? all.filter((n) => n.id !== idOrKey && n.key !== idOrKey) : all)),
     [],
   );
+  const { prefs, update } = usePreferences((message) => notify({ tone: "error", message: `Your view settings were not saved: ${message}` }));
+  const own = prefs.unit_system;
+  const setSystem = useCallback((s: UnitSystem | null) => update({ unit_system: s }), [update]);
   const value = useMemo(
-    () => ({ projectId, canEdit, system: override ?? stored, setSystem: setOverride, notices, notify, dismiss }),
-    [projectId, canEdit, override, stored, notices, notify, dismiss],
+    () => ({ projectId, canEdit, system: own ?? stored, projectSystem: stored, setSystem, notices, notify, dismiss }),
+    [projectId, canEdit, own, stored, setSystem, notices, notify, dismiss],
   );
   return <Ctx.Provider value={value}>{children}</Ctx.Provider>;
 }

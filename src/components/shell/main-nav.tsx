@@ -28,6 +28,7 @@ export function MainNav() {
             key={item.href}
             href={item.href}
             aria-current={current ? "page" : undefined}
+            title={item.label}
             className="group flex items-center gap-2.5 rounded-chip border-l-2 border-transparent px-3 py-2 text-small font-medium text-muted hover:bg-sunken hover:text-ink aria-[current=page]:border-accent aria-[current=page]:bg-accent-soft aria-[current=page]:text-ink"
           >
             {item.icon}

@@ -46,6 +46,9 @@ export const ENTRIES: MatrixEntry[] = [
   },
   // Signs out the caller's other sessions (each principal here has one); a token is no person.
   { file: "me/sessions/route.ts", method: "DELETE", request: async () => ({ path: "/api/me/sessions" }), expect: { ...anyMember(200), admin_token: 403 } },
+  // One's own view settings: a token reads the defaults but, being no person, changes none.
+  { file: "me/preferences/route.ts", method: "GET", request: async () => ({ path: "/api/me/preferences" }), expect: anyMember(200), isolation: noDemoData },
+  { file: "me/preferences/route.ts", method: "PATCH", request: async () => ({ path: "/api/me/preferences", body: { zone_totals_collapsed: false } }), expect: { ...anyMember(200), admin_token: 403 } },
   {
     file: "calc/route.ts",
     method: "POST",

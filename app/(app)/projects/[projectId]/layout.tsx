@@ -6,6 +6,7 @@ import { requirePageActor } from "@/server/auth/get-viewer";
 import { AppError } from "@/server/http/app-error";
 import { DRAFT_READERS } from "@/server/checking/roles";
 import { getProjectOrThrow } from "@/server/services/get-project";
+import { getPreferences } from "@/server/services/get-preferences";
 import { getScheduleOrThrow } from "@/server/services/get-schedule";
 import { ScheduleProvider } from "@/components/schedule/schedule-context";
 import { IssuedProjectHeader } from "./_checking/issued-project-header";
@@ -34,10 +35,11 @@ export default async function ProjectLayout({ children, params }: { children: Re
     if (error instanceof AppError && error.code === "not_found") notFound();
     throw error;
   });
+  const preferences = await getPreferences(actor);
   return (
     // Keyed by project: moving from one project to another starts a fresh cache seeded with its schedule.
     // An archived project is read-only for everyone (the server refuses its changes as well).
-    <ScheduleProvider key={projectId} initial={schedule} canEdit={hasAnyRole(actor, ["consultant"]) && schedule.project.archived_at === null}>
+    <ScheduleProvider key={projectId} initial={schedule} preferences={preferences} canEdit={hasAnyRole(actor, ["consultant"]) && schedule.project.archived_at === null}>
       <div className="fs-project grid gap-5">
         <ProjectHeader canReport={hasAnyRole(actor, ["admin", "consultant", "checker"])} />
         {children}

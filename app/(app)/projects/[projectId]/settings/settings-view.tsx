@@ -14,13 +14,19 @@ const FIELDS: FieldDef[] = [
   { name: "altitude_m", label: "Site altitude", kind: "number", spec: PROJECT_NUMBERS.altitude_m, hint: "Sets the air pressure the properties are taken at" },
   { name: "terrain", label: "Terrain around the site", kind: "select", options: TERRAIN_OPTIONS, hint: "Roughness that slows the wind near the ground" },
   { name: "wind_law", label: "Wind profile", kind: "select", options: WIND_LAW_OPTIONS },
-  { name: "unit_system", label: "Units", kind: "select", options: UNIT_OPTIONS, hint: "Stored in SI; shown, typed, imported and exported in these" },
+  {
+    name: "unit_system",
+    label: "Project units",
+    kind: "select",
+    options: UNIT_OPTIONS,
+    hint: "The units of the project's reports and exports, and the view of anyone who has not picked their own (the SI/IP switch on the schedule is each person's own view). Values are stored in SI",
+  },
   { name: "default_method", label: "Exterior convection method", kind: "select", options: METHOD_OPTIONS, hint: "For every surface without its own" },
 ];
 
 export function SettingsView({ isAdmin }: { isAdmin: boolean }) {
   const s = useSchedule();
-  const { system, canEdit, setSystem } = useProject();
+  const { system, canEdit } = useProject();
   const { project } = useScheduleWrites();
   const st = useSaveState();
   const router = useRouter();
@@ -34,7 +40,6 @@ export function SettingsView({ isAdmin }: { isAdmin: boolean }) {
     if (Object.keys(errors).length) return st.setMessage({ tone: "error", text: "Not saved: fix the fields marked" });
     try {
       await project.mutateAsync(values);
-      setSystem(null);
       st.setMessage({ tone: "ok", text: "Saved" });
     } catch (error) {
       const { message, fields } = serverErrors(error);
