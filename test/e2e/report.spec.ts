@@ -1,5 +1,7 @@
 // The consultant asks for the demo project's draft calculation report on the project page, follows
 // the report job's progress bar and downloads the PDF.
+import { writeFileSync } from "node:fs";
+import { join } from "node:path";
 import { expect, test } from "@playwright/test";
 import { signIn } from "./support/sign-in";
 
@@ -23,6 +25,8 @@ test("the consultant follows the draft report's progress and downloads the PDF",
   const pdf = Buffer.concat(chunks);
   expect(pdf.subarray(0, 5).toString("latin1")).toBe("%PDF-");
   expect(pdf.length).toBeGreaterThan(50_000);
+  // For people to read it as pages (pdftoppm), as the screenshots of other specs.
+  if (process.env.E2E_SHOTS_DIR) writeFileSync(join(process.env.E2E_SHOTS_DIR, "TS-2417-draft-report.pdf"), pdf);
 });
 
 test("the viewer is not offered the draft report", async ({ page }) => {
