@@ -5,7 +5,7 @@
 // saved), and runs again a write that never reached the database.
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import knexFactory, { type Knex } from "knex";
-import { db } from "@/server/db/knex";
+import { createPool, db } from "@/server/db/knex";
 import { isConnectionError, isNotConnectedError } from "@/server/db/connection-error";
 import { route } from "@/server/http/route";
 import { action } from "@/server/http/action";
@@ -233,5 +233,55 @@ describe("action() on a lost connection", () => {
     expect(calls).toBe(1);
     expect(await testDb()(table).pluck("note")).toEqual(["saved alone"]);
     await testDb()(table).delete();
+  });
+});
+
+describe("a read outside a transaction (pages, services) on a connection PostgreSQL ends", () => {
+  let pool: Knex;
+  beforeAll(() => {
+    pool = createPool(process.env.TEST_DATABASE_URL!, 2);
+  });
+  afterAll(async () => {
+    await pool.destroy();
+  });
+
+  /** Runs `sql` on `pool` and ends its session from outside while the statement sleeps. */
+  async function endedMidway(sql: string, marker: string): Promise<{ result: unknown; ended: number[] }> {
+    const running = pool.raw(sql).then((r: { rows: unknown }) => r.rows, (e: unknown) => e);
+    const ended: number[] = [];
+    for (let i = 0; i < 50 && ended.length === 0; i++) {
+      await new Promise((r) => setTimeout(r, 50));
+      const { rows } = await testDb().raw("SELECT pid FROM pg_stat_activity WHERE query LIKE ? AND pid <> pg_backend_pid()", [`%${marker}%`]);
+      for (const { pid } of rows as { pid: number }[]) {
+        await testDb().raw("SELECT pg_terminate_backend(?)", [pid]);
+        ended.push(pid);
+      }
+    }
+    return { result: await running, ended };
+  }
+
+  test("is run once more on a fresh connection and answers", async () => {
+    const { result, ended } = await endedMidway("SELECT pg_backend_pid() AS pid, 'read-retry-a' AS marker FROM pg_sleep(0.6)", "read-retry-a");
+    expect(ended).toHaveLength(1);
+    expect(result).toEqual([{ pid: expect.any(Number), marker: "read-retry-a" }]);
+    expect((result as { pid: number }[])[0]!.pid).not.toBe(ended[0]);
+  });
+
+  test("a write outside a transaction is not repeated: its error reaches the caller", async () => {
+    const { result, ended } = await endedMidway(`WITH pause AS (SELECT pg_sleep(0.6)) INSERT INTO ${table} (note) SELECT 'read-retry-b' FROM pause RETURNING id`, "read-retry-b");
+    expect(ended).toHaveLength(1);
+    expect(isConnectionError(result)).toBe(true);
+    expect(await testDb()(table).where({ note: "read-retry-b" }).count({ n: "*" })).toEqual([{ n: "0" }]);
+  });
+
+  test("a read inside a transaction is not repeated (the transaction is gone with its connection)", async () => {
+    const outcome = await pool
+      .transaction(async (trx) => {
+        const { rows } = await trx.raw("SELECT pg_backend_pid() AS pid");
+        await testDb().raw("SELECT pg_terminate_backend(?)", [rows[0].pid]);
+        return trx.raw("SELECT 1");
+      })
+      .catch((e: unknown) => e);
+    expect(isConnectionError(outcome)).toBe(true);
   });
 });

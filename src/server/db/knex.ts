@@ -1,6 +1,7 @@
 import "server-only";
 import knexFactory, { type Knex } from "knex";
 import { queryDatabaseUrl } from "@/server/env";
+import { retryLostReads } from "./read-retry";
 import { noteQuery } from "./write-ledger";
 
 // One pool per process (per URL, so tests can point a second app at another database);
@@ -16,15 +17,23 @@ export function db(): Knex {
   const url = queryDatabaseUrl();
   let pool = pools.get(url);
   if (!pool) {
-    pool = knexFactory({
-      client: "pg",
-      connection: { connectionString: url, connectionTimeoutMillis: 5000 },
-      pool: { min: 0, max: 10 },
-      acquireConnectionTimeout: 5000,
-    });
-    // Every statement is noted against the request that sent it (see write-ledger.ts).
-    pool.on("query", noteQuery);
+    pool = createPool(url);
     pools.set(url, pool);
   }
+  return pool;
+}
+
+/** A Knex pool as the app uses it; `max` is smaller in tests that need one connection. */
+export function createPool(url: string, max = 10): Knex {
+  const pool = knexFactory({
+    client: "pg",
+    connection: { connectionString: url, connectionTimeoutMillis: 5000 },
+    pool: { min: 0, max },
+    acquireConnectionTimeout: 5000,
+  });
+  // Every statement is noted against the request that sent it (see write-ledger.ts), and reads
+  // outside transactions survive a restart of PostgreSQL (read-retry.ts).
+  pool.on("query", noteQuery);
+  retryLostReads(pool);
   return pool;
 }
