@@ -88,7 +88,7 @@ describe("a project-level change resets checks without claiming the rows", () =>
     expect(await lastEditor(fx, "surfaces", untouched)).toBeNull();
     expect(await stateOf(fx.projectId, "surfaces", untouched)).toBe("unchecked");
     // The consultant still may not check the row they edited; the project-level author may.
-    const board = await request(app.server).post(api(fx, "/checks")).set(dual).send({ rows: [{ sheet: "surfaces", id: edited, row_version: 2 }, { sheet: "surfaces", id: untouched, row_version: 1 }] });
+    const board = await request(app.server).post(api(fx, "/checks")).set(dual).send({ filter: "Unchecked · Surfaces", confirmed_count: 2, rows: [{ sheet: "surfaces", id: edited, row_version: 2 }, { sheet: "surfaces", id: untouched, row_version: 1 }] });
     expect(board.status, board.text).toBe(200);
     expect(board.body).toEqual({ accepted: 2 });
     const own = await request(app.server).post(api(fx, `/surfaces/${edited}/check`)).set(checker).send({ move: "query", comment: "Area from the revised drawing?", row_version: 2 });
