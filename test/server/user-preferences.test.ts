@@ -20,6 +20,8 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await app?.close();
+  // The demo people go back to no settings of their own: later suites (the browser tests) share this database.
+  await testDb()("user_preferences").whereIn("user_id", Object.values(ids)).delete();
   await closeTestDb();
 });
 

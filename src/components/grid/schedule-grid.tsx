@@ -147,7 +147,7 @@ export function ScheduleGrid(props: ScheduleGridProps) {
 
   return (
     <>
-    <div ref={wrapper} className="fs-grid h-full min-h-[18rem] min-w-0 print:h-auto" onPaste={onPaste} data-sheet={sheet} {...habits.scopeProps}>
+    <div ref={wrapper} className="fs-grid min-h-[18rem] min-w-0 flex-1 print:h-auto" onPaste={onPaste} data-sheet={sheet} {...habits.scopeProps}>
       <style>{habits.css}</style>
       <AgGridReact<Row>
         theme={gridTheme}

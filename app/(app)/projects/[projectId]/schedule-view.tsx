@@ -98,7 +98,8 @@ export function ScheduleView({ initialSheet = "surfaces", initialCase }: { initi
             {sheet === "surfaces" ? <RowFilterBar value={rowFilter} onChange={setRowFilter} counts={filterCounts} shown={shown} total={schedule.surfaces.length} /> : <span />}
             <ColumnSetPicker sheet={sheet} />
           </div>
-          <div className="min-h-0 flex-1">
+          {/* The grid takes what is left of the height; the range line under it keeps its own. */}
+          <div className="flex min-h-0 flex-1 flex-col">
             <ScheduleGrid
               key={sheet}
               sheet={sheet}
