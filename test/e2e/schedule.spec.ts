@@ -41,8 +41,9 @@ test("changing a surface's area recalculates its Q and the zone total without a 
   await page.keyboard.type(doubled);
   await page.keyboard.press("Enter");
   await expect(cell(page, id, "area_m2")).toHaveText(doubled);
-  // Twice the area, twice the heat flow (Q = q·A, and q does not depend on the area); Q is shown to 1 W.
-  await expect.poll(async () => num(await q.innerText())).toBeGreaterThan(q0 * 1.9);
+  // Twice the area, twice the heat flow (Q = q·A, and q does not depend on the area); Q is shown to
+  // 1 W, so a small Q (earlier suites edit the demo rows) doubles to within 2 W.
+  await expect.poll(async () => num(await q.innerText())).toBeGreaterThanOrEqual(2 * q0 - 2);
   const q1 = num(await q.innerText());
   expect(Math.abs(q1 - 2 * q0)).toBeLessThanOrEqual(2);
   // The zone total moves by the row's change (both rounded to 1 W for display).
