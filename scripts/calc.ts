@@ -183,6 +183,10 @@ async function answerInHalves(w: Worker, first: unknown[]): Promise<boolean> {
     w.once("error", reject);
     w.once("exit", (code) => reject(new Error(`the calculation worker stopped (exit code ${code})`)));
   });
+  // When the second half is refused this promise is never awaited, and the worker is then
+  // terminated (its "exit" rejects it): that must not end the process as an unhandled rejection
+  // before the one-thread answer is written. Awaited below, it still throws.
+  fromWorker.catch(() => undefined);
   out('{"results":[');
   writeCalcResults(first, out, tick);
   if (!confirmed && !refused) {
