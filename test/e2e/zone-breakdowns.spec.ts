@@ -68,7 +68,8 @@ test("the panel shows the case's totals by orientation, element and build-up, an
     }
   }
   // Physics, not the code: the cold windy winter day loses more than the mild overcast one in every zone.
-  for (const r of await peaks.locator('td[data-peak="heating"]').allInnerTexts()) expect(r).toContain("Winter design day, windy");
+  // (Zones that other specs add without rows have no loss to compare.)
+  for (const r of await peaks.locator('td[data-peak="heating"]').allInnerTexts()) if (!/no loss/.test(r)) expect(r).toContain("Winter design day, windy");
 
   if (SHOTS) {
     await peaks.scrollIntoViewIfNeeded();
