@@ -4,8 +4,8 @@
 // one of those undone and redone as one step; an undo after someone else changed the row is
 // refused (409) and overwrites nothing; a fixed cell loses its error and messages do not stack.
 import { expect as baseExpect, test, type Page } from "@playwright/test";
-import knexFactory, { type Knex } from "knex";
 import { mkdirSync } from "node:fs";
+import { usePaidDemoFirm } from "./support/paid-demo-firm";
 import { signIn } from "./support/sign-in";
 
 test.describe.configure({ timeout: 120_000 });
@@ -13,21 +13,8 @@ test.use({ actionTimeout: 15_000, viewport: { width: 1440, height: 900 } });
 const expect = baseExpect.configure({ timeout: 15_000 });
 const SHOTS = process.env.E2E_SHOTS_DIR;
 
-let db: Knex;
-let before: Record<string, unknown> | undefined;
-test.beforeAll(async () => {
-  db = knexFactory({ client: "pg", connection: process.env.E2E_DATABASE_URL, pool: { min: 0, max: 1 } });
-  // Undoing a delete adds the row back: beyond the free plan's 40 rows, so the firm pays here.
-  const firm = await db("firms").where({ slug: "tarnbrook-sill" }).first("id");
-  before = await db("firm_billing").where({ firm_id: firm.id }).first();
-  await db("firm_billing").insert({ firm_id: firm.id, subscription_status: "active", subscription_seats: 50 }).onConflict("firm_id").merge({ subscription_status: "active", subscription_seats: 50 });
-});
-test.afterAll(async () => {
-  const firm = await db("firms").where({ slug: "tarnbrook-sill" }).first("id");
-  await db("firm_billing").where({ firm_id: firm.id }).delete();
-  if (before) await db("firm_billing").insert(before);
-  await db.destroy();
-});
+// Undoing a delete adds the row back: beyond the free plan's 40 rows, so the firm pays here.
+const db = usePaidDemoFirm();
 
 async function openDemoSchedule(page: Page) {
   await signIn(page, "consultant@demo.filmsheet.test");
@@ -112,7 +99,7 @@ test("Ctrl+D fills down as one step: Ctrl+Z undoes the whole fill and not the ed
   const ids = [await rowId(page, "RR south wall 1"), await rowId(page, "RR south wall 2"), await rowId(page, "RR south wall 3")];
   // The rows below as they stand (earlier specs may have edited the demo rows).
   const shown = [await at(page, i + 1, "area_m2").innerText(), await at(page, i + 2, "area_m2").innerText()];
-  const stored = (await db("surfaces").whereIn("id", ids.slice(1)).orderBy("position").select("area_m2")).map((r) => r.area_m2);
+  const stored = (await db()("surfaces").whereIn("id", ids.slice(1)).orderBy("position").select("area_m2")).map((r) => r.area_m2);
   const edited = bulkDone(page);
   await typeInto(page, i, "area_m2", "15.5");
   expect((await edited).status()).toBe(200);
@@ -133,7 +120,7 @@ test("Ctrl+D fills down as one step: Ctrl+Z undoes the whole fill and not the ed
   await expect(at(page, i + 1, "area_m2")).toHaveText(shown[0]!);
   await expect(at(page, i + 2, "area_m2")).toHaveText(shown[1]!);
   await expect(at(page, i, "area_m2")).toHaveText("15.50");
-  expect((await db("surfaces").whereIn("id", ids).orderBy("position").select("area_m2")).map((r) => r.area_m2)).toEqual([15.5, ...stored]);
+  expect((await db()("surfaces").whereIn("id", ids).orderBy("position").select("area_m2")).map((r) => r.area_m2)).toEqual([15.5, ...stored]);
 
   const redone = bulkDone(page);
   await page.keyboard.press("ControlOrMeta+y");
@@ -198,7 +185,7 @@ test("Delete clears a range of overrides back to the build-up's values, and undo
   // Blank again: the cells show the build-up's values, in italics.
   await expect(at(page, i, "absorptance")).toHaveClass(/fs-inherited/);
   await expect(at(page, i + 1, "emissivity")).toHaveClass(/fs-inherited/);
-  expect(await db("surfaces").whereIn("id", ids).select("absorptance", "emissivity")).toEqual([
+  expect(await db()("surfaces").whereIn("id", ids).select("absorptance", "emissivity")).toEqual([
     { absorptance: null, emissivity: null },
     { absorptance: null, emissivity: null },
   ]);
@@ -230,14 +217,14 @@ test("an undo after someone else changed the row is refused with 409, says so, a
   await typeInto(page, i, "height_m", "6.5");
   expect((await edited).status()).toBe(200);
   // Someone else saves the row meanwhile.
-  await db("surfaces").where({ id }).update({ height_m: 7.3, version: db.raw("version + 1") });
+  await db()("surfaces").where({ id }).update({ height_m: 7.3, version: db().raw("version + 1") });
   const refused = bulkDone(page);
   await page.keyboard.press("ControlOrMeta+z");
   expect((await refused).status()).toBe(409);
   const alert = page.getByRole("alert").filter({ hasText: "Could not undo" });
   await expect(alert).toContainText("changed by someone else");
   await expect(at(page, i, "height_m")).toHaveText("7.3");
-  expect((await db("surfaces").where({ id }).first("height_m")).height_m).toBe(7.3);
+  expect((await db()("surfaces").where({ id }).first("height_m")).height_m).toBe(7.3);
   // The refused step is gone: nothing left that could overwrite the other person's value.
   await expect(page.getByRole("button", { name: "Undo Edit of Centroid height (m) in SG west wall 1" })).toHaveCount(0);
 });
@@ -262,7 +249,7 @@ test("adding and deleting rows undo and redo; a deleted row comes back with its 
 
   // A row near the top (rendered without scrolling); it comes back at the sheet's end.
   const id = await rowId(page, "RR south spandrel 2");
-  const stored = await db("surfaces").where({ id }).first();
+  const stored = await db()("surfaces").where({ id }).first();
   await bodyRow(page, "RR south spandrel 2").locator('[col-id="ag-Grid-SelectionColumn"] input').check();
   await page.getByRole("button", { name: "Delete 1" }).click();
   await expect(page.getByText("Delete 1 row?")).toBeVisible();
@@ -275,7 +262,7 @@ test("adding and deleting rows undo and redo; a deleted row comes back with its 
   await page.keyboard.press("ControlOrMeta+z");
   expect((await back).status()).toBe(200);
   await expect.poll(count).toBe(n + 1);
-  const restored = await db("surfaces").where({ id }).first();
+  const restored = await db()("surfaces").where({ id }).first();
   const inputs = ["label", "zone_id", "buildup_id", "area_m2", "tilt_deg", "azimuth_deg", "height_m", "length_m", "panel_height_m", "method", "absorptance", "emissivity", "exposed_to"];
   const pick = (r: Record<string, unknown>) => Object.fromEntries(inputs.map((k) => [k, r[k]]));
   expect(pick(restored)).toEqual(pick(stored));

@@ -2,7 +2,7 @@
 // zone total in place, a refused edit says why and saves nothing, a pasted block becomes one
 // bulk change, a CSV import runs its progress bar to the end, and IP units show °F and Btu/h.
 import { expect as baseExpect, test, type Page } from "@playwright/test";
-import knexFactory, { type Knex } from "knex";
+import { usePaidDemoFirm } from "./support/paid-demo-firm";
 import { signIn } from "./support/sign-in";
 
 // The project page loads the grid, the engine and the chart: give a busy two-core machine room.
@@ -87,21 +87,7 @@ test("a 3×4 block pasted from a spreadsheet lands in three rows and four column
 
 test.describe("on the paid plan", () => {
   // The demo schedule (50 rows) is beyond the free plan's 40: adding rows needs a paid firm.
-  // Set straight in the database, as the billing tests' fixtures do, and put back afterwards.
-  let db: Knex;
-  let before: Record<string, unknown> | undefined;
-  test.beforeAll(async () => {
-    db = knexFactory({ client: "pg", connection: process.env.E2E_DATABASE_URL, pool: { min: 0, max: 1 } });
-    const firm = await db("firms").where({ slug: "tarnbrook-sill" }).first("id");
-    before = await db("firm_billing").where({ firm_id: firm.id }).first();
-    await db("firm_billing").insert({ firm_id: firm.id, subscription_status: "active", subscription_seats: 50 }).onConflict("firm_id").merge({ subscription_status: "active", subscription_seats: 50 });
-  });
-  test.afterAll(async () => {
-    const firm = await db("firms").where({ slug: "tarnbrook-sill" }).first("id");
-    await db("firm_billing").where({ firm_id: firm.id }).delete();
-    if (before) await db("firm_billing").insert(before);
-    await db.destroy();
-  });
+  usePaidDemoFirm();
 
   test("a CSV import runs its progress bar to the end and adds the rows", async ({ page }) => {
     await openDemoSchedule(page);

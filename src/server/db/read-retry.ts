@@ -1,20 +1,18 @@
 import "server-only";
 import type { Knex } from "knex";
 import { isConnectionError } from "./connection-error";
+import { isPureRead } from "./write-ledger";
 
 type Runner = { run(): Promise<unknown> };
 type Compilable = { toSQL(): { sql: string } | { sql: string }[] };
 type RunnerClient = { runner(builder: Compilable): Runner };
 
-// A statement that only reads: a SELECT (or SHOW) that calls nothing that writes. See write-ledger.ts.
-const READ_ONLY = /^\s*(select\b|show\b)/i;
-const WRITING_CALL = /graphile_worker\.|nextval\s*\(|setval\s*\(|pg_advisory|\bfor\s+(update|share|no key update|key share)\b/i;
-
-function isPureRead(builder: Compilable): boolean {
+/** Every statement the builder compiles to only reads (the ledger's rule, write-ledger.ts). */
+function readsOnly(builder: Compilable): boolean {
   try {
     const compiled = builder.toSQL();
     const statements = Array.isArray(compiled) ? compiled : [compiled];
-    return statements.length > 0 && statements.every((s) => READ_ONLY.test(s.sql) && !WRITING_CALL.test(s.sql));
+    return statements.length > 0 && statements.every((s) => isPureRead(s.sql));
   } catch {
     return false;
   }
@@ -40,7 +38,7 @@ export function retryLostReads(pool: Knex, waitMs = 8000): void {
       try {
         return await run();
       } catch (error) {
-        if ((error as { name?: unknown } | null)?.name === "KnexTimeoutError" || !isConnectionError(error) || !isPureRead(builder)) throw error;
+        if ((error as { name?: unknown } | null)?.name === "KnexTimeoutError" || !isConnectionError(error) || !readsOnly(builder)) throw error;
         if (!(await answers(runner, pool, waitMs))) throw error;
         return runner(builder).run();
       }

@@ -18,11 +18,16 @@ interface Ledger {
 const store = new AsyncLocalStorage<Ledger>();
 
 // Outside a transaction a SELECT reads, unless it calls a function that writes (the job queue's
-// add_job, sequences, advisory locks); everything else (INSERT, UPDATE, DELETE, CTEs that may
-// hold them) is taken to write.
+// add_job, sequences, advisory locks) or locks rows; everything else (INSERT, UPDATE, DELETE, CTEs
+// that may hold them) is taken to write.
 const READ_ONLY = /^\s*(select\b|show\b)/i;
-const WRITING_CALL = /graphile_worker\.|nextval\s*\(|setval\s*\(|pg_advisory/i;
+const WRITING_CALL = /graphile_worker\.|nextval\s*\(|setval\s*\(|pg_advisory|\bfor\s+(update|share|no key update|key share)\b/i;
 const COMMIT = /^\s*commit\b/i;
+
+/** True for a statement that only reads: running it twice changes nothing. */
+export function isPureRead(sql: string): boolean {
+  return READ_ONLY.test(sql) && !WRITING_CALL.test(sql);
+}
 
 /** Knex "query" listener: notes decisive statements of the request in whose context it runs. */
 export function noteQuery(query: { sql?: unknown; __knexTxId?: unknown }): void {
@@ -31,7 +36,7 @@ export function noteQuery(query: { sql?: unknown; __knexTxId?: unknown }): void 
   const sql = query.sql;
   if (query.__knexTxId) {
     if (COMMIT.test(sql)) ledger.decisive = true;
-  } else if (!READ_ONLY.test(sql) || WRITING_CALL.test(sql)) {
+  } else if (!isPureRead(sql)) {
     ledger.decisive = true;
   }
 }

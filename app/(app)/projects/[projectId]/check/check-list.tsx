@@ -3,30 +3,20 @@
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useActionState, useEffect, useRef, useState, useTransition } from "react";
-import { CHECK_MOVES, SHEET_LABELS, type TCheckSheet, type TCheckState } from "@/checking/check-machine";
+import { CHECK_MOVES, SHEET_LABELS } from "@/checking/check-machine";
 import { rowPath } from "@/checking/paths";
 import { StateBadge } from "@/components/checking/state-badge";
 import { FormMessage, SubmitButton, type FormState } from "@/components/forms/form-parts";
+import type { BoardRow } from "@/server/services/get-check-board";
 import { acceptRowsAction, checkRowAction } from "./actions";
 
 type ActionState = FormState;
 
-export interface ListRow {
-  sheet: TCheckSheet;
-  id: string;
-  label: string;
-  zone: string;
-  version: number;
-  state: TCheckState;
-  checked_by_name: string | null;
-  accepted_in_bulk: boolean;
-  last_edited_by_name: string | null;
+/** A row of the check board as the list shows it (who edited it reduced to "mine"). */
+export type ListRow = Omit<BoardRow, "checked_at" | "last_edited_by"> & {
   /** This checker last edited the row: another checker must check it. */
   mine: boolean;
-  comments: number;
-  changed_since_accepted: boolean;
-  warnings: string[];
-}
+};
 
 const keyOf = (r: { sheet: string; id: string }) => `${r.sheet}:${r.id}`;
 
