@@ -353,10 +353,12 @@ function coldestSurface(st: DuctRunState): number {
 
 /**
  * Least insulation thickness, a multiple of 0.1 mm, for which condensation is false in still air;
- * 0 when the bare duct is safe, null when 0.5 m does not avoid it. The colder surface warms as
- * insulation is added, so the flag changes once along the steps: the search keeps a bracket of
- * steps [condensing, safe] and narrows it by the Illinois variant of regula falsi on the margin
- * (surface temperature − dew point − margin), which ends on neighbouring steps.
+ * 0 when the bare duct is safe, null when no thickness up to 0.5 m avoids it. The colder surface
+ * warms as the first insulation is added; on a thick round jacket it can cool again (the larger
+ * diameter's free convection weakens while its radiation to a colder surround does not), so the
+ * safe steps form one band. The search keeps a bracket of steps [condensing, safe] on the rising
+ * side and narrows it by the Illinois variant of regula falsi on the margin (surface temperature −
+ * dew point − margin), which ends on neighbouring steps.
  */
 export function minInsulationThickness(d: DuctRunInput, TdpK: number): number | null {
   const limit = TdpK + d.margin_K;
@@ -392,7 +394,20 @@ export function minInsulationThickness(d: DuctRunInput, TdpK: number): number | 
   }
   if (gHi !== gHi) {
     gHi = margin(nMax);
-    if (gHi < 0) return null;
+    if (gHi < 0) {
+      // Still condensing at 0.5 m: either no thickness helps, or the safe thicknesses lie between
+      // two bounds, because a thick jacket's larger diameter loses free convection to the room
+      // while keeping its radiation to a cold surround. Look for any safe step (golden-section
+      // search for the warmest), then the least safe step lies below it.
+      const safe = safeStep(margin, nMax);
+      if (safe === null) return null;
+      nHi = safe;
+      gHi = margin(safe);
+      if (nLo >= nHi) {
+        nLo = 0;
+        gLo = margin(0);
+      }
+    }
   }
   let side = 0;
   while (nHi - nLo > 1) {
@@ -412,6 +427,37 @@ export function minInsulationThickness(d: DuctRunInput, TdpK: number): number | 
     }
   }
   return nHi / 10000;
+}
+
+/**
+ * A step in [0, nMax] whose margin is not negative, or null when there is none: a golden-section
+ * search for the step of the warmest colder-end surface (the margin rises with the first
+ * insulation and may fall again on a thick jacket), which stops at the first safe step it meets.
+ */
+function safeStep(margin: (n: number) => number, nMax: number): number | null {
+  const r = (Math.sqrt(5) - 1) / 2;
+  let a = 0;
+  let b = nMax;
+  let x1 = Math.round(b - r * (b - a));
+  let x2 = Math.round(a + r * (b - a));
+  while (b - a > 3) {
+    const g1 = margin(x1);
+    if (g1 >= 0) return x1;
+    const g2 = margin(x2);
+    if (g2 >= 0) return x2;
+    if (g1 < g2) {
+      a = x1;
+      x1 = x2;
+      x2 = Math.round(a + r * (b - a));
+    } else {
+      b = x2;
+      x2 = x1;
+      x1 = Math.round(b - r * (b - a));
+    }
+    if (x1 >= x2) x2 = Math.min(b, x1 + 1);
+  }
+  for (let n = a; n <= b; n++) if (margin(n) >= 0) return n;
+  return null;
 }
 
 /**

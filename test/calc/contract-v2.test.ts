@@ -224,6 +224,34 @@ describe("duct runs: sun, the deeper insulation search and surroundings below th
     expect(run({ ...wet, insulation_thickness_m: Math.round((t - 0.0001) * 1e4) / 1e4 }).condensation).toBe(true);
   });
 
+  test("a chilled duct in a room with a cold surround: dry from a thin jacket, wet again at 0.5 m; the least dry step is still found", () => {
+    // Found by the property test (seed −974278981). A bare 0.4 m duct at 5 °C in a 25.2 °C, 40 %
+    // room (dew point ≈ 10.6 °C) under a 0 °C radiant surround sits a few hundredths of a kelvin
+    // too cold for a 0.05 K margin. The first millimetres warm the jacket past the limit; beyond about 0.05 m
+    // it cools again, because a horizontal cylinder's free-convection coefficient falls as its
+    // diameter grows (Churchill–Chu for horizontal cylinders: Nu grows more slowly than D below the
+    // fully turbulent range) while its radiation to the cold surround does not: at 0.5 m it condenses. The search once took the wet 0.5 m for
+    // "no thickness helps" and answered null.
+    const room = {
+      kind: "duct_run", shape: "round", diameter_m: 0.4, length_m: 0.5, flow_m3_s: 0.0127, T_entering_C: 5,
+      T_ambient_C: 25.165, RH_ambient_pct: 40, T_surround_C: 0, insulation_thickness_m: 0, insulation_k_W_mK: 0.0212,
+      jacket_emissivity: 0.95, location: "indoor", margin_K: 0.05,
+    };
+    const r = run(room);
+    expect(r.condensation).toBe(true);
+    const t = r.min_insulation_thickness_m as number;
+    expect(t).toBeGreaterThan(0);
+    expect(t).toBeLessThan(0.02);
+    expect(run({ ...room, insulation_thickness_m: t }).condensation).toBe(false);
+    expect(run({ ...room, insulation_thickness_m: Math.round((t - 0.0001) * 1e4) / 1e4 }).condensation).toBe(true);
+    expect(run({ ...room, insulation_thickness_m: 0.05 }).condensation).toBe(false);
+    const thick = run({ ...room, insulation_thickness_m: 0.5 });
+    expect(thick.condensation).toBe(true);
+    expect(thick.min_insulation_thickness_m).toBe(t);
+    expect(codes(thick)).toContain("surroundings_below_dew_point");
+    expect(codes(r)).not.toContain("surroundings_below_dew_point");
+  });
+
   test("a warm duct under a cold surround: condensing with insulation that a thinner jacket would avoid → surroundings_below_dew_point", () => {
     // Heating air at 35 °C in 2 °C air at 95 % RH (dew point ≈ 1.3 °C) under a −9 °C radiant
     // surround: the bare metal stays warm, but 50 mm of insulation lets the jacket fall towards
