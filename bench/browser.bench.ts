@@ -14,12 +14,12 @@
 // by `next start`: its own PostgreSQL cluster (.data/pg-browser) unless BENCH_DATABASE_URL names a
 // database (recreated, migrated, seeded); BENCH_BASE_URL uses an app already serving that database.
 import { createHash, randomBytes } from "node:crypto";
-import { readFileSync } from "node:fs";
+import { mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import { cpus, loadavg } from "node:os";
 import { join } from "node:path";
 import { performance } from "node:perf_hooks";
 import knexFactory from "knex";
-import { chromium, type Browser, type Page } from "playwright-core";
+import { chromium, type Browser, type CDPSession, type Page } from "playwright-core";
 import { ROOT, clusterDir, databaseUrl, ensureBuild, ensureDatabase, ensureNodeModules, ensurePostgres, knex, startCluster, stopCluster } from "../scripts/lib/bootstrap.mjs";
 import { stopService } from "../scripts/lib/proc.mjs";
 import { DEFAULT_DEMO_PASSWORD, portFromEnv, startApp } from "../scripts/lib/services.mjs";
@@ -40,6 +40,11 @@ const GOALS = { firstRowsMs: 1000, longTaskMs: 100, editMs: 50, computeMs: 16, s
 type Figures = {
   firstRows: number[];
   firstResults: number[];
+  /** Navigation timing of each measured load: the server's first byte, the whole page, DOM ready. */
+  ttfb: number[];
+  htmlDone: number[];
+  domReady: number[];
+  htmlBytes: number;
   loadLongest: number;
   loadFrame: number;
   edits: number[];
@@ -130,6 +135,11 @@ async function signedInState(browser: Browser, base: string) {
   await page.getByLabel("Password").fill(process.env.DEMO_PASSWORD || DEFAULT_DEMO_PASSWORD);
   await page.getByRole("button", { name: "Sign in", exact: true }).click();
   await page.waitForURL(/\/projects$/, { timeout: 30_000 });
+  // A column set of the person's own with the area beside the heat flow, as an engineer editing
+  // areas and watching Q would make it (a sheet this big draws only the columns in view).
+  const areaAndQ = { id: "bench-area-q", name: "Area and heat flow", sheet: "surfaces", columns: ["zone_id", "buildup_id", "area_m2", "r:Q_W", "r:h_o_W_m2K", "r:U_W_m2K", "r:T_surface_C", "notes", "working"] };
+  const res = await page.request.fetch("/api/me/preferences", { method: "PATCH", data: { column_sets: [areaAndQ], active_column_sets: { surfaces: areaAndQ.id } }, headers: { origin: base } });
+  if (!res.ok()) throw new Error(`column set not chosen: ${res.status()} ${await res.text()}`);
   const state = await context.storageState();
   await context.close();
   return state;
@@ -141,7 +151,58 @@ async function openPage(browser: Browser, state: Awaited<ReturnType<typeof signe
   const page = await context.newPage();
   const cdp = await context.newCDPSession(page);
   await cdp.send("Emulation.setCPUThrottlingRate", { rate });
-  return { page, close: () => context.close() };
+  return { page, cdp, close: () => context.close() };
+}
+
+/**
+ * BENCH_PROFILE=dir: the page's CPU profile of the last load and of the scrolling, saved as
+ * .cpuprofile files (Chromium's DevTools opens them) with the functions of most self time printed.
+ */
+const PROFILE = process.env.BENCH_PROFILE;
+async function saveProfile(cdp: CDPSession, name: string) {
+  const { profile } = await cdp.send("Profiler.stop");
+  mkdirSync(PROFILE!, { recursive: true });
+  writeFileSync(join(PROFILE!, `${name}.cpuprofile`), JSON.stringify(profile));
+  const self = new Map<string, number>();
+  const hits = new Map<number, number>();
+  profile.samples?.forEach((id, i) => hits.set(id, (hits.get(id) ?? 0) + (profile.timeDeltas?.[i] ?? 0)));
+  for (const n of profile.nodes) {
+    const at = `${n.callFrame.functionName || "(anonymous)"} ${n.callFrame.url.split("/").pop()}:${n.callFrame.lineNumber}:${n.callFrame.columnNumber}`;
+    self.set(at, (self.get(at) ?? 0) + (hits.get(n.id) ?? 0));
+  }
+  const total = [...self.values()].reduce((a, b) => a + b, 0);
+  console.log(`\nprofile ${name}: ${(total / 1000).toFixed(0)} ms sampled; most self time:`);
+  for (const [at, us] of [...self].sort((a, b) => b[1] - a[1]).slice(0, 25)) console.log(`  ${((us / total) * 100).toFixed(1).padStart(5)} %  ${at}`);
+}
+
+/** The renderer main thread's time by trace event (complete events, self time not separated). */
+function summariseTrace(trace: Buffer, name: string, until = 0) {
+  writeFileSync(join(PROFILE!, `${name}.trace.json`), trace);
+  type Ev = { name: string; ph: string; ts: number; dur?: number; tid: number; pid: number; args?: { name?: string; data?: { url?: string; functionName?: string; type?: string } } };
+  const events = (JSON.parse(trace.toString()) as { traceEvents: Ev[] }).traceEvents;
+  const main = events.find((e) => e.ph === "M" && e.name === "thread_name" && e.args?.name === "CrRendererMain");
+  const onMain = (e: Ev) => !main || (e.tid === main.tid && e.pid === main.pid);
+  const by = new Map<string, number>();
+  for (const e of events) if (e.ph === "X" && e.dur && onMain(e)) by.set(e.name, (by.get(e.name) ?? 0) + e.dur);
+  console.log(`\ntrace ${name}: main-thread time by event (ms, nested events counted in their parents too)`);
+  for (const [n, us] of [...by].sort((a, b) => b[1] - a[1]).slice(0, 18)) console.log(`  ${(us / 1000).toFixed(0).padStart(7)}  ${n}`);
+  if (!until) return;
+  // The load's main-thread tasks of 15 ms or more until the first rows, from the navigation's start.
+  const nav = events.find((e) => e.name === "navigationStart" && onMain(e)) ?? events.find((e) => e.name === "TracingStartedInBrowser");
+  const t0 = nav?.ts ?? 0;
+  console.log(`tasks of 15 ms or more up to the first rows (${until.toFixed(0)} ms), ms from the navigation:`);
+  const tasks = events.filter((e) => e.ph === "X" && e.name === "RunTask" && onMain(e) && (e.dur ?? 0) >= 15000 && (e.ts - t0) / 1000 <= until + 50);
+  for (const t of tasks) {
+    const inner = events.filter((e) => e.ph === "X" && onMain(e) && e.ts >= t.ts && e.ts < t.ts + t.dur! && e.name !== "RunTask" && (e.dur ?? 0) >= 5000);
+    const what = inner.slice(0, 4).map((e) => `${e.name}${e.args?.data?.url ? " " + e.args.data.url.split("/").pop() : ""}${e.args?.data?.functionName ? " " + e.args.data.functionName : ""} ${(e.dur! / 1000).toFixed(0)}`).join("; ");
+    console.log(`  at ${((t.ts - t0) / 1000).toFixed(0).padStart(5)}: ${(t.dur! / 1000).toFixed(0).padStart(4)} ms  ${what}`);
+  }
+  const requests = events.filter((e) => e.name === "ResourceSendRequest" && e.args?.data?.url);
+  for (const r of requests) {
+    const id = (r.args!.data as { requestId?: string }).requestId;
+    const done = events.find((e) => e.name === "ResourceFinish" && (e.args?.data as { requestId?: string } | undefined)?.requestId === id);
+    if ((r.ts - t0) / 1000 <= until) console.log(`  request ${((r.ts - t0) / 1000).toFixed(0).padStart(5)} → ${done ? ((done.ts - t0) / 1000).toFixed(0) : "?"}  ${r.args!.data!.url!.replace(/^https?:\/\/[^/]+/, "").slice(0, 70)}`);
+  }
 }
 
 const firstFigures = (page: Page) => page.evaluate(() => (window as unknown as { __bench: { firstRow: number | null; firstResult: number | null } }).__bench);
@@ -149,13 +210,18 @@ const readSince = (page: Page, since: number) => page.evaluate((s) => (window as
 const now = (page: Page) => page.evaluate(() => performance.now());
 
 async function measure(browser: Browser, state: Awaited<ReturnType<typeof signedInState>>, url: string, rate: number): Promise<Figures> {
-  const f: Figures = { firstRows: [], firstResults: [], loadLongest: 0, loadFrame: 0, edits: [], editCompute: [], switches: [], gaps: [], useLongest: 0, useFrame: 0 };
+  const f: Figures = { firstRows: [], firstResults: [], ttfb: [], htmlDone: [], domReady: [], htmlBytes: 0, loadLongest: 0, loadFrame: 0, edits: [], editCompute: [], switches: [], gaps: [], useLongest: 0, useFrame: 0 };
   // One load to warm the server's caches, then LOADS measured ones; the last page is used after.
   let page: Page | undefined;
+  let cdp: CDPSession | undefined;
   let close = async () => {};
   for (let i = 0; i <= LOADS; i++) {
     await close();
-    ({ page, close } = await openPage(browser, state, rate));
+    ({ page, cdp, close } = await openPage(browser, state, rate));
+    if (PROFILE && i === LOADS) {
+      await cdp.send("Profiler.enable").then(() => cdp!.send("Profiler.start"));
+      await browser.startTracing(page, { categories: ["devtools.timeline", "disabled-by-default-devtools.timeline", "blink.user_timing", "loading", "netlog"] });
+    }
     await page.goto(url);
     await page.waitForFunction(() => (window as unknown as { __bench: { firstResult: number | null } }).__bench.firstResult !== null, null, { timeout: 120_000 }).catch(async (error) => {
       const shot = join(ROOT, ".data", "bench-browser-timeout.png");
@@ -169,9 +235,21 @@ async function measure(browser: Browser, state: Awaited<ReturnType<typeof signed
     const first = await firstFigures(page);
     f.firstRows.push(first.firstRow!);
     f.firstResults.push(first.firstResult!);
+    const nav = await page.evaluate(() => {
+      const n = (performance as unknown as { getEntriesByType(t: string): PerformanceNavigationTiming[] }).getEntriesByType("navigation")[0]!;
+      return { ttfb: n.responseStart, html: n.responseEnd, dom: n.domContentLoadedEventEnd, bytes: n.decodedBodySize };
+    });
+    f.ttfb.push(nav.ttfb);
+    f.htmlDone.push(nav.html);
+    f.htmlBytes = nav.bytes;
+    f.domReady.push(nav.dom);
     const r = await readSince(page, 0);
     f.loadLongest = Math.max(f.loadLongest, r.longest);
     f.loadFrame = Math.max(f.loadFrame, r.longestFrame);
+    if (PROFILE && i === LOADS) {
+      await saveProfile(cdp!, `load-${rate}x`);
+      summariseTrace(await browser.stopTracing(), `load-${rate}x`, first.firstRow ?? 0);
+    }
   }
   page = page!;
   const since = await now(page);
@@ -209,7 +287,15 @@ async function measure(browser: Browser, state: Awaited<ReturnType<typeof signed
   }
 
   // Fast scrolling: 600 px (about 20 rows) a frame for 150 frames.
+  if (PROFILE) {
+    await cdp!.send("Profiler.start");
+    await browser.startTracing(page, { categories: ["devtools.timeline", "disabled-by-default-devtools.timeline"] });
+  }
   f.gaps = await page.evaluate(() => (window as unknown as { __probes: { fastScroll: (a: object) => Promise<number[]> } }).__probes.fastScroll({ frames: 150, px: 600 }));
+  if (PROFILE) {
+    await saveProfile(cdp!, `scroll-${rate}x`);
+    summariseTrace(await browser.stopTracing(), `scroll-${rate}x`);
+  }
   const r = await readSince(page, since);
   f.useLongest = r.longest;
   f.useFrame = r.longestFrame;
@@ -225,6 +311,9 @@ function print(runs: { rate: number; f: Figures; load: number[] }[], node: Await
     return `${(1000 / mean).toFixed(0)} fps (frame p95 ${quantile(gaps, 0.95).toFixed(0)} ms, max ${Math.max(...gaps).toFixed(0)} ms)`;
   };
   const lines: [string, (f: Figures) => string, string][] = [
+    ["  page: server's first byte", (f) => mm(f.ttfb), ""],
+    ["  page: HTML received", (f) => `${mm(f.htmlDone)}, ${(f.htmlBytes / 1e6).toFixed(2)} MB`, ""],
+    ["  page: DOM ready", (f) => mm(f.domReady), ""],
     ["first rows on screen", (f) => mm(f.firstRows), `≤ ${GOALS.firstRowsMs} ms`],
     ["first results (Q) on screen", (f) => mm(f.firstResults), ""],
     ["longest task / frame while loading", (f) => `${ms(f.loadLongest)} / ${ms(f.loadFrame)}`, `≤ ${GOALS.longTaskMs} ms`],

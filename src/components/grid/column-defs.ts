@@ -3,8 +3,7 @@
  * person's units, with typed editors) and the result list (computed in the browser), plus a
  * notes column for warnings and errors.
  */
-import type { ColDef, ICellRendererParams, ValueFormatterParams, ValueGetterParams } from "ag-grid-community";
-import { createElement } from "react";
+import type { ColDef, ICellRendererComp, ICellRendererParams, ValueFormatterParams, ValueGetterParams } from "ag-grid-community";
 import { workingPath } from "@/checking/paths";
 import { labelOf } from "@/schemas/schedule-fields";
 import type { TSchedule, TSheet } from "@/schemas/schedule";
@@ -178,7 +177,40 @@ const notesColumn: ColDef<Row> = {
   },
 };
 
-/** A link to the row's working and check, on its own page. */
+/**
+ * A link to the row's working and check, on its own page: a plain DOM cell renderer (a class with
+ * getGui), which the grid creates without a React root per cell — thousands are made while a big
+ * sheet scrolls.
+ */
+export class WorkingLinkRenderer implements ICellRendererComp<Row> {
+  private gui: HTMLElement = document.createElement("span");
+
+  init(p: ICellRendererParams<Row> & { context: GridContext }): void {
+    this.refresh(p);
+  }
+
+  getGui(): HTMLElement {
+    return this.gui;
+  }
+
+  refresh(p: ICellRendererParams<Row> & { context: GridContext }): boolean {
+    if (!p.data || isTotals(p)) {
+      this.gui.replaceChildren();
+      return true;
+    }
+    let a = this.gui.firstElementChild as HTMLAnchorElement | null;
+    if (!a) {
+      a = document.createElement("a");
+      a.className = "fs-working-link";
+      a.textContent = "Working ›";
+      this.gui.append(a);
+    }
+    a.href = workingPath(p.context.projectId, p.context.sheet, p.data.id, p.context.caseId);
+    a.setAttribute("aria-label", `Working of ${String(p.data.label)}`);
+    return true;
+  }
+}
+
 const workingColumn: ColDef<Row> = {
   colId: "working",
   headerName: "Working",
@@ -186,11 +218,7 @@ const workingColumn: ColDef<Row> = {
   sortable: false,
   filter: false,
   width: 96,
-  // ag-grid-react renders a function cell renderer as a React component.
-  cellRenderer: (p: ICellRendererParams<Row> & { context: GridContext }) =>
-    !p.data || isTotals(p)
-      ? null
-      : createElement("a", { href: workingPath(p.context.projectId, p.context.sheet, p.data.id, p.context.caseId), className: "fs-working-link", "aria-label": `Working of ${String(p.data.label)}` }, "Working ›"),
+  cellRenderer: WorkingLinkRenderer,
 };
 
 /**

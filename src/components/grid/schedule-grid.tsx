@@ -1,6 +1,26 @@
 "use client";
 
-import { AllCommunityModule, ModuleRegistry, type CellEditRequestEvent, type GridApi, type GridReadyEvent, type IRowNode } from "ag-grid-community";
+import {
+  CellApiModule,
+  CellStyleModule,
+  ClientSideRowModelApiModule,
+  ClientSideRowModelModule,
+  ColumnApiModule,
+  EventApiModule,
+  ExternalFilterModule,
+  ModuleRegistry,
+  NumberEditorModule,
+  NumberFilterModule,
+  PinnedRowModule,
+  RenderApiModule,
+  RowApiModule,
+  RowSelectionModule,
+  ScrollApiModule,
+  SelectEditorModule,
+  TextEditorModule,
+  TextFilterModule,
+  TooltipModule,
+  type CellEditRequestEvent, type GridApi, type GridReadyEvent, type IRowNode } from "ag-grid-community";
 import { AgGridReact } from "ag-grid-react";
 import { useCallback, useEffect, useMemo, useRef, useState, type ClipboardEvent } from "react";
 import type { RowOutcome } from "@/schedule/result-columns";
@@ -14,7 +34,33 @@ import { RangeStatus } from "./range-status";
 import { useSheetHabits, type HabitWrites } from "./use-sheet-habits";
 import "./schedule-grid.css";
 
-ModuleRegistry.registerModules([AllCommunityModule]);
+// Only the grid's parts the sheet uses (the whole community set is a third more code for the
+// browser to compile before the first rows): the client-side rows, text/number/select editors,
+// column and external filters, row selection, the pinned totals row, cell classes, tooltips and
+// the API calls of src/components/grid.
+ModuleRegistry.registerModules([
+  ClientSideRowModelModule,
+  ClientSideRowModelApiModule,
+  TextEditorModule,
+  NumberEditorModule,
+  SelectEditorModule,
+  TextFilterModule,
+  NumberFilterModule,
+  ExternalFilterModule,
+  RowSelectionModule,
+  PinnedRowModule,
+  CellStyleModule,
+  TooltipModule,
+  ColumnApiModule,
+  RowApiModule,
+  ScrollApiModule,
+  RenderApiModule,
+  EventApiModule,
+  CellApiModule,
+]);
+
+/** Sheets up to this many rows draw every column; bigger ones only those in view. */
+export const ALL_COLUMNS_ROWS = 400;
 
 export interface PasteRequest {
   text: string;
@@ -72,6 +118,11 @@ export function ScheduleGrid(props: ScheduleGridProps) {
     [sheet, zones, buildups, project.default_method, system, visible],
   );
   const pinned = useMemo(() => [{ id: TOTALS_ID, label: `Total of ${rows.length} ${rows.length === 1 ? "row" : "rows"}` } as unknown as Row], [rows.length]);
+
+  // A sheet of up to ALL_COLUMNS_ROWS rows draws every column, so the browser's find-in-page
+  // reaches every cell; a bigger one draws only the columns in view (and a few beside them), which
+  // keeps scrolling smooth. Decided when the grid is made (the grid reads the option once).
+  const [allColumns] = useState(() => rows.length <= ALL_COLUMNS_ROWS);
 
   const habits = useSheetHabits({ api, wrapper, sheet, schedule, system, canEdit, writes: props.habits });
 
@@ -166,12 +217,13 @@ export function ScheduleGrid(props: ScheduleGridProps) {
         stopEditingWhenCellsLoseFocus
         enterNavigatesVerticallyAfterEdit
         tooltipShowDelay={250}
+        enableBrowserTooltips={!allColumns}
         onGridReady={onGridReady}
         isExternalFilterPresent={isFilterPresent}
         doesExternalFilterPass={doesFilterPass}
         onFilterChanged={(e) => props.onShown?.(e.api.getDisplayedRowCount())}
         animateRows={false}
-        suppressColumnVirtualisation
+        suppressColumnVirtualisation={allColumns}
       />
     </div>
     <RangeStatus size={habits.size} headings={habits.headings} onHeadings={habits.setHeadings} canEdit={canEdit} />

@@ -36,10 +36,12 @@ export const scheduleKey = (projectId: string) => ["schedule", projectId] as con
 
 /**
  * The project's data for every page under /projects/[id]: one TanStack Query cache seeded with
- * the schedule the server rendered, the units shown, and the notices (errors and confirmations).
+ * the schedule the server loaded (handed over as JSON text), the units shown, and the notices (errors and confirmations).
  */
-export function ScheduleProvider({ initial, preferences, canEdit, children }: { initial: TSchedule; preferences: TPreferences; canEdit: boolean; children: ReactNode }) {
+export function ScheduleProvider({ initialJson, preferences, canEdit, children }: { initialJson: string; preferences: TPreferences; canEdit: boolean; children: ReactNode }) {
   const [client] = useState(() => new QueryClient({ defaultOptions: { queries: { staleTime: 30_000, refetchOnWindowFocus: false } } }));
+  // The schedule as the API answers it (JSON text, read once): the same shape a refetch brings.
+  const [initial] = useState(() => JSON.parse(initialJson) as TSchedule);
   useState(() => {
     client.setQueryData(scheduleKey(initial.project.id), initial);
     client.setQueryData(PREFERENCES_KEY, preferences);
