@@ -41,8 +41,20 @@ export function ZoneTotalsPanel({ schedule, results, resultsOf }: { schedule: TS
   }, [later, open, resultsOf]);
   const byCase = all?.byCase ?? [];
   const current = schedule.design_cases.find((d) => d.id === results.design_case_id);
-  const breakdowns = useMemo(() => (current ? caseBreakdowns(engineSchedule(schedule), engineDesignCase(current), panelCaseRows(results)) : null), [schedule, current, results]);
-  const bars = results.zones.map((z) => ({ zone: z.name, loss: toDisplay("power", z.loss_W, system), gain: toDisplay("power", z.gain_W, system) }));
+  // The breakdowns read every row, and the chart redraws through its own store: both follow an
+  // edit in a deferred render, after the zone totals have been painted, so typing waits only for
+  // the row and its zone.
+  const shown = useMemo(() => ({ schedule, results }), [schedule, results]);
+  const settled = useDeferredValue(shown);
+  const breakdowns = useMemo(() => {
+    const dc = settled.schedule.design_cases.find((d) => d.id === settled.results.design_case_id);
+    return dc ? caseBreakdowns(engineSchedule(settled.schedule), engineDesignCase(dc), panelCaseRows(settled.results)) : null;
+  }, [settled]);
+  // The chart follows with the breakdowns (deferred): the table above is what an edit waits for.
+  const bars = useMemo(
+    () => settled.results.zones.map((z) => ({ zone: z.name, loss: toDisplay("power", z.loss_W, system), gain: toDisplay("power", z.gain_W, system) })),
+    [settled, system],
+  );
   const total = results.zones.reduce((a, z) => ({ loss: a.loss + z.loss_W, gain: a.gain + z.gain_W }), { loss: 0, gain: 0 });
 
   return (
