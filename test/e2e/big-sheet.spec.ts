@@ -1,0 +1,60 @@
+// A sheet beyond ALL_COLUMNS_ROWS (400) rows draws only the columns in view (src/components/grid/
+// schedule-grid.tsx): the far columns are not in the page at first, and moving there by keyboard
+// draws them with their results and the Working link. The project (450 surfaces, 5 duct runs) is
+// made through the API as the demo consultant on the paid plan, and deleted afterwards.
+import { expect, test, type Page } from "@playwright/test";
+import { bigProject } from "../../bench/lib/big-schedule";
+import { usePaidDemoFirm } from "./support/paid-demo-firm";
+import { signIn } from "./support/sign-in";
+
+test.describe.configure({ timeout: 180_000 });
+test.use({ actionTimeout: 20_000, viewport: { width: 1366, height: 768 } });
+
+const db = usePaidDemoFirm();
+
+/** The API as the signed-in person (their session cookie, the app's own origin). */
+function apiOf(page: Page) {
+  const origin = new URL(page.url()).origin;
+  return async (method: string, path: string, body?: unknown, type = "application/json") => {
+    const res = await page.request.fetch(path, { method, headers: { "content-type": type, origin }, data: body === undefined ? undefined : typeof body === "string" ? body : JSON.stringify(body) });
+    const json = await res.json();
+    if (!res.ok()) throw new Error(`${method} ${path}: ${res.status()} ${JSON.stringify(json).slice(0, 300)}`);
+    return json;
+  };
+}
+
+test("a 450-row sheet draws the columns in view; End moves to the last column and draws Q and the Working link", async ({ page }) => {
+  await signIn(page, "consultant@demo.filmsheet.test");
+  const call = apiOf(page);
+  const projectId = await bigProject(call, `WIDE-${Date.now().toString(36).toUpperCase()}`, 450, 5);
+  try {
+    await call("PATCH", "/api/me/preferences", { active_column_sets: { surfaces: "everything" } });
+    await drawsColumnsInView(page, projectId);
+  } finally {
+    await db()("projects").where({ id: projectId }).del();
+  }
+});
+
+async function drawsColumnsInView(page: Page, projectId: string) {
+
+  await page.goto(`/projects/${projectId}`);
+  const firstLabel = page.locator('.ag-row:not(.ag-row-pinned)[row-index="0"] [col-id="label"]');
+  await expect(firstLabel).toHaveText("Panel 1", { timeout: 60_000 });
+  // Every column is in the set, but the heat flow, far to the right, is not drawn yet.
+  await expect(page.locator('.ag-header-cell[col-id="area_m2"]')).toHaveCount(1);
+  await expect(page.locator('.ag-header-cell[col-id="r:Q_W"]')).toHaveCount(0);
+  await expect(page.locator('.ag-row:not(.ag-row-pinned)[row-index="0"] [col-id="working"]')).toHaveCount(0);
+
+  // End on the first row's area: the grid scrolls to the last column and draws what it passes.
+  await page.locator('.ag-row:not(.ag-row-pinned)[row-index="0"] [col-id="area_m2"]').click();
+  await page.keyboard.press("End");
+  const q = page.locator('.ag-row:not(.ag-row-pinned)[row-index="0"] [col-id="r:Q_W"]');
+  await expect(page.locator('.ag-header-cell[col-id="r:Q_W"]')).toHaveCount(1);
+  await expect(q).toHaveText(/^-?[\d,]+$/, { timeout: 60_000 });
+  const link = page.locator('.ag-row:not(.ag-row-pinned)[row-index="0"] [col-id="working"] a.fs-working-link');
+  await expect(link).toHaveText("Working ›");
+  await expect(link).toHaveAttribute("aria-label", "Working of Panel 1");
+  await expect(link).toHaveAttribute("href", new RegExp(`^/projects/${projectId}/`));
+  // The area, now far to the left, is no longer drawn.
+  await expect(page.locator('.ag-header-cell[col-id="area_m2"]')).toHaveCount(0);
+}
