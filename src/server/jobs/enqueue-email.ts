@@ -5,7 +5,7 @@ import { db } from "@/server/db/knex";
 import { ZEmailMessage, type TEmailMessage } from "@/server/email/message";
 import { EMAIL_PRIORITY } from "./job-priorities";
 import { ensureJobSchema } from "./job-schema";
-import { seal, unseal } from "./sealed-payload";
+import { seal, unseal, UnopenablePayload } from "./sealed-payload";
 
 /** Sending is retried with growing pauses (about 2 s, 7 s, 20 s … up to 6 h) this many times. */
 export const EMAIL_MAX_ATTEMPTS = 15;
@@ -32,4 +32,24 @@ export function openEmailJob(payload: unknown): TEmailMessage {
   const sealed = ZSealedEmailJob.safeParse(payload);
   if (!sealed.success) return ZEmailMessage.parse(payload);
   return ZEmailMessage.parse({ kind: sealed.data.kind, to: sealed.data.to, ...(unseal(sealed.data.sealed) as object) });
+}
+
+/**
+ * The send_email task: opens the job and sends it. A job sealed under another AUTH_SECRET (the
+ * secret was rotated with e-mails still queued, or another deployment's queue) can never be
+ * opened: it is logged and dropped, not retried fifteen times with a cipher error. The log names
+ * the kind of e-mail, never the address or the link.
+ */
+export async function sendEmailJob(payload: unknown, send: (m: TEmailMessage) => Promise<unknown>): Promise<"sent" | "dropped"> {
+  let message: TEmailMessage;
+  try {
+    message = openEmailJob(payload);
+  } catch (error) {
+    if (!(error instanceof UnopenablePayload)) throw error;
+    const kind = (payload as { kind?: unknown } | null)?.kind;
+    console.error(`[jobs] a ${typeof kind === "string" ? kind : "send_email"} e-mail was dropped: ${error.message}`);
+    return "dropped";
+  }
+  await send(message);
+  return "sent";
 }

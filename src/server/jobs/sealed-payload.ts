@@ -27,10 +27,24 @@ export function seal(value: unknown): string {
   return Buffer.concat([iv, cipher.getAuthTag(), body]).toString("base64url");
 }
 
-/** Opens what `seal` made; throws when it was sealed with another key or changed. */
+/** A payload sealed with another AUTH_SECRET (or altered): no retry will ever open it. */
+export class UnopenablePayload extends Error {
+  constructor() {
+    super("the job's payload was sealed with another AUTH_SECRET (or altered) and cannot be opened");
+    this.name = "UnopenablePayload";
+  }
+}
+
+/** Opens what `seal` made; throws UnopenablePayload when it was sealed with another key or changed. */
 export function unseal(sealed: string): unknown {
   const raw = Buffer.from(sealed, "base64url");
-  const decipher = createDecipheriv("aes-256-gcm", payloadKey(), raw.subarray(0, 12));
-  decipher.setAuthTag(raw.subarray(12, 28));
-  return JSON.parse(Buffer.concat([decipher.update(raw.subarray(28)), decipher.final()]).toString("utf8"));
+  let text: string;
+  try {
+    const decipher = createDecipheriv("aes-256-gcm", payloadKey(), raw.subarray(0, 12));
+    decipher.setAuthTag(raw.subarray(12, 28));
+    text = Buffer.concat([decipher.update(raw.subarray(28)), decipher.final()]).toString("utf8");
+  } catch {
+    throw new UnopenablePayload();
+  }
+  return JSON.parse(text);
 }

@@ -6,7 +6,7 @@ import { sendEmail } from "@/server/email/send-email";
 import { BUILD_REPORT_TASK } from "@/server/reports/report-builds";
 import { recoverStalledBuilds, stallSeconds } from "@/server/reports/recover-stalled-builds";
 import { runReportBuild } from "@/server/reports/run-report-build";
-import { openEmailJob } from "./enqueue-email";
+import { sendEmailJob } from "./enqueue-email";
 import { ensureJobSchema } from "./job-schema";
 import { pruneAuthRecords } from "./prune-auth-records";
 import { jobRunnerOptions } from "./runner-options";
@@ -27,7 +27,7 @@ export function startJobWorker({ retry = true }: { retry?: boolean } = {}): Prom
     const options = jobRunnerOptions(
       env().DATABASE_URL,
       {
-        send_email: async (payload) => sendEmail(openEmailJob(payload)),
+        send_email: async (payload) => void (await sendEmailJob(payload, sendEmail)),
         [BUILD_REPORT_TASK]: async (payload) => runReportBuild(String((payload as { buildId?: unknown }).buildId)),
         // Attempts older than a day no longer count toward any limit.
         prune_sign_in_attempts: async () => {
