@@ -158,6 +158,22 @@ describe("route() on a lost connection", () => {
     await testDb()(table).delete();
   });
 
+  test("a write that committed and then could not connect for a later statement is refused once (503), never repeated", async () => {
+    // What a fast restart of PostgreSQL did under load: the row's transaction committed, the next
+    // statement found "the database system is shutting down", and the write was run again (409).
+    let calls = 0;
+    const POST = route({ auth: "public" }, async () => {
+      calls++;
+      await db().transaction((trx) => trx(table).insert({ note: "committed first" }));
+      await unreachable.raw("SELECT 1");
+    });
+    const res = await call(POST, "POST", { any: 1 });
+    expect(res.status).toBe(503);
+    expect(calls).toBe(1);
+    expect(await testDb()(table).pluck("note")).toEqual(["committed first"]);
+    await testDb()(table).delete();
+  });
+
   test("a write that could not connect at all is run again, with its body, and saved once", async () => {
     let calls = 0;
     const POST = route({ auth: "public" }, async ({ req }) => {

@@ -4,7 +4,7 @@ import { z, type ZodType } from "zod";
 import type { TRole } from "@/schemas/roles";
 import type { Actor } from "@/server/auth/actor";
 import { requireActor, type AuthMode } from "@/server/auth/require-actor";
-import { isConnectionError, isNotConnectedError, waitForDatabase } from "@/server/db/connection-error";
+import { isConnectionError, waitForDatabase } from "@/server/db/connection-error";
 import { withWriteLedger } from "@/server/db/write-ledger";
 import { internalMessage, logInternalError } from "./internal-error";
 import { AppError, type AppErrorCode } from "./app-error";
@@ -107,7 +107,9 @@ async function runOnceMore<T>(work: () => Promise<T>): Promise<T> {
   if (outcome.status === "fulfilled") return outcome.value;
   const error = outcome.reason;
   if (!isConnectionError(error)) throw error;
-  if (ledger.decisive && !isNotConnectedError(error)) throw new UncertainWrite("database connection lost after a write was sent", { cause: error });
+  // Whatever the error, once a COMMIT (or a write outside a transaction) was sent the work may
+  // have saved: a later statement that cannot connect at all does not make it safe to repeat.
+  if (ledger.decisive) throw new UncertainWrite("database connection lost after a write was sent", { cause: error });
   if (!(await waitForDatabase(8000))) throw error;
   return work();
 }

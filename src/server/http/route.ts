@@ -4,7 +4,7 @@ import type { TRole } from "@/schemas/roles";
 import type { Actor } from "@/server/auth/actor";
 import { requireActor, type AuthMode } from "@/server/auth/require-actor";
 import { assertSameOrigin } from "@/server/auth/same-origin";
-import { isConnectionError, isNotConnectedError, waitForDatabase } from "@/server/db/connection-error";
+import { isConnectionError, waitForDatabase } from "@/server/db/connection-error";
 import { withWriteLedger } from "@/server/db/write-ledger";
 import { AppError } from "./app-error";
 import { readCappedBody } from "./read-bytes";
@@ -133,7 +133,9 @@ export function route<TBody = undefined, TQuery = Record<string, string | string
     // that could not connect at all, or a write whose transaction never sent its COMMIT (the
     // server rolls back a transaction whose connection goes). A write whose COMMIT was sent, or
     // that wrote outside a transaction, may have been saved: it is refused (503), never repeated.
-    const again = safe ? req : isNotConnectedError(first.cause) || !ledger.decisive ? spare : undefined;
+    // (A statement that could not connect at all says nothing of the ones before it: a request
+    // that committed and then failed to connect for a later statement is decisive all the same.)
+    const again = safe ? req : !ledger.decisive ? spare : undefined;
     if (again && (await waitForDatabase(RETRY_WAIT_MS))) {
       try {
         return await attempt(again, ctx);
