@@ -114,6 +114,18 @@ function report(title: string, latencies: number[], statuses: Map<number, number
 }
 
 /**
+ * Waits for the requests the stop cut off. autocannon closes its connections when the time is up;
+ * a PATCH whose body the app had already read still runs to its COMMIT a moment later. Read before
+ * that, the row's version misses the commit, the next run's first PATCH of the row carries a stale
+ * version (409), and the late commit counts as a lost or doubled write: the benchmark's timing, not
+ * the app's. A single-row update takes well under a second here, even under this load (p99 below);
+ * two seconds is ample.
+ */
+async function settle(ms = 2000): Promise<void> {
+  await new Promise((r) => setTimeout(r, ms));
+}
+
+/**
  * Compares acknowledged writes with the versions in the database and resets the counters. A
  * write still in flight when autocannon stopped may have committed without an answer counted:
  * those rows may hold one commit more than acknowledged; any other difference is a lost or doubled write.
@@ -195,6 +207,7 @@ async function mixed(title: string, base: string, headers: Record<string, string
   await instance;
   await faulted;
   report(`${title}: ${CLIENTS} clients, ${SECONDS} s (GET row, PATCH row, GET zones, GET project)`, latencies, statuses, SECONDS, groupsCpuSeconds(appGroups) - cpu0);
+  await settle();
   await checkWrites(db, rows, refused);
 }
 
@@ -222,6 +235,7 @@ async function updatesOnly(base: string, headers: Record<string, string>, projec
   const cpu0 = groupsCpuSeconds(appGroups);
   await instance;
   report(`single-row updates: 20 clients, ${UPDATE_SECONDS} s (goal p95 ≤ 50 ms)`, latencies, statuses, UPDATE_SECONDS, groupsCpuSeconds(appGroups) - cpu0);
+  await settle();
   await checkWrites(db, rows, refused);
 }
 

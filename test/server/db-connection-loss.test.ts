@@ -6,10 +6,12 @@
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import knexFactory, { type Knex } from "knex";
 import { createPool, db } from "@/server/db/knex";
-import { isConnectionError, isNotConnectedError } from "@/server/db/connection-error";
+import { isConnectionError, isNotConnectedError, transactionStatus } from "@/server/db/connection-error";
 import { route } from "@/server/http/route";
 import { action } from "@/server/http/action";
-import { idempotent, withWriteLedger } from "@/server/db/write-ledger";
+import { idempotent, noteTransactionId, outcomeOf, withWriteLedger, XACT_ID_COLUMN } from "@/server/db/write-ledger";
+import { updateScheduleItem } from "@/server/services/update-schedule-item";
+import { actorFor, makeMember } from "../support/checking";
 import { closeTestDb, testDb } from "../support/db";
 
 const table = `conn_loss_${process.pid}`;
@@ -37,6 +39,25 @@ async function onKilledSession<T>(work: (trx: Knex.Transaction) => Promise<T>): 
     await testDb().raw("SELECT pg_terminate_backend(?)", [rows[0].pid]);
     return work(trx);
   });
+}
+
+/**
+ * Runs `body` while a row with this note ends its own session inside COMMIT: a deferred constraint
+ * trigger runs there, so the client has sent COMMIT and cannot know whether it took effect.
+ */
+async function whoseCommitDies(note: string, body: () => Promise<void>): Promise<void> {
+  const fn = `${table}_die`;
+  await testDb().raw(`CREATE FUNCTION ${fn}() RETURNS trigger LANGUAGE plpgsql AS $$ BEGIN IF NEW.note = '${note}' THEN PERFORM pg_terminate_backend(pg_backend_pid()); END IF; RETURN NEW; END $$`);
+  await testDb().raw(`CREATE CONSTRAINT TRIGGER ${fn} AFTER INSERT ON ${table} DEFERRABLE INITIALLY DEFERRED FOR EACH ROW EXECUTE FUNCTION ${fn}()`);
+  try {
+    await body();
+  } finally {
+    await testDb().raw(`DROP TRIGGER ${fn} ON ${table}`);
+    await testDb().raw(`DROP FUNCTION ${fn}()`);
+    await testDb()(table).delete();
+    // The pool may still hold the connection that died in its COMMIT: let it fail and go.
+    for (let i = 0; i < 3; i++) await db().raw("SELECT 1").catch(() => undefined);
+  }
 }
 
 const call = (handler: (req: Request) => Promise<Response>, method: string, body?: unknown) =>
@@ -121,12 +142,7 @@ describe("route() on a lost connection", () => {
   });
 
   test("a write whose connection goes while its COMMIT is in flight is refused once (503), never repeated", async () => {
-    // A deferred constraint trigger runs inside COMMIT; this one ends its own session there, so
-    // the client has sent COMMIT and cannot know whether it took effect.
-    const fn = `${table}_die`;
-    await testDb().raw(`CREATE FUNCTION ${fn}() RETURNS trigger LANGUAGE plpgsql AS $$ BEGIN IF NEW.note = 'die at commit' THEN PERFORM pg_terminate_backend(pg_backend_pid()); END IF; RETURN NEW; END $$`);
-    await testDb().raw(`CREATE CONSTRAINT TRIGGER ${fn} AFTER INSERT ON ${table} DEFERRABLE INITIALLY DEFERRED FOR EACH ROW EXECUTE FUNCTION ${fn}()`);
-    try {
+    await whoseCommitDies("die at commit", async () => {
       let calls = 0;
       const POST = route({ auth: "public" }, async () => {
         calls++;
@@ -135,13 +151,7 @@ describe("route() on a lost connection", () => {
       const res = await call(POST, "POST", { any: 1 });
       expect(res.status).toBe(503);
       expect(calls).toBe(1);
-    } finally {
-      await testDb().raw(`DROP TRIGGER ${fn} ON ${table}`);
-      await testDb().raw(`DROP FUNCTION ${fn}()`);
-      await testDb()(table).delete();
-      // The pool may still hold the connection that died in its COMMIT: let it fail and go.
-      for (let i = 0; i < 3; i++) await db().raw("SELECT 1").catch(() => undefined);
-    }
+    });
   });
 
   test("a write that saved outside a transaction before its connection went is refused once (503), never repeated", async () => {
@@ -172,6 +182,75 @@ describe("route() on a lost connection", () => {
     expect(calls).toBe(1);
     expect(await testDb()(table).pluck("note")).toEqual(["committed first"]);
     await testDb()(table).delete();
+  });
+
+  test("a write whose COMMIT was cut off and that PostgreSQL says rolled back is run again, and saved once", async () => {
+    // As above, the session ends inside its COMMIT; this time the transaction noted its id, so
+    // the database is asked afterwards (pg_xact_status: "aborted") and the write is safe to repeat.
+    await whoseCommitDies("cut off at commit", async () => {
+      let calls = 0;
+      const POST = route({ auth: "public" }, async () => {
+        calls++;
+        const note = calls === 1 ? "cut off at commit" : "saved on the second run";
+        await db().transaction(async (trx) => noteTransactionId(await trx(table).insert({ note }).returning(trx.raw(XACT_ID_COLUMN))));
+        return { calls };
+      });
+      const res = await call(POST, "POST", { any: 1 });
+      expect(res.status).toBe(200);
+      expect(await res.json()).toEqual({ calls: 2 });
+      expect(await testDb()(table).pluck("note")).toEqual(["saved on the second run"]);
+    });
+  });
+
+  test("a write that PostgreSQL says committed is answered by the route's ifCommitted (200), never repeated; without one it is refused (503)", async () => {
+    let calls = 0;
+    const work = async () => {
+      calls++;
+      await db().transaction(async (trx) => noteTransactionId(await trx(table).insert({ note: `committed ${calls}` }).returning(trx.raw(XACT_ID_COLUMN))));
+      await unreachable.raw("SELECT 1");
+    };
+    const withAnswer = route({ auth: "public", ifCommitted: async () => ({ saved: await db()(table).orderBy("id").pluck("note") }) }, work);
+    const res = await call(withAnswer, "POST", { any: 1 });
+    expect(res.status).toBe(200);
+    expect(await res.json()).toEqual({ saved: ["committed 1"] });
+    expect(calls).toBe(1);
+    const without = await call(route({ auth: "public" }, work), "POST", { any: 1 });
+    expect(without.status).toBe(503);
+    expect(calls).toBe(2);
+    expect(await testDb()(table).orderBy("id").pluck("note")).toEqual(["committed 1", "committed 2"]);
+    await testDb()(table).delete();
+  });
+
+  test("the outcome is asked only of one noted transaction that holds the request's only COMMIT", async () => {
+    const ask = async () => "committed";
+    const noted = (n: number) => db().transaction(async (trx) => noteTransactionId(await trx(table).insert({ note: `t${n}` }).returning(trx.raw(XACT_ID_COLUMN))));
+    const one = await withWriteLedger(() => noted(1));
+    expect(one.ledger.xactId).toMatch(/^\d+$/);
+    expect(await outcomeOf(one.ledger, ask)).toBe("committed");
+    expect(await outcomeOf(one.ledger, transactionStatus)).toBe("committed");
+    const two = await withWriteLedger(async () => {
+      await noted(2);
+      await db().transaction((trx) => trx(table).insert({ note: "t3" }));
+    });
+    expect(await outcomeOf(two.ledger, ask)).toBe("unknown");
+    const outside = await withWriteLedger(async () => {
+      await db()(table).insert({ note: "t4" });
+      await noted(5);
+    });
+    expect(await outcomeOf(outside.ledger, ask)).toBe("unknown");
+    const unnoted = await withWriteLedger(() => db().transaction((trx) => trx(table).insert({ note: "t6" })));
+    expect(await outcomeOf(unnoted.ledger, ask)).toBe("unknown");
+    await testDb()(table).delete();
+  });
+
+  test("a single-row edit of a schedule notes its transaction (with its audit row), so a cut-off COMMIT can be settled", async () => {
+    const { email } = await makeMember("tarnbrook-sill", ["consultant"], "Ledger Consultant");
+    const actor = await actorFor(email);
+    const row = await testDb()("surfaces").where({ firm_id: actor.firm.id }).first("id", "project_id", "version", "label");
+    const { ledger, outcome } = await withWriteLedger(() => updateScheduleItem(actor, row.project_id, "surfaces", row.id, row.version, { label: `${row.label} (edited)` }));
+    expect(outcome.status).toBe("fulfilled");
+    expect(ledger.commits).toHaveLength(1);
+    expect(await outcomeOf(ledger, transactionStatus)).toBe("committed");
   });
 
   test("a write that could not connect at all is run again, with its body, and saved once", async () => {
@@ -234,6 +313,20 @@ describe("action() on a lost connection", () => {
     expect(await save(null, new FormData())).toEqual({ ok: true });
     expect(calls).toBe(2);
     expect(await testDb()(table).pluck("note")).toEqual(["form 2"]);
+    await testDb()(table).delete();
+  });
+
+  test("a form whose transaction PostgreSQL says committed before the connection went says it was saved, and is not run again", async () => {
+    let calls = 0;
+    const save = action({ auth: "public" }, async () => {
+      calls++;
+      await db().transaction(async (trx) => noteTransactionId(await trx(table).insert({ note: "form saved" }).returning(trx.raw(XACT_ID_COLUMN))));
+      await unreachable.raw("SELECT 1");
+    });
+    const state = await save(null, new FormData());
+    expect(state).toMatchObject({ ok: false, code: "unavailable", message: expect.stringMatching(/The change was saved/) });
+    expect(calls).toBe(1);
+    expect(await testDb()(table).pluck("note")).toEqual(["form saved"]);
     await testDb()(table).delete();
   });
 

@@ -58,3 +58,9 @@ export async function waitForDatabase(timeoutMs = 5000): Promise<boolean> {
   }
   return false;
 }
+
+/** PostgreSQL's word on a recent transaction: "committed", "aborted", "in progress" or null. */
+export async function transactionStatus(xactId: string): Promise<string | null> {
+  const { rows } = await db().raw<{ rows: { s: string | null }[] }>("SELECT pg_xact_status(?::xid8) AS s", [xactId]);
+  return rows[0]?.s ?? null;
+}

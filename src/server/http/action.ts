@@ -4,8 +4,8 @@ import { z, type ZodType } from "zod";
 import type { TRole } from "@/schemas/roles";
 import type { Actor } from "@/server/auth/actor";
 import { requireActor, type AuthMode } from "@/server/auth/require-actor";
-import { isConnectionError, waitForDatabase } from "@/server/db/connection-error";
-import { withWriteLedger } from "@/server/db/write-ledger";
+import { isConnectionError, transactionStatus, waitForDatabase } from "@/server/db/connection-error";
+import { outcomeOf, withWriteLedger } from "@/server/db/write-ledger";
 import { internalMessage, logInternalError } from "./internal-error";
 import { AppError, type AppErrorCode } from "./app-error";
 
@@ -84,6 +84,9 @@ export function action<TInput = Record<string, unknown>, TAuth extends AuthMode 
         return failed({ ok: false, code: error.code, message: error.message, ...(details.length ? { fields } : {}) });
       }
       if (error instanceof z.ZodError) return failed({ ok: false, code: "invalid_input", message: "Check the highlighted fields", fields: fieldErrors(error.issues) });
+      if (error instanceof UncertainWrite && error.saved) {
+        return failed({ ok: false, code: "unavailable", message: "The change was saved, but the database connection was lost before this page heard so. Reload the page to see it." });
+      }
       if (error instanceof UncertainWrite) {
         return failed({ ok: false, code: "unavailable", message: "The database connection was lost while saving. Reload the page to see whether the change was saved before trying again." });
       }
@@ -94,7 +97,12 @@ export function action<TInput = Record<string, unknown>, TAuth extends AuthMode 
   };
 }
 
-class UncertainWrite extends Error {}
+/** A write whose connection was lost after it was sent: `saved` when PostgreSQL says it committed. */
+class UncertainWrite extends Error {
+  constructor(readonly saved: boolean, options: ErrorOptions) {
+    super("database connection lost after a write was sent", options);
+  }
+}
 
 /**
  * Runs an action's work; when its database connection is lost (PostgreSQL restarting, a
@@ -109,7 +117,13 @@ async function runOnceMore<T>(work: () => Promise<T>): Promise<T> {
   if (!isConnectionError(error)) throw error;
   // Whatever the error, once a COMMIT (or a write outside a transaction) was sent the work may
   // have saved: a later statement that cannot connect at all does not make it safe to repeat.
-  if (ledger.decisive) throw new UncertainWrite("database connection lost after a write was sent", { cause: error });
-  if (!(await waitForDatabase(8000))) throw error;
+  // When its one transaction noted its id, PostgreSQL says whether it committed: rolled back, the
+  // work is run again; committed, the user is told it was saved.
+  if (ledger.decisive) {
+    const settled = ledger.xactId !== undefined && (await waitForDatabase(8000)) ? await outcomeOf(ledger, transactionStatus) : "unknown";
+    if (settled !== "aborted") throw new UncertainWrite(settled === "committed", { cause: error });
+  } else if (!(await waitForDatabase(8000))) {
+    throw error;
+  }
   return work();
 }

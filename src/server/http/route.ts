@@ -4,8 +4,8 @@ import type { TRole } from "@/schemas/roles";
 import type { Actor } from "@/server/auth/actor";
 import { requireActor, type AuthMode } from "@/server/auth/require-actor";
 import { assertSameOrigin } from "@/server/auth/same-origin";
-import { isConnectionError, waitForDatabase } from "@/server/db/connection-error";
-import { withWriteLedger } from "@/server/db/write-ledger";
+import { isConnectionError, transactionStatus, waitForDatabase } from "@/server/db/connection-error";
+import { outcomeOf, withWriteLedger } from "@/server/db/write-ledger";
 import { AppError } from "./app-error";
 import { readCappedBody } from "./read-bytes";
 import { internalMessage, logInternalError, requestIdOf } from "./internal-error";
@@ -30,6 +30,12 @@ export interface RouteOptions<TBody, TQuery, TParams, TAuth extends AuthMode = "
   invalidStatus?: 400 | 422;
   /** Largest accepted body in bytes (413 above it). Default 1 MB. */
   maxBodyBytes?: number;
+  /**
+   * A write whose connection went while its COMMIT was in flight, and which PostgreSQL then says
+   * committed, is answered by this (the saved state, read afresh) instead of 503. Without it the
+   * request is refused as uncertain.
+   */
+  ifCommitted?: Handler<TBody, TQuery, TParams, TAuth>;
 }
 
 export interface RouteContext<TBody, TQuery, TParams, TAuth extends AuthMode = "required"> {
@@ -86,7 +92,8 @@ export function route<TBody = undefined, TQuery = Record<string, string | string
 ): (req: Request, ctx?: { params?: Promise<Params> }) => Promise<Response> {
   const invalidStatus = options.invalidStatus ?? 422;
   const mode: AuthMode = options.auth ?? "required";
-  const attempt = async (req: Request, ctx?: { params?: Promise<Params> }): Promise<Response> => {
+  type Ctx = RouteContext<TBody, TQuery, TParams, TAuth>;
+  const attempt = async (req: Request, ctx?: { params?: Promise<Params> }, run: Handler<TBody, TQuery, TParams, TAuth> = handler): Promise<Response> => {
     try {
       // A bearer token is never sent by a browser on its own, so it needs no Origin check.
       if (mode === "public" || !req.headers.has("authorization")) assertSameOrigin(req);
@@ -102,7 +109,7 @@ export function route<TBody = undefined, TQuery = Record<string, string | string
         if (!parsed.success) return invalid(parsed.error, "body", invalidStatus);
         body = parsed.data;
       }
-      const result = await handler({ req, actor: actor as RouteContext<TBody, TQuery, TParams, TAuth>["actor"], body, query: query.data, params: params.data });
+      const result = await run({ req, actor: actor as Ctx["actor"], body, query: query.data, params: params.data });
       return result instanceof Response ? result : Response.json(result ?? null);
     } catch (error) {
       if (error instanceof AppError) return errorResponse(error);
@@ -135,13 +142,21 @@ export function route<TBody = undefined, TQuery = Record<string, string | string
     // that wrote outside a transaction, may have been saved: it is refused (503), never repeated.
     // (A statement that could not connect at all says nothing of the ones before it: a request
     // that committed and then failed to connect for a later statement is decisive all the same.)
-    const again = safe ? req : !ledger.decisive ? spare : undefined;
-    if (again && (await waitForDatabase(RETRY_WAIT_MS))) {
-      try {
-        return await attempt(again, ctx);
-      } catch (second) {
-        if (!(second instanceof LostConnection)) throw second;
+    // When its one transaction noted its id, PostgreSQL is asked what became of it: rolled back,
+    // the write is run again; committed, a route with `ifCommitted` answers with the saved state.
+    const askable = !safe && ledger.decisive && ledger.xactId !== undefined;
+    const up = (safe || !ledger.decisive || askable) && (await waitForDatabase(RETRY_WAIT_MS));
+    const settled = up && askable ? await outcomeOf(ledger, transactionStatus) : "unknown";
+    const again = safe ? req : !ledger.decisive || settled === "aborted" ? spare : undefined;
+    try {
+      if (again && up) return await attempt(again, ctx);
+      // The spare copy of the body is unused here: the answer reads the saved state afresh.
+      if (settled === "committed" && options.ifCommitted && spare) {
+        console.warn(`${req.method} ${new URL(req.url).pathname}: database connection lost while committing; PostgreSQL says it committed, answered with the saved state`);
+        return await attempt(spare, ctx, options.ifCommitted);
       }
+    } catch (second) {
+      if (!(second instanceof LostConnection)) throw second;
     }
     console.warn(`${req.method} ${new URL(req.url).pathname}: database connection lost (${first.cause instanceof Error ? first.cause.message : String(first.cause)})`);
     return errorResponse(new AppError("unavailable", "The database could not be reached just now. Try again in a moment."), 503);

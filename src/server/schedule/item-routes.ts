@@ -30,7 +30,11 @@ export const getItemRoute = (name: EntityName) =>
   route({ roles: DRAFT_READERS, params: ZItemParams }, ({ actor, params }) => getScheduleItemOrThrow(actor, params.projectId, name, params.itemId));
 
 export const updateItemRoute = (name: EntityName) =>
-  route({ roles: EDITORS, params: ZItemParams, body: ZPatch }, ({ actor, params, body }) => {
+  route({
+    roles: EDITORS, params: ZItemParams, body: ZPatch,
+    // Saved, though the connection went with the COMMIT's answer: the row as it now stands.
+    ifCommitted: ({ actor, params }) => getScheduleItemOrThrow(actor, params.projectId, name, params.itemId),
+  }, ({ actor, params, body }) => {
     const { version, ...values } = body;
     return updateScheduleItem(actor, params.projectId, name, params.itemId, version, values);
   });

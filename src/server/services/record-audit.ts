@@ -1,6 +1,7 @@
 import "server-only";
 import type { Knex } from "knex";
 import type { Actor } from "@/server/auth/actor";
+import { noteTransactionId, XACT_ID_COLUMN } from "@/server/db/write-ledger";
 import { AppError } from "@/server/http/app-error";
 
 /** One change to a project's data: which thing, what was done, and its state before and after. */
@@ -59,5 +60,10 @@ export async function recordAudit(trx: Knex.Transaction, actor: Actor, entries: 
     before: e.before === undefined ? null : JSON.stringify(e.before),
     after: e.after === undefined ? null : JSON.stringify(e.after),
   }));
-  for (let i = 0; i < rows.length; i += CHUNK) await trx("audit_log").insert(rows.slice(i, i + CHUNK));
+  for (let i = 0; i < rows.length; i += CHUNK) {
+    // The first statement also names the transaction, so a request that loses its connection
+    // while committing can learn afterwards whether it committed (write-ledger.ts).
+    if (i === 0) noteTransactionId(await trx("audit_log").insert(rows.slice(i, i + CHUNK)).returning(trx.raw(XACT_ID_COLUMN)));
+    else await trx("audit_log").insert(rows.slice(i, i + CHUNK));
+  }
 }
