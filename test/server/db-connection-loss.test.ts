@@ -12,6 +12,7 @@ import { action } from "@/server/http/action";
 import { idempotent, noteTransactionId, outcomeOf, withWriteLedger, XACT_ID_COLUMN } from "@/server/db/write-ledger";
 import { updateScheduleItem } from "@/server/services/update-schedule-item";
 import { actorFor, makeMember } from "../support/checking";
+import { makeProject } from "../support/schedule-fixtures";
 import { closeTestDb, testDb } from "../support/db";
 
 const table = `conn_loss_${process.pid}`;
@@ -246,7 +247,9 @@ describe("route() on a lost connection", () => {
   test("a single-row edit of a schedule notes its transaction (with its audit row), so a cut-off COMMIT can be settled", async () => {
     const { email } = await makeMember("tarnbrook-sill", ["consultant"], "Ledger Consultant");
     const actor = await actorFor(email);
-    const row = await testDb()("surfaces").where({ firm_id: actor.firm.id }).first("id", "project_id", "version", "label");
+    // A fixture project of its own: the demo project's rows are the browser tests' (same database).
+    const fx = await makeProject("tarnbrook-sill");
+    const row = await testDb()("surfaces").where({ id: fx.surfaceIds[0] }).first("id", "project_id", "version", "label");
     const { ledger, outcome } = await withWriteLedger(() => updateScheduleItem(actor, row.project_id, "surfaces", row.id, row.version, { label: `${row.label} (edited)` }));
     expect(outcome.status).toBe("fulfilled");
     expect(ledger.commits).toHaveLength(1);
