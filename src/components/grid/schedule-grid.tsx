@@ -20,14 +20,15 @@ import {
   TextEditorModule,
   TextFilterModule,
   TooltipModule,
+  createGrid,
   type CellEditRequestEvent,
   type ColDef,
   type FilterChangedEvent,
   type SelectionChangedEvent,
   type GetRowIdParams,
   type RowSelectionOptions,
+  type GridOptions,
   type SelectionColumnDef, type GridApi, type GridReadyEvent, type IRowNode } from "ag-grid-community";
-import { AgGridReact } from "ag-grid-react";
 import { useCallback, useEffect, useMemo, useRef, useState, type ClipboardEvent } from "react";
 import type { RowOutcome } from "@/schedule/result-columns";
 import type { TSchedule, TSheet } from "@/schemas/schedule";
@@ -118,6 +119,7 @@ export function ScheduleGrid(props: ScheduleGridProps) {
   const rowFilter = props.rowFilter ?? "all";
   const [api, setApi] = useState<GridApi<Row> | null>(null);
   const wrapper = useRef<HTMLDivElement>(null);
+  const host = useRef<HTMLDivElement>(null);
   const rows = (sheet === "surfaces" ? schedule.surfaces : schedule.duct_runs) as unknown as Row[];
   const context = useRef<GridContext>({ projectId: schedule.project.id, sheet, system, canEdit, results, rowFilter, cellErrors, totals, rowCount: rows.length, buildups: new Map() }).current;
   Object.assign(context, { projectId: schedule.project.id, sheet, system, canEdit, results, rowFilter, cellErrors, totals, rowCount: rows.length, buildups: new Map(schedule.buildups.map((b) => [b.id, b])), caseId: props.caseId });
@@ -203,6 +205,47 @@ export function ScheduleGrid(props: ScheduleGridProps) {
   const onSelectionChanged = useCallback((e: SelectionChangedEvent<Row>) => latest.current.onSelection(e.api.getSelectedRows().map((r) => r.id)), []);
   const onFilterChanged = useCallback((e: FilterChangedEvent<Row>) => latest.current.onShown?.(e.api.getDisplayedRowCount()), []);
 
+  // The grid is AG Grid's own (createGrid), not its React wrapper: the wrapper draws every row and
+  // cell as React components, which on a big sheet doubles the work of each scrolled frame and of
+  // the first rows. The options below are given once; those that change are set on the grid.
+  const options = useRef<GridOptions<Row>>(null);
+  options.current ??= {
+    theme: gridTheme,
+    rowData: rows,
+    columnDefs,
+    context,
+    getRowId: rowId,
+    readOnlyEdit: true,
+    onCellEditRequest,
+    pinnedBottomRowData: pinned,
+    defaultColDef: DEFAULT_COL_DEF,
+    selectionColumnDef: SELECTION_COL_DEF,
+    rowSelection: canEdit ? ROW_SELECTION : undefined,
+    onSelectionChanged,
+    singleClickEdit: false,
+    stopEditingWhenCellsLoseFocus: true,
+    enterNavigatesVerticallyAfterEdit: true,
+    tooltipShowDelay: 250,
+    enableBrowserTooltips: !allColumns,
+    onGridReady,
+    isExternalFilterPresent: isFilterPresent,
+    doesExternalFilterPass: doesFilterPass,
+    onFilterChanged,
+    animateRows: false,
+    suppressColumnVirtualisation: allColumns,
+  };
+  useEffect(() => {
+    const made = createGrid<Row>(host.current!, options.current!);
+    return () => {
+      made.destroy();
+      setApi(null);
+    };
+  }, []);
+  useGridOption(api, "rowData", rows);
+  useGridOption(api, "columnDefs", columnDefs);
+  useGridOption(api, "pinnedBottomRowData", pinned);
+  useGridOption(api, "rowSelection", canEdit ? ROW_SELECTION : undefined);
+
   const onPaste = (e: ClipboardEvent<HTMLDivElement>) => {
     if (!api || !canEdit || api.getEditingCells().length > 0) return;
     const focused = api.getFocusedCell();
@@ -219,35 +262,21 @@ export function ScheduleGrid(props: ScheduleGridProps) {
     <>
     <div ref={wrapper} className="fs-grid min-h-[18rem] min-w-0 flex-1 print:h-auto" onPaste={onPaste} data-sheet={sheet} {...habits.scopeProps}>
       <style>{habits.css}</style>
-      <AgGridReact<Row>
-        theme={gridTheme}
-        rowData={rows}
-        columnDefs={columnDefs}
-        context={context}
-        getRowId={rowId}
-        readOnlyEdit
-        onCellEditRequest={onCellEditRequest}
-        pinnedBottomRowData={pinned}
-        defaultColDef={DEFAULT_COL_DEF}
-        selectionColumnDef={SELECTION_COL_DEF}
-        rowSelection={canEdit ? ROW_SELECTION : undefined}
-        onSelectionChanged={onSelectionChanged}
-        singleClickEdit={false}
-        stopEditingWhenCellsLoseFocus
-        enterNavigatesVerticallyAfterEdit
-        tooltipShowDelay={250}
-        enableBrowserTooltips={!allColumns}
-        onGridReady={onGridReady}
-        isExternalFilterPresent={isFilterPresent}
-        doesExternalFilterPass={doesFilterPass}
-        onFilterChanged={onFilterChanged}
-        animateRows={false}
-        suppressColumnVirtualisation={allColumns}
-      />
+      <div ref={host} className="h-full w-full" />
     </div>
     <RangeStatus size={habits.size} headings={habits.headings} onHeadings={habits.setHeadings} canEdit={canEdit} />
     </>
   );
+}
+
+/** Sets a grid option when its value changes after the grid was made with it. */
+function useGridOption<K extends keyof GridOptions<Row>>(api: GridApi<Row> | null, key: K, value: GridOptions<Row>[K]): void {
+  const given = useRef(value);
+  useEffect(() => {
+    if (!api || given.current === value) return;
+    given.current = value;
+    api.setGridOption(key as never, value as never);
+  }, [api, key, value]);
 }
 
 /** Row nodes whose results object changed, or "all" when so many did that one whole refresh is cheaper. */
