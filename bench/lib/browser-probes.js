@@ -19,7 +19,8 @@
     if (b.firstRow === null && document.querySelector(".ag-grid-scrolling-rows .ag-row")) b.firstRow = performance.now();
     if (b.firstResult === null) {
       const q = document.querySelector('.ag-grid-scrolling-rows .ag-row [col-id="r:Q_W"]');
-      if (q && (q.textContent ?? "").trim() !== "") b.firstResult = performance.now();
+      // A number, not the dash a cell shows while its results are on their way.
+      if (q && /\d/.test(q.textContent ?? "")) b.firstResult = performance.now();
     }
     if (b.firstRow !== null && b.firstResult !== null) first.disconnect();
   });

@@ -73,6 +73,9 @@ const SELECTION_COL_DEF: SelectionColumnDef = { pinned: "left", width: 48, resiz
 const ROW_SELECTION: RowSelectionOptions<Row> = { mode: "multiRow", checkboxes: true, headerCheckbox: true, enableClickSelection: false };
 const rowId = (p: GetRowIdParams<Row>) => p.data.id;
 
+/** Rows a big sheet is first made with (more than a tall screen shows). */
+const FIRST_SCREEN_ROWS = 60;
+
 /** Sheets up to this many rows draw every column; bigger ones only those in view. */
 export const ALL_COLUMNS_ROWS = 400;
 
@@ -208,10 +211,14 @@ export function ScheduleGrid(props: ScheduleGridProps) {
   // The grid is AG Grid's own (createGrid), not its React wrapper: the wrapper draws every row and
   // cell as React components, which on a big sheet doubles the work of each scrolled frame and of
   // the first rows. The options below are given once; those that change are set on the grid.
+  // A big sheet is made with its first screen of rows, and given the rest in the next task, after
+  // those rows are painted: making 5,000 row nodes is ≈ 0.1 s the first rows need not wait for.
+  const latestRows = useRef(rows);
+  latestRows.current = rows;
   const options = useRef<GridOptions<Row>>(null);
   options.current ??= {
     theme: gridTheme,
-    rowData: rows,
+    rowData: rows.length > FIRST_SCREEN_ROWS * 4 ? rows.slice(0, FIRST_SCREEN_ROWS) : rows,
     columnDefs,
     context,
     getRowId: rowId,
@@ -236,7 +243,13 @@ export function ScheduleGrid(props: ScheduleGridProps) {
   };
   useEffect(() => {
     const made = createGrid<Row>(host.current!, options.current!);
+    let rest: ReturnType<typeof setTimeout> | undefined;
+    const frame = options.current!.rowData === latestRows.current ? 0 : requestAnimationFrame(() => {
+      rest = setTimeout(() => made.setGridOption("rowData", latestRows.current));
+    });
     return () => {
+      cancelAnimationFrame(frame);
+      clearTimeout(rest);
       made.destroy();
       setApi(null);
     };

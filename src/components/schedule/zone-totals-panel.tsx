@@ -1,16 +1,21 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useDeferredValue, useMemo, useState } from "react";
 import { caseBreakdowns, exclusionsSentence, scheduleBreakdowns, type ScheduleResults } from "@/calc/index";
 import type { TDesignCase, TSchedule } from "@/schemas/schedule";
 import { engineDesignCase, engineSchedule, resultsFor } from "@/schedule/engine-schedule";
 import { formatQuantity } from "@/units/format";
 import { toDisplay, unitLabel } from "@/units/units";
-import { ZoneTotalsChart } from "@/components/charts/zone-totals-chart";
 import { EngineeringCaution } from "@/components/engineering-caution";
 import { panelCaseRows } from "./breakdown-rows";
 import { useProject } from "./schedule-context";
 import { CaseBreakdownTables, ZonePeaks } from "./zone-breakdowns";
+
+// The chart's library (≈ 0.45 MB of script with its store) is fetched and run after the page is
+// up (the chart is drawn in a deferred render anyway), so the grid's first rows do not wait for it.
+const ChartSpace = () => <div aria-hidden className="h-[284px]" />;
+const ZoneTotalsChart = dynamic(() => import("@/components/charts/zone-totals-chart").then((m) => m.ZoneTotalsChart), { ssr: false, loading: ChartSpace });
 
 /**
  * Zone totals beside the grid: heat loss and gain of each zone in the chosen design case, in W
@@ -43,16 +48,17 @@ export function ZoneTotalsPanel({ schedule, results, resultsOf }: { schedule: TS
   const current = schedule.design_cases.find((d) => d.id === results.design_case_id);
   // The breakdowns read every row, and the chart redraws through its own store: both follow an
   // edit in a deferred render, after the zone totals have been painted, so typing waits only for
-  // the row and its zone.
+  // the row and its zone. On the page's first render they are not drawn at all (the deferred
+  // value starts as null), so loading the page — the grid's first rows — does not wait for them.
   const shown = useMemo(() => ({ schedule, results }), [schedule, results]);
-  const settled = useDeferredValue(shown);
+  const settled = useDeferredValue<typeof shown | null>(shown, null);
   const breakdowns = useMemo(() => {
-    const dc = settled.schedule.design_cases.find((d) => d.id === settled.results.design_case_id);
-    return dc ? caseBreakdowns(engineSchedule(settled.schedule), engineDesignCase(dc), panelCaseRows(settled.results)) : null;
+    const dc = settled?.schedule.design_cases.find((d) => d.id === settled.results.design_case_id);
+    return settled && dc ? caseBreakdowns(engineSchedule(settled.schedule), engineDesignCase(dc), panelCaseRows(settled.results)) : null;
   }, [settled]);
   // The chart follows with the breakdowns (deferred): the table above is what an edit waits for.
   const bars = useMemo(
-    () => settled.results.zones.map((z) => ({ zone: z.name, loss: toDisplay("power", z.loss_W, system), gain: toDisplay("power", z.gain_W, system) })),
+    () => settled?.results.zones.map((z) => ({ zone: z.name, loss: toDisplay("power", z.loss_W, system), gain: toDisplay("power", z.gain_W, system) })) ?? null,
     [settled, system],
   );
   const total = results.zones.reduce((a, z) => ({ loss: a.loss + z.loss_W, gain: a.gain + z.gain_W }), { loss: 0, gain: 0 });
@@ -125,7 +131,7 @@ export function ZoneTotalsPanel({ schedule, results, resultsOf }: { schedule: TS
             Fabric: surfaces to outside air. Distribution: duct runs crossing unconditioned or outdoor space. {exclusionsSentence()}
           </p>
         </div>
-        <ZoneTotalsChart data={bars} unit={W} />
+        {bars ? <ZoneTotalsChart data={bars} unit={W} /> : <ChartSpace />}
       </div>
       {breakdowns ? (
         <details open className="text-small" data-testid="breakdowns">
