@@ -41,10 +41,13 @@ test("the panel shows the case's totals by orientation, element and build-up, an
   const fabricLoss = fabric.reduce((a, t) => a + num(t), 0);
   for (const t of [orientation, buildup]) expect(Math.abs(num(await totalRow(t).locator("td.text-frost").innerText()) - fabricLoss)).toBeLessThanOrEqual(4); // four zones rounded to 1 W
 
-  // The chart's library arrives after the page: the chart is drawn, a bar pair for each of the four zones.
+  // The chart's library arrives after the page: the chart is drawn, one tick for each zone of the
+  // table (other browser specs add zones to the demo project before this one runs).
   const chart = panel.getByRole("figure", { name: /Heat loss and heat gain by zone/ });
   await expect(chart.locator(".recharts-bar-rectangle").first()).toBeVisible();
-  await expect(chart.locator(".recharts-xAxis .recharts-cartesian-axis-tick")).toHaveCount(4);
+  const zones = await panel.getByRole("table", { name: "Zone totals for the design case" }).locator("tr[data-zone]").count();
+  expect(zones).toBeGreaterThanOrEqual(4);
+  await expect(chart.locator(".recharts-xAxis .recharts-cartesian-axis-tick")).toHaveCount(zones);
 
   // The slab over ground and the duct inside the reading room are counted and named, not dropped.
   const left = panel.getByTestId("breakdown-left-out");
