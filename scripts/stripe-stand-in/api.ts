@@ -17,6 +17,10 @@ const list = (data: StripeObject[], url: string, limit: unknown) => {
   return { object: "list", url, has_more: newestFirst.length > n, data: newestFirst.slice(0, n) };
 };
 
+/** An invoice as Stripe answers it once finalised: with the address of its PDF (served by server.ts). */
+const invoiceWithPdf = (invoice: StripeObject, base: string): StripeObject => ({ ...invoice, invoice_pdf: `${base}/invoices/${String(invoice.id)}/pdf` });
+const withPdf = (page: ReturnType<typeof list>, base: string) => ({ ...page, data: page.data.map((i) => invoiceWithPdf(i, base)) });
+
 type Handler = (store: Store, params: Record<string, unknown>, match: string[], baseUrl: string) => ApiResult;
 const ok = (body: unknown, events?: StripeObject[]): ApiResult => ({ status: 200, body, ...(events ? { events } : {}) });
 const s = (store: Store) => store.state;
@@ -38,8 +42,12 @@ const ROUTES: [string, RegExp, Handler][] = [
   ["DELETE", /^\/v1\/subscriptions\/([^/]+)$/, (store, _p, m) => ok(s(store).subscriptions[m[1]!], ops.cancelSubscription(store, m[1]!))],
   ["POST", /^\/v1\/billing_portal\/sessions$/, (store, p, _m, base) => ok(ops.createPortalSession(store, p, base))],
   ["POST", /^\/v1\/invoices\/create_preview$/, (store, p) => ok(ops.previewInvoice(store, p))],
-  ["GET", /^\/v1\/invoices$/, (store, p) => ok(list(Object.values(s(store).invoices).filter((x) => !p.customer || x.customer === p.customer), "/v1/invoices", p.limit))],
-  ["GET", /^\/v1\/invoices\/([^/]+)$/, (store, _p, m) => ok(getOrThrow(s(store).invoices, "invoice", m[1]!))],
+  [
+    "GET",
+    /^\/v1\/invoices$/,
+    (store, p, _m, base) => ok(withPdf(list(Object.values(s(store).invoices).filter((x) => !p.customer || x.customer === p.customer), "/v1/invoices", p.limit), base)),
+  ],
+  ["GET", /^\/v1\/invoices\/([^/]+)$/, (store, _p, m, base) => ok(invoiceWithPdf(getOrThrow(s(store).invoices, "invoice", m[1]!), base))],
   ["GET", /^\/v1\/events$/, (store, p) => ok(list(s(store).events.filter((e) => !p.type || e.type === p.type), "/v1/events", p.limit))],
   ["GET", /^\/v1\/events\/([^/]+)$/, (store, _p, m) => ok(store.state.events.find((e) => e.id === m[1]) ?? getOrThrow({}, "event", m[1]!))],
 ];

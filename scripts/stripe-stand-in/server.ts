@@ -7,6 +7,7 @@ import { parseForm } from "./form-body";
 import * as ops from "./objects";
 import { StandInError, getOrThrow } from "./objects";
 import { checkoutPage, portalPage } from "./pages";
+import { invoicePdf } from "./invoice-pdf";
 import { Store, type StripeObject } from "./store";
 import { deliverAll, deliverEvent, type WebhookTarget } from "./webhooks";
 
@@ -87,6 +88,11 @@ export async function startStandIn(options: StandInOptions): Promise<StandIn> {
       await change(() => ops.completeCheckout(store, m![1]!));
       const session = store.state.checkoutSessions[m[1]!]!;
       return redirect(res, String(session.success_url).replace("{CHECKOUT_SESSION_ID}", session.id));
+    }
+    if (method === "GET" && (m = /^\/invoices\/([^/]+)\/pdf$/.exec(path))) {
+      const invoice = getOrThrow(store.state.invoices, "invoice", m[1]!);
+      const pdf = invoicePdf(invoice);
+      return void res.writeHead(200, { "content-type": "application/pdf", "content-length": pdf.length, "content-disposition": `inline; filename="${String(invoice.number ?? invoice.id)}.pdf"` }).end(pdf);
     }
     if (method === "GET" && (m = /^\/portal\/([^/]+)$/.exec(path))) return sendHtml(res, portalPage(store, getOrThrow(store.state.portalSessions, "portal session", m[1]!)));
     if (method === "POST" && (m = /^\/portal\/([^/]+)\/(fail-renewal|pay-overdue|cancel)\/([^/]+)$/.exec(path))) {

@@ -93,6 +93,11 @@ test("the demo admin upgrades through Checkout; a row beyond the free 40 and the
   await expect(admin.getByRole("region", { name: "Plan" })).toContainText("Paid plan");
   await expect(admin.getByRole("region", { name: "Invoices" }).getByRole("cell", { name: /^FSLOCAL-/ })).toHaveCount(1);
   await expect(admin.getByRole("region", { name: "Invoices" })).toContainText("paid");
+  // The invoice links its PDF (served by Stripe; here by the stand-in).
+  const pdfLink = admin.getByRole("region", { name: "Invoices" }).getByRole("link", { name: /^PDF of invoice FSLOCAL-/ });
+  const pdf = await admin.request.get((await pdfLink.getAttribute("href"))!);
+  expect(pdf.headers()["content-type"]).toBe("application/pdf");
+  expect((await pdf.body()).subarray(0, 5).toString()).toBe("%PDF-");
   await expect(admin.getByRole("button", { name: "Change seats" })).toBeVisible();
 
   // The consultant's row is now saved …

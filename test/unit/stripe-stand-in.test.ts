@@ -6,6 +6,7 @@ import type { AddressInfo } from "node:net";
 import Stripe from "stripe";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { startStripeStandIn, type StandIn } from "../../scripts/stripe-stand-in";
+import { pdfPages } from "../support/pdf-text";
 
 const SECRET = "whsec_unit_test_secret";
 const PRICE = "price_filmsheet_seat_monthly";
@@ -111,6 +112,22 @@ describe("a seat subscription from Checkout to cancellation", () => {
     expect(preview.amount_due).toBe(9 * 2900);
     const invoices = await stripe.invoices.list({ customer: customer.id, limit: 10 });
     expect(invoices.data.map((i) => [i.status, i.amount_paid])).toEqual([["paid", 7 * 2900]]);
+  });
+
+  test("every invoice links its PDF, which names the invoice, the customer and the amount", async () => {
+    const [invoice] = (await stripe.invoices.list({ customer: customer.id, limit: 1 })).data;
+    expect(invoice!.invoice_pdf).toBe(`${standIn.url}/invoices/${invoice!.id}/pdf`);
+    expect((await stripe.invoices.retrieve(invoice!.id)).invoice_pdf).toBe(invoice!.invoice_pdf);
+    const res = await fetch(invoice!.invoice_pdf!);
+    expect(res.headers.get("content-type")).toBe("application/pdf");
+    const bytes = new Uint8Array(await res.arrayBuffer());
+    expect(Buffer.from(bytes.subarray(0, 5)).toString()).toBe("%PDF-");
+    const [text] = await pdfPages(bytes);
+    expect(text).toContain(`Invoice ${invoice!.number}`);
+    expect(text).toContain("billing@tarn.test");
+    expect(text).toContain("£203.00"); // 7 seats × £29.00, paid at Checkout
+    expect(text).toContain("not a tax invoice");
+    expect((await fetch(`${standIn.url}/invoices/in_missing/pdf`)).status).toBe(404);
   });
 
   test("a declined renewal leaves an open invoice and the subscription past due; paying it recovers", async () => {
