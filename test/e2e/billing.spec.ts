@@ -73,10 +73,11 @@ test("the demo admin upgrades through Checkout; a row beyond the free 40 and the
   await admin.getByRole("link", { name: "Upgrade" }).click();
   await expect(admin).toHaveURL(/\/firm\/billing$/);
   await expect(admin.getByRole("region", { name: "Plan" })).toContainText("Free plan");
-  // The form offers the seats in use (4 demo members, plus whatever earlier suites added); buy two more.
+  // The form offers the seats in use (4 demo members, plus whatever earlier suites added), and never
+  // fewer than the free plan's 5 (a firm upgrading keeps at least what it had); buy two more.
   const field = admin.getByRole("spinbutton", { name: "Seats" });
   const inUse = Number(await field.inputValue());
-  expect(inUse).toBeGreaterThanOrEqual(4);
+  expect(inUse).toBeGreaterThanOrEqual(5);
   const seats = inUse + 2;
   await field.fill(String(seats));
   await admin.getByRole("button", { name: "Continue to checkout" }).click();
