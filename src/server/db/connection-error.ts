@@ -1,5 +1,6 @@
 import "server-only";
 import { db } from "./knex";
+import { outcomeOf, type Ledger } from "./write-ledger";
 
 // SQLSTATE classes and codes that mean "the connection went, not the query was wrong":
 // 08 connection exception, 57P01–57P03 shutdown / crash / cannot connect now (starting up).
@@ -63,4 +64,20 @@ export async function waitForDatabase(timeoutMs = 5000): Promise<boolean> {
 export async function transactionStatus(xactId: string): Promise<string | null> {
   const { rows } = await db().raw<{ rows: { s: string | null }[] }>("SELECT pg_xact_status(?::xid8) AS s", [xactId]);
   return rows[0]?.s ?? null;
+}
+
+/**
+ * What to do with a request whose database connection was lost, once it has waited for the
+ * database (at most `waitMs`): "repeat" — a read, a write that sent nothing decisive, or one whose
+ * one noted transaction PostgreSQL says rolled back; "committed" — that transaction committed;
+ * "uncertain" — a write that may have saved and cannot be asked about; "down" — a request that
+ * could be repeated, but the database did not answer in time.
+ */
+export async function afterLostConnection(ledger: Ledger, read: boolean, waitMs: number): Promise<"repeat" | "committed" | "uncertain" | "down"> {
+  const askable = ledger.decisive && ledger.xactId !== undefined;
+  if (!read && ledger.decisive && !askable) return "uncertain";
+  if (!(await waitForDatabase(waitMs))) return read || !ledger.decisive ? "down" : "uncertain";
+  if (read || !ledger.decisive) return "repeat";
+  const outcome = await outcomeOf(ledger, transactionStatus);
+  return outcome === "aborted" ? "repeat" : outcome === "committed" ? "committed" : "uncertain";
 }

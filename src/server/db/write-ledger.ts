@@ -8,7 +8,7 @@ import { AsyncLocalStorage } from "node:async_hooks";
  * changed it and is refused instead. Knex reports every statement, those inside transactions
  * included (with their transaction id), through its "query" event, in the caller's async context.
  */
-interface Ledger {
+export interface Ledger {
   /** A COMMIT, or a statement outside a transaction that may write, has been sent. */
   decisive: boolean;
   /** Statements run through `idempotent()`: repeating them changes nothing that matters. */

@@ -4,8 +4,8 @@ import { z, type ZodType } from "zod";
 import type { TRole } from "@/schemas/roles";
 import type { Actor } from "@/server/auth/actor";
 import { requireActor, type AuthMode } from "@/server/auth/require-actor";
-import { isConnectionError, transactionStatus, waitForDatabase } from "@/server/db/connection-error";
-import { outcomeOf, withWriteLedger } from "@/server/db/write-ledger";
+import { afterLostConnection, isConnectionError } from "@/server/db/connection-error";
+import { withWriteLedger } from "@/server/db/write-ledger";
 import { internalMessage, logInternalError } from "./internal-error";
 import { AppError, type AppErrorCode } from "./app-error";
 
@@ -119,11 +119,8 @@ async function runOnceMore<T>(work: () => Promise<T>): Promise<T> {
   // have saved: a later statement that cannot connect at all does not make it safe to repeat.
   // When its one transaction noted its id, PostgreSQL says whether it committed: rolled back, the
   // work is run again; committed, the user is told it was saved.
-  if (ledger.decisive) {
-    const settled = ledger.xactId !== undefined && (await waitForDatabase(8000)) ? await outcomeOf(ledger, transactionStatus) : "unknown";
-    if (settled !== "aborted") throw new UncertainWrite(settled === "committed", { cause: error });
-  } else if (!(await waitForDatabase(8000))) {
-    throw error;
-  }
+  const next = await afterLostConnection(ledger, false, 8000);
+  if (next === "down") throw error;
+  if (next !== "repeat") throw new UncertainWrite(next === "committed", { cause: error });
   return work();
 }

@@ -4,8 +4,8 @@ import type { TRole } from "@/schemas/roles";
 import type { Actor } from "@/server/auth/actor";
 import { requireActor, type AuthMode } from "@/server/auth/require-actor";
 import { assertSameOrigin } from "@/server/auth/same-origin";
-import { isConnectionError, transactionStatus, waitForDatabase } from "@/server/db/connection-error";
-import { outcomeOf, withWriteLedger } from "@/server/db/write-ledger";
+import { afterLostConnection, isConnectionError } from "@/server/db/connection-error";
+import { withWriteLedger } from "@/server/db/write-ledger";
 import { AppError } from "./app-error";
 import { readCappedBody } from "./read-bytes";
 import { internalMessage, logInternalError, requestIdOf } from "./internal-error";
@@ -144,14 +144,11 @@ export function route<TBody = undefined, TQuery = Record<string, string | string
     // that committed and then failed to connect for a later statement is decisive all the same.)
     // When its one transaction noted its id, PostgreSQL is asked what became of it: rolled back,
     // the write is run again; committed, a route with `ifCommitted` answers with the saved state.
-    const askable = !safe && ledger.decisive && ledger.xactId !== undefined;
-    const up = (safe || !ledger.decisive || askable) && (await waitForDatabase(RETRY_WAIT_MS));
-    const settled = up && askable ? await outcomeOf(ledger, transactionStatus) : "unknown";
-    const again = safe ? req : !ledger.decisive || settled === "aborted" ? spare : undefined;
+    const next = await afterLostConnection(ledger, safe, RETRY_WAIT_MS);
     try {
-      if (again && up) return await attempt(again, ctx);
+      if (next === "repeat") return await attempt(safe ? req : spare!, ctx);
       // The spare copy of the body is unused here: the answer reads the saved state afresh.
-      if (settled === "committed" && options.ifCommitted && spare) {
+      if (next === "committed" && options.ifCommitted && spare) {
         console.warn(`${req.method} ${new URL(req.url).pathname}: database connection lost while committing; PostgreSQL says it committed, answered with the saved state`);
         return await attempt(spare, ctx, options.ifCommitted);
       }
