@@ -6,8 +6,13 @@
 // phases: read, parse, engine, serialize, write, in wall and CPU time (CPU time includes V8's GC
 // threads; other work on a shared machine does not inflate it much). From 1 MiB the CLI computes
 // the second half of the cases on a worker thread; the same runs with FILMSHEET_CALC_THREADS=1 give
-// the one-thread figures beside them. Prints figures, asserts nothing.
+// the one-thread figures beside them. Last, the floor (bench/lib/io-floor.mjs): a process that
+// only reads, decodes and parses the same body and writes an answer of the same bytes, timed the
+// same way, bounds what any JSON-in, JSON-out calculator can reach on this machine. Prints
+// figures, asserts nothing.
 import { spawn } from "node:child_process";
+import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { performance } from "node:perf_hooks";
 import { ROOT, ensureBundle } from "../scripts/lib/calc-bundle.mjs";
@@ -17,6 +22,7 @@ const ROWS = 10_000;
 const REPEATS = 5;
 const GOAL = 100_000;
 const LAUNCHER = join(ROOT, "scripts", "run-calc.mjs");
+const FLOOR = join(ROOT, "bench", "lib", "io-floor.mjs");
 
 interface Timing {
   cases: number;
@@ -107,4 +113,55 @@ for (const threads of [2, 1] as const) {
     const ph = Object.entries(w.worker_phases).map(([k, v]) => `${k} ${v.wall_ms.toFixed(0)}`).join(", ");
     console.log(`  worker: ${fmt(cases.length - w.first_half_cases)} of the cases; wall ms ${ph}`);
   }
+}
+
+// The floor: the same body in and the same answer's bytes out, no engine and no serializing.
+interface FloorTiming {
+  answer_load_ms: number;
+  read_ms: number;
+  parse_ms: number;
+  write_ms: number;
+  cpu_ms: number;
+}
+function runFloor(body: Buffer, answerFile: string): Promise<{ wallMs: number; timing: FloorTiming }> {
+  return new Promise((resolve, reject) => {
+    const t0 = performance.now();
+    const child = spawn(process.execPath, [FLOOR, answerFile]);
+    let err = "";
+    child.stdout.on("data", () => undefined);
+    child.stderr.on("data", (b: Buffer) => (err += b.toString()));
+    child.on("error", reject);
+    child.on("close", (code) => {
+      const wallMs = performance.now() - t0;
+      if (code !== 0) return reject(new Error(`io floor exited ${code}: ${err}`));
+      resolve({ wallMs, timing: JSON.parse(err.trim().split("\n").pop()!) as FloorTiming });
+    });
+    child.stdin.end(body);
+  });
+}
+const dir = mkdtempSync(join(tmpdir(), "bench-cli-"));
+try {
+  const answerFile = join(dir, "answer.json");
+  const emptyAnswer = join(dir, "empty.json");
+  writeFileSync(answerFile, first.out!);
+  writeFileSync(emptyAnswer, '{"results":[]}\n');
+  const floorStarts: number[] = [];
+  const floors: { net: number; timing: FloorTiming }[] = [];
+  for (let i = 0; i < REPEATS; i++) {
+    floorStarts.push((await runFloor(empty, emptyAnswer)).wallMs);
+    const f = await runFloor(input, answerFile);
+    floors.push({ net: f.wallMs - f.timing.answer_load_ms, timing: f.timing });
+  }
+  const start = median(floorStarts);
+  const best = floors.reduce((a, b) => (b.net < a.net ? b : a));
+  const net = best.net - start;
+  console.log(
+    `floor on this machine (read, decode and parse the body, write the answer's ${(first.outBytes / 1e6).toFixed(1)} MB; no engine, no serializing; best of ${REPEATS}):`,
+  );
+  console.log(
+    `  ${net.toFixed(0)} ms after start-up → at most ${fmt(cases.length / (net / 1000))} evals/s for any calculator of this JSON here ` +
+      `(read ${best.timing.read_ms.toFixed(0)}, decode and parse ${best.timing.parse_ms.toFixed(0)}, write ${best.timing.write_ms.toFixed(0)} ms on its own clock; ${best.timing.cpu_ms.toFixed(0)} ms CPU)`,
+  );
+} finally {
+  rmSync(dir, { recursive: true, force: true });
 }
