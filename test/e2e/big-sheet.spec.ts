@@ -35,6 +35,49 @@ test("a 450-row sheet draws the columns in view; End moves to the last column an
   }
 });
 
+// The first screen of rows comes with the page (src/components/grid/sheet-preview.tsx): with the
+// page's scripts off, the server's HTML alone shows the first rows in the grid's columns; with
+// them on, the preview gives way to the grid once it has painted its rows.
+test("the first screen of rows is drawn by the server, and gives way to the grid", async ({ page, browser }) => {
+  await signIn(page, "consultant@demo.filmsheet.test");
+  const call = apiOf(page);
+  const projectId = await bigProject(call, `FIRST-${Date.now().toString(36).toUpperCase()}`, 450, 5);
+  try {
+    await call("PATCH", "/api/me/preferences", { active_column_sets: { surfaces: "everything" } });
+    const still = await browser.newContext({ javaScriptEnabled: false, storageState: await page.context().storageState(), viewport: { width: 1366, height: 768 } });
+    try {
+      const html = await still.newPage();
+      await html.goto(`/projects/${projectId}`);
+      const rows = html.locator(".fs-sheet-preview [data-preview-row]");
+      await expect(rows).toHaveCount(40);
+      await expect(rows.first().locator("td").nth(1)).toHaveAttribute("data-v", "Panel 1");
+      // The grid's columns and headings, in the person's set: the area beside its heading.
+      const headings = await html.locator(".fs-sheet-preview th[data-v]").evaluateAll((ths) => ths.map((th) => th.getAttribute("data-v")));
+      expect(headings[0]).toBe("Label");
+      expect(headings).toContain("Area (m²)");
+      expect(headings.at(-1)).toBe("Working");
+      // A picture of the grid: not page text, not for assistive technology.
+      await expect(html.locator(".fs-sheet-preview")).toHaveAttribute("aria-hidden", "true");
+      expect(await html.locator(".fs-sheet-preview").textContent()).toBe("");
+      if (process.env.E2E_SHOTS) await html.screenshot({ path: `${process.env.E2E_SHOTS}/preview-1366.png` });
+    } finally {
+      await still.close();
+    }
+    // The page's scripts take over the server's preview as it is (a mismatch would be redrawn and logged).
+    const errors: string[] = [];
+    page.on("console", (m) => {
+      if (m.type() === "error") errors.push(m.text());
+    });
+    await page.goto(`/projects/${projectId}`);
+    await expect(page.locator('.ag-row:not(.ag-row-pinned)[row-index="0"] [col-id="label"]')).toHaveText("Panel 1", { timeout: 60_000 });
+    await expect(page.locator(".fs-sheet-preview")).toHaveCount(0);
+    expect(errors.filter((e) => /hydrat|did not match/i.test(e))).toEqual([]);
+    if (process.env.E2E_SHOTS) await page.screenshot({ path: `${process.env.E2E_SHOTS}/grid-1366.png` });
+  } finally {
+    await db()("projects").where({ id: projectId }).del();
+  }
+});
+
 async function drawsColumnsInView(page: Page, projectId: string) {
 
   await page.goto(`/projects/${projectId}`);

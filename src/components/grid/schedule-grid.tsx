@@ -38,6 +38,7 @@ import { sheetColumnDefs } from "./column-defs";
 import { TOTALS_ID, passesRowFilter, type GridContext, type RowFilter } from "./grid-context";
 import { gridTheme } from "./grid-theme";
 import { RangeStatus } from "./range-status";
+import { SheetPreview } from "./sheet-preview";
 import { useSheetHabits, type HabitWrites } from "./use-sheet-habits";
 import "./schedule-grid.css";
 
@@ -121,6 +122,8 @@ export function ScheduleGrid(props: ScheduleGridProps) {
   const { sheet, schedule, results, totals, system, canEdit, cellErrors } = props;
   const rowFilter = props.rowFilter ?? "all";
   const [api, setApi] = useState<GridApi<Row> | null>(null);
+  // Until the grid has painted its first rows, the server-drawn preview stands in its place.
+  const [drawn, setDrawn] = useState(false);
   const wrapper = useRef<HTMLDivElement>(null);
   const host = useRef<HTMLDivElement>(null);
   const rows = (sheet === "surfaces" ? schedule.surfaces : schedule.duct_runs) as unknown as Row[];
@@ -237,6 +240,7 @@ export function ScheduleGrid(props: ScheduleGridProps) {
     tooltipShowDelay: 250,
     enableBrowserTooltips: !allColumns,
     onGridReady,
+    onFirstDataRendered: () => setDrawn(true),
     isExternalFilterPresent: isFilterPresent,
     doesExternalFilterPass: doesFilterPass,
     onFilterChanged,
@@ -287,9 +291,10 @@ export function ScheduleGrid(props: ScheduleGridProps) {
 
   return (
     <>
-    <div ref={wrapper} className="fs-grid min-h-[18rem] min-w-0 flex-1 print:h-auto" onPaste={onPaste} data-sheet={sheet} {...habits.scopeProps}>
+    <div ref={wrapper} className="fs-grid relative min-h-[18rem] min-w-0 flex-1 print:h-auto" onPaste={onPaste} data-sheet={sheet} {...habits.scopeProps}>
       <style>{habits.css}</style>
       <div ref={host} className="h-full w-full" />
+      {!drawn && rows.length > 0 ? <SheetPreview columns={columnDefs} rows={rows} context={context} selection={canEdit} /> : null}
     </div>
     <RangeStatus size={habits.size} headings={habits.headings} onHeadings={habits.setHeadings} canEdit={canEdit} />
     </>
