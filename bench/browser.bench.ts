@@ -264,7 +264,7 @@ async function measure(browser: Browser, state: Awaited<ReturnType<typeof signed
     f.loadFrame = Math.max(f.loadFrame, r.longestFrame);
     if (PROFILE && i === LOADS) {
       await saveProfile(cdp!, `load-${rate}x`);
-      summariseTrace(await browser.stopTracing(), `load-${rate}x`, first.firstRow ?? 0);
+      summariseTrace(await browser.stopTracing(), `load-${rate}x`, first.firstGridRow ?? first.firstRow ?? 0);
     }
   }
   page = page!;

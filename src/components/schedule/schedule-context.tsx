@@ -4,6 +4,7 @@ import { QueryClient, QueryClientProvider, useQuery } from "@tanstack/react-quer
 import { createContext, useCallback, useContext, useMemo, useState, type ReactNode } from "react";
 import type { TPreferences } from "@/schemas/preferences";
 import type { TSchedule } from "@/schemas/schedule";
+import { unpackSchedule, type PackedSchedule } from "@/schedule/packed-schedule";
 import type { UnitSystem } from "@/units/units";
 import { api } from "./api-client";
 import { PREFERENCES_KEY, usePreferences } from "./use-preferences";
@@ -36,12 +37,13 @@ export const scheduleKey = (projectId: string) => ["schedule", projectId] as con
 
 /**
  * The project's data for every page under /projects/[id]: one TanStack Query cache seeded with
- * the schedule the server loaded (handed over as JSON text), the units shown, and the notices (errors and confirmations).
+ * the schedule the server loaded (handed over packed, as JSON text), the units shown, and the notices (errors and confirmations).
  */
 export function ScheduleProvider({ initialJson, preferences, canEdit, children }: { initialJson: string; preferences: TPreferences; canEdit: boolean; children: ReactNode }) {
   const [client] = useState(() => new QueryClient({ defaultOptions: { queries: { staleTime: 30_000, refetchOnWindowFocus: false } } }));
-  // The schedule as the API answers it (JSON text, read once): the same shape a refetch brings.
-  const [initial] = useState(() => JSON.parse(initialJson) as TSchedule);
+  // The schedule packed as JSON text (src/schedule/packed-schedule.ts), read once and unpacked
+  // into the shape the API answers, which a refetch brings.
+  const [initial] = useState(() => unpackSchedule(JSON.parse(initialJson) as PackedSchedule));
   useState(() => {
     client.setQueryData(scheduleKey(initial.project.id), initial);
     client.setQueryData(PREFERENCES_KEY, preferences);
