@@ -27,7 +27,9 @@ export function CollapsibleTotals({ collapsed, onToggle, children }: { collapsed
     );
   }
   return (
-    <div id="zone-totals" className="relative min-w-0 2xl:h-[var(--fs-fill-h)] 2xl:w-[20rem] 2xl:shrink-0 2xl:overflow-y-auto">
+    // Below the grid (under 1536 px) the panel starts off screen: the browser skips its layout and
+    // paint until it is scrolled into view (content-visibility), so an edit's frame does not pay for it.
+    <div id="zone-totals" className="relative min-w-0 [contain-intrinsic-size:auto_40rem] [content-visibility:auto] 2xl:h-[var(--fs-fill-h)] 2xl:w-[20rem] 2xl:shrink-0 2xl:overflow-y-auto">
       <button
         type="button"
         aria-expanded="true"
