@@ -264,12 +264,21 @@ export function ScheduleGrid(props: ScheduleGridProps) {
       setApi(null);
     };
   }, []);
-  // An edit changes a few rows of the sheet: those go to the grid as a transaction, so it does not
-  // compare all 5,000 rows by id (≈ 20 ms); a change of the rows' number or order gives it them all.
+  // An edit changes a few rows of the sheet: those go to their row nodes (setData) when no sort or
+  // filter has to be run again, else to the grid as a transaction; only a change of the rows'
+  // number or order gives it them all (comparing 5,000 rows by id is ≈ 20 ms). A transaction also
+  // re-runs the row model, and with it the header checkbox's walk over every row (≈ 20 ms on
+  // 5,000): an edit in an unsorted, unfiltered sheet needs neither.
   useEffect(() => {
     if (!api || held.current === null || held.current === rows) return;
     const changed = changedRows(held.current, rows);
-    if (changed) api.applyTransaction({ update: changed });
+    if (changed && !api.isAnyFilterPresent() && !api.getColumnState().some((c) => c.sort)) {
+      for (const r of changed) {
+        const node = api.getRowNode(r.id);
+        if (node) node.setData(r);
+        else api.applyTransaction({ update: [r] });
+      }
+    } else if (changed) api.applyTransaction({ update: changed });
     else api.setGridOption("rowData", rows);
     held.current = rows;
   }, [api, rows]);

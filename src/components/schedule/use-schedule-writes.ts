@@ -6,6 +6,7 @@ import type { TSchedule, TSheet } from "@/schemas/schedule";
 import { ApiError, ITEM_PATHS, api } from "./api-client";
 import { findRow, mergeRows, pick, removeRows, upsertRows, type Row } from "./schedule-cache";
 import { scheduleKey, useProject } from "./schedule-context";
+import { afterNextPaint } from "./use-after-paint";
 
 /** Update and delete read the row's cached version when sent, unless they name one (an undo names the version this browser last wrote). */
 export type BulkOp =
@@ -57,8 +58,12 @@ export function useScheduleWrites() {
 
   const bulk = useMutation({
     scope,
-    mutationFn: (ops: BulkOp[]) =>
-      api<WriteResult>("POST", `/api/projects/${projectId}/bulk`, {
+    // Sent once the browser has painted the edit (the optimistic row and its zone): building and
+    // sending the request (≈ 5–8 ms on a 5,000-row sheet) does not stand between the key and its
+    // result on screen. The queue's order is kept (the scope waits for this function).
+    mutationFn: async (ops: BulkOp[]) => {
+      await afterNextPaint();
+      return api<WriteResult>("POST", `/api/projects/${projectId}/bulk`, {
         changes: ops.map((o) =>
           o.op === "create"
             ? { op: "create", sheet: o.sheet, id: o.row.id, values: fieldsOf(o.row) }
@@ -66,7 +71,8 @@ export function useScheduleWrites() {
               ? { op: "update", sheet: o.sheet, id: o.id, version: o.version ?? version(o.sheet, o.id), values: o.values }
               : { op: "delete", sheet: o.sheet, id: o.id, version: o.version ?? version(o.sheet, o.id) },
         ),
-      }),
+      });
+    },
     onMutate: async (ops) => {
       await qc.cancelQueries({ queryKey: key });
       const before = get();
