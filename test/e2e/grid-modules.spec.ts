@@ -1,4 +1,4 @@
-// The schedule grid registers only the parts of AG Grid it uses (src/components/grid/schedule-grid.tsx).
+// The schedule grid registers only the parts of AG Grid it uses (src/components/grid/ag-grid-runtime.ts, loaded by schedule-grid.tsx).
 // A part left out does not fail loudly: the grid writes an error to the console and the feature
 // does nothing. This spec sorts, filters, selects, opens an editor and reads a tooltip on the demo
 // sheet, checks each worked, and that the grid wrote no error or warning. Nothing is saved.

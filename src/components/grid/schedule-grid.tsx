@@ -1,34 +1,18 @@
 "use client";
 
-import {
-  CellApiModule,
-  CellStyleModule,
-  ClientSideRowModelApiModule,
-  ClientSideRowModelModule,
-  ColumnApiModule,
-  EventApiModule,
-  ExternalFilterModule,
-  ModuleRegistry,
-  NumberEditorModule,
-  NumberFilterModule,
-  PinnedRowModule,
-  RenderApiModule,
-  RowApiModule,
-  RowSelectionModule,
-  ScrollApiModule,
-  SelectEditorModule,
-  TextEditorModule,
-  TextFilterModule,
-  TooltipModule,
-  createGrid,
-  type CellEditRequestEvent,
-  type ColDef,
-  type FilterChangedEvent,
-  type SelectionChangedEvent,
-  type GetRowIdParams,
-  type RowSelectionOptions,
-  type GridOptions,
-  type SelectionColumnDef, type GridApi, type GridReadyEvent, type IRowNode } from "ag-grid-community";
+import type {
+  CellEditRequestEvent,
+  ColDef,
+  FilterChangedEvent,
+  SelectionChangedEvent,
+  GetRowIdParams,
+  RowSelectionOptions,
+  GridOptions,
+  SelectionColumnDef,
+  GridApi,
+  GridReadyEvent,
+  IRowNode,
+} from "ag-grid-community";
 import { useCallback, useEffect, useMemo, useRef, useState, type ClipboardEvent } from "react";
 import type { RowOutcome } from "@/schedule/result-columns";
 import type { TSchedule, TSheet } from "@/schemas/schedule";
@@ -36,36 +20,19 @@ import type { UnitSystem } from "@/units/units";
 import type { Row } from "@/components/schedule/schedule-cache";
 import { sheetColumnDefs } from "./column-defs";
 import { TOTALS_ID, passesRowFilter, type GridContext, type RowFilter } from "./grid-context";
-import { gridTheme } from "./grid-theme";
 import { RangeStatus } from "./range-status";
 import { SheetPreview } from "./sheet-preview";
 import { useSheetHabits, type HabitWrites } from "./use-sheet-habits";
 import "./schedule-grid.css";
 
-// Only the grid's parts the sheet uses (the whole community set is a third more code for the
-// browser to compile before the first rows): the client-side rows, text/number/select editors,
-// column and external filters, row selection, the pinned totals row, cell classes, tooltips and
-// the API calls of src/components/grid.
-ModuleRegistry.registerModules([
-  ClientSideRowModelModule,
-  ClientSideRowModelApiModule,
-  TextEditorModule,
-  NumberEditorModule,
-  SelectEditorModule,
-  TextFilterModule,
-  NumberFilterModule,
-  ExternalFilterModule,
-  RowSelectionModule,
-  PinnedRowModule,
-  CellStyleModule,
-  TooltipModule,
-  ColumnApiModule,
-  RowApiModule,
-  ScrollApiModule,
-  RenderApiModule,
-  EventApiModule,
-  CellApiModule,
-]);
+// AG Grid itself (its code, the parts the sheet uses, the theme) is a chunk of its own, asked for
+// as soon as this module loads in the browser and evaluated when it arrives: its ≈ 1 MB of code is
+// compiled and run in a task of its own, not inside the page's hydration, and the grid is made
+// when both are done (the server-drawn preview shows the first rows meanwhile).
+type GridRuntime = typeof import("./ag-grid-runtime");
+let runtime: Promise<GridRuntime> | null = null;
+const loadGrid = () => (runtime ??= import("./ag-grid-runtime"));
+if (typeof window !== "undefined") void loadGrid();
 
 // Options given as constants: an object made in render is a changed option to the grid, which
 // then rebuilds every column (≈ 10 ms on a 5,000-row sheet) on each edit.
@@ -222,7 +189,6 @@ export function ScheduleGrid(props: ScheduleGridProps) {
   const held = useRef<Row[] | null>(null);
   const options = useRef<GridOptions<Row>>(null);
   options.current ??= {
-    theme: gridTheme,
     rowData: rows.length > FIRST_SCREEN_ROWS * 4 ? rows.slice(0, FIRST_SCREEN_ROWS) : rows,
     columnDefs,
     context,
@@ -248,19 +214,31 @@ export function ScheduleGrid(props: ScheduleGridProps) {
     suppressColumnVirtualisation: allColumns,
   };
   useEffect(() => {
-    const made = createGrid<Row>(host.current!, options.current!);
-    held.current = options.current!.rowData as Row[];
+    let made: GridApi<Row> | null = null;
+    let cancelled = false;
+    let frame = 0;
     let rest: ReturnType<typeof setTimeout> | undefined;
-    const frame = held.current === latestRows.current ? 0 : requestAnimationFrame(() => {
-      rest = setTimeout(() => {
-        made.setGridOption("rowData", latestRows.current);
-        held.current = latestRows.current;
+    // Made in a task of its own, after the one that evaluated AG Grid's chunk (each is ≈ 0.15–0.2 s
+    // on a slow laptop; together they were one long block of the page).
+    void loadGrid().then(async ({ createGrid, gridTheme }) => {
+      await new Promise((resolve) => setTimeout(resolve));
+      if (cancelled || !host.current) return;
+      const grid = createGrid<Row>(host.current, { ...options.current!, theme: gridTheme });
+      made = grid;
+      held.current = options.current!.rowData as Row[];
+      if (held.current === latestRows.current) return;
+      frame = requestAnimationFrame(() => {
+        rest = setTimeout(() => {
+          grid.setGridOption("rowData", latestRows.current);
+          held.current = latestRows.current;
+        });
       });
     });
     return () => {
+      cancelled = true;
       cancelAnimationFrame(frame);
       clearTimeout(rest);
-      made.destroy();
+      made?.destroy();
       setApi(null);
     };
   }, []);
