@@ -78,6 +78,44 @@ test("the first screen of rows is drawn by the server, and gives way to the grid
   }
 });
 
+// An edit reaches the grid as its row's new data (setData) when nothing must be re-sorted or
+// re-filtered, and as a transaction when the sheet is sorted (schedule-grid.tsx): in a sheet
+// sorted by area, a row given the smallest area moves to the top; unsorted, it keeps its place.
+test("an edit keeps its row's place in an unsorted sheet and moves it in a sorted one", async ({ page }) => {
+  await signIn(page, "consultant@demo.filmsheet.test");
+  const call = apiOf(page);
+  const projectId = await bigProject(call, `SORT-${Date.now().toString(36).toUpperCase()}`, 30, 2);
+  try {
+    await call("PATCH", "/api/me/preferences", { active_column_sets: { surfaces: "everything" } });
+    await page.goto(`/projects/${projectId}`);
+    const atIndex = (i: number, col: string) => page.locator(`.ag-row:not(.ag-row-pinned)[row-index="${i}"] [col-id="${col}"]`);
+    await expect(atIndex(0, "label")).toHaveText("Panel 1", { timeout: 60_000 });
+    const setArea = async (i: number, value: string) => {
+      await atIndex(i, "area_m2").dblclick();
+      await page.keyboard.press("ControlOrMeta+a");
+      await page.keyboard.type(value);
+      await page.keyboard.press("Enter");
+    };
+    // Unsorted: Panel 3 takes the new area where it stands.
+    await setArea(2, "0.51");
+    await expect(atIndex(2, "area_m2")).toHaveText("0.51");
+    await expect(atIndex(2, "label")).toHaveText("Panel 3");
+    // Sorted by area, ascending: Panel 3 is first; the second row, given a still smaller area, takes its place.
+    const heading = page.locator('.ag-header-cell[col-id="area_m2"]');
+    await heading.locator(".ag-header-cell-label").click();
+    await expect(heading).toHaveAttribute("aria-sort", "ascending");
+    await expect(atIndex(0, "label")).toHaveText("Panel 3");
+    const second = (await atIndex(1, "label").innerText()).trim();
+    expect(second).not.toBe("Panel 3");
+    await setArea(1, "0.25");
+    await expect(atIndex(0, "label")).toHaveText(second);
+    await expect(atIndex(0, "area_m2")).toHaveText("0.25");
+    await expect(atIndex(1, "label")).toHaveText("Panel 3");
+  } finally {
+    await db()("projects").where({ id: projectId }).del();
+  }
+});
+
 async function drawsColumnsInView(page: Page, projectId: string) {
 
   await page.goto(`/projects/${projectId}`);
