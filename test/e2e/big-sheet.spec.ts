@@ -23,27 +23,33 @@ function apiOf(page: Page) {
   };
 }
 
-test("a 450-row sheet draws the columns in view; End moves to the last column and draws Q and the Working link", async ({ page }) => {
+/**
+ * Signs in as the demo consultant, makes a project of `surfaces` and `ducts` rows through the API,
+ * shows every column of the surfaces sheet, runs `body` and deletes the project.
+ */
+async function withProject(page: Page, prefix: string, surfaces: number, ducts: number, body: (projectId: string) => Promise<void>) {
   await signIn(page, "consultant@demo.filmsheet.test");
   const call = apiOf(page);
-  const projectId = await bigProject(call, `WIDE-${Date.now().toString(36).toUpperCase()}`, 450, 5);
+  const projectId = await bigProject(call, `${prefix}-${Date.now().toString(36).toUpperCase()}`, surfaces, ducts);
   try {
     await call("PATCH", "/api/me/preferences", { active_column_sets: { surfaces: "everything" } });
-    await drawsColumnsInView(page, projectId);
+    await body(projectId);
   } finally {
     await db()("projects").where({ id: projectId }).del();
   }
+}
+
+test("a 450-row sheet draws the columns in view; End moves to the last column and draws Q and the Working link", async ({ page }) => {
+  await withProject(page, "WIDE", 450, 5, async (projectId) => {
+    await drawsColumnsInView(page, projectId);
+  });
 });
 
 // The first screen of rows comes with the page (src/components/grid/sheet-preview.tsx): with the
 // page's scripts off, the server's HTML alone shows the first rows in the grid's columns; with
 // them on, the preview gives way to the grid once it has painted its rows.
 test("the first screen of rows is drawn by the server, and gives way to the grid", async ({ page, browser }) => {
-  await signIn(page, "consultant@demo.filmsheet.test");
-  const call = apiOf(page);
-  const projectId = await bigProject(call, `FIRST-${Date.now().toString(36).toUpperCase()}`, 450, 5);
-  try {
-    await call("PATCH", "/api/me/preferences", { active_column_sets: { surfaces: "everything" } });
+  await withProject(page, "FIRST", 450, 5, async (projectId) => {
     const still = await browser.newContext({ javaScriptEnabled: false, storageState: await page.context().storageState(), viewport: { width: 1366, height: 768 } });
     try {
       const html = await still.newPage();
@@ -73,20 +79,14 @@ test("the first screen of rows is drawn by the server, and gives way to the grid
     await expect(page.locator(".fs-sheet-preview")).toHaveCount(0);
     expect(errors.filter((e) => /hydrat|did not match/i.test(e))).toEqual([]);
     if (process.env.E2E_SHOTS) await page.screenshot({ path: `${process.env.E2E_SHOTS}/grid-1366.png` });
-  } finally {
-    await db()("projects").where({ id: projectId }).del();
-  }
+  });
 });
 
 // An edit reaches the grid as its row's new data (setData) when nothing must be re-sorted or
 // re-filtered, and as a transaction when the sheet is sorted (schedule-grid.tsx): in a sheet
 // sorted by area, a row given the smallest area moves to the top; unsorted, it keeps its place.
 test("an edit keeps its row's place in an unsorted sheet and moves it in a sorted one", async ({ page }) => {
-  await signIn(page, "consultant@demo.filmsheet.test");
-  const call = apiOf(page);
-  const projectId = await bigProject(call, `SORT-${Date.now().toString(36).toUpperCase()}`, 30, 2);
-  try {
-    await call("PATCH", "/api/me/preferences", { active_column_sets: { surfaces: "everything" } });
+  await withProject(page, "SORT", 30, 2, async (projectId) => {
     await page.goto(`/projects/${projectId}`);
     const atIndex = (i: number, col: string) => page.locator(`.ag-row:not(.ag-row-pinned)[row-index="${i}"] [col-id="${col}"]`);
     await expect(atIndex(0, "label")).toHaveText("Panel 1", { timeout: 60_000 });
@@ -111,9 +111,7 @@ test("an edit keeps its row's place in an unsorted sheet and moves it in a sorte
     await expect(atIndex(0, "label")).toHaveText(second);
     await expect(atIndex(0, "area_m2")).toHaveText("0.25");
     await expect(atIndex(1, "label")).toHaveText("Panel 3");
-  } finally {
-    await db()("projects").where({ id: projectId }).del();
-  }
+  });
 });
 
 async function drawsColumnsInView(page: Page, projectId: string) {

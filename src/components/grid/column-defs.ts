@@ -182,6 +182,9 @@ const notesColumn: ColDef<Row> = {
  * getGui), which the grid creates without a React root per cell — thousands are made while a big
  * sheet scrolls.
  */
+/** The Working column's link text (also drawn by the server's preview of the sheet). */
+export const WORKING_LINK_TEXT = "Working ›";
+
 export class WorkingLinkRenderer implements ICellRendererComp<Row> {
   private gui: HTMLElement = document.createElement("span");
 
@@ -202,7 +205,7 @@ export class WorkingLinkRenderer implements ICellRendererComp<Row> {
     if (!a) {
       a = document.createElement("a");
       a.className = "fs-working-link";
-      a.textContent = "Working ›";
+      a.textContent = WORKING_LINK_TEXT;
       this.gui.append(a);
     }
     a.href = workingPath(p.context.projectId, p.context.sheet, p.data.id, p.context.caseId);

@@ -22,6 +22,7 @@ import { sheetColumnDefs } from "./column-defs";
 import { TOTALS_ID, passesRowFilter, type GridContext, type RowFilter } from "./grid-context";
 import { RangeStatus } from "./range-status";
 import { SheetPreview } from "./sheet-preview";
+import { afterNextPaint } from "@/components/schedule/use-after-paint";
 import { useSheetHabits, type HabitWrites } from "./use-sheet-habits";
 import "./schedule-grid.css";
 
@@ -216,8 +217,6 @@ export function ScheduleGrid(props: ScheduleGridProps) {
   useEffect(() => {
     let made: GridApi<Row> | null = null;
     let cancelled = false;
-    let frame = 0;
-    let rest: ReturnType<typeof setTimeout> | undefined;
     // Made in a task of its own, after the one that evaluated AG Grid's chunk (each is ≈ 0.15–0.2 s
     // on a slow laptop; together they were one long block of the page).
     void loadGrid().then(async ({ createGrid, gridTheme }) => {
@@ -227,17 +226,13 @@ export function ScheduleGrid(props: ScheduleGridProps) {
       made = grid;
       held.current = options.current!.rowData as Row[];
       if (held.current === latestRows.current) return;
-      frame = requestAnimationFrame(() => {
-        rest = setTimeout(() => {
-          grid.setGridOption("rowData", latestRows.current);
-          held.current = latestRows.current;
-        });
-      });
+      await afterNextPaint();
+      if (cancelled) return;
+      grid.setGridOption("rowData", latestRows.current);
+      held.current = latestRows.current;
     });
     return () => {
       cancelled = true;
-      cancelAnimationFrame(frame);
-      clearTimeout(rest);
       made?.destroy();
       setApi(null);
     };
@@ -281,7 +276,7 @@ export function ScheduleGrid(props: ScheduleGridProps) {
     <div ref={wrapper} className="fs-grid relative min-h-[18rem] min-w-0 flex-1 print:h-auto" onPaste={onPaste} data-sheet={sheet} {...habits.scopeProps}>
       <style>{habits.css}</style>
       <div ref={host} className="h-full w-full" />
-      {!drawn && rows.length > 0 ? <SheetPreview columns={columnDefs} rows={rows} context={context} selection={canEdit} /> : null}
+      {!drawn && rows.length > 0 ? <SheetPreview columns={columnDefs} rows={rows} context={context} selectionWidth={canEdit ? SELECTION_COL_DEF.width! : 0} /> : null}
     </div>
     <RangeStatus size={habits.size} headings={habits.headings} onHeadings={habits.setHeadings} canEdit={canEdit} />
     </>

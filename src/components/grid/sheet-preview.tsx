@@ -2,6 +2,7 @@
 
 import type { ColDef } from "ag-grid-community";
 import type { Row } from "@/components/schedule/schedule-cache";
+import { WORKING_LINK_TEXT } from "./column-defs";
 import type { GridContext } from "./grid-context";
 
 /** Rows the preview draws: more than the tallest window shows above the fold. */
@@ -15,20 +16,22 @@ type Cell = { text: string; className: string; numeric: boolean };
  */
 export function previewCell(def: ColDef<Row>, row: Row, context: GridContext): Cell {
   const base = { data: row, context, colDef: def, node: null, column: null, api: null };
-  let value: unknown = typeof def.valueGetter === "function" ? def.valueGetter(base as never) : def.field ? row[def.field as string] : undefined;
+  const value: unknown = typeof def.valueGetter === "function" ? def.valueGetter(base as never) : def.field ? row[def.field as string] : undefined;
   const refData = def.refData as Record<string, string> | undefined;
-  let text: string;
-  if (def.colId === "working") text = "Working ›";
-  else if (typeof def.valueFormatter === "function") text = def.valueFormatter({ ...base, value } as never) ?? "";
-  else if (refData && typeof value === "string") text = refData[value] ?? value;
-  else text = value === null || value === undefined ? "" : String(value);
-  if (refData && typeof value === "string" && typeof def.valueFormatter !== "function") value = refData[value] ?? value;
-  const classes: string[] = [];
-  for (const [name, rule] of Object.entries(def.cellClassRules ?? {})) {
-    if (typeof rule === "function" && rule({ ...base, value } as never)) classes.push(name);
-  }
-  const numeric = def.type === "numericColumn";
-  return { text, className: classes.join(" "), numeric };
+  const text =
+    def.colId === "working"
+      ? WORKING_LINK_TEXT
+      : typeof def.valueFormatter === "function"
+        ? (def.valueFormatter({ ...base, value } as never) ?? "")
+        : value === null || value === undefined
+          ? ""
+          : (refData?.[String(value)] ?? String(value));
+  // Class rules see the value as the grid gives it (pick-list labels are display only).
+  const className = Object.entries(def.cellClassRules ?? {})
+    .filter(([, rule]) => typeof rule === "function" && rule({ ...base, value } as never))
+    .map(([name]) => name)
+    .join(" ");
+  return { text, className, numeric: def.type === "numericColumn" };
 }
 
 /**
@@ -40,16 +43,18 @@ export function previewCell(def: ColDef<Row>, row: Row, context: GridContext): C
  * the moment before it is ready, which assistive technology, find-in-page and scripts looking for
  * a row's text should not meet twice.
  */
-export function SheetPreview({ columns, rows, context, selection }: { columns: ColDef<Row>[]; rows: Row[]; context: GridContext; selection: boolean }) {
+/** `selectionWidth`: the checkbox column's width, 0 when the sheet has none. */
+export function SheetPreview({ columns, rows, context, selectionWidth }: { columns: ColDef<Row>[]; rows: Row[]; context: GridContext; selectionWidth: number }) {
+  const selection = selectionWidth > 0;
   const shown = columns.filter((c) => !c.hide);
   // The grid puts its left-pinned columns first (the label), then the rest in their order.
   const ordered = [...shown.filter((c) => c.pinned === "left"), ...shown.filter((c) => c.pinned !== "left")];
-  const width = (selection ? 48 : 0) + ordered.reduce((sum, c) => sum + (c.width ?? 200), 0);
+  const width = selectionWidth + ordered.reduce((sum, c) => sum + (c.width ?? 200), 0);
   return (
     <div className="fs-sheet-preview" aria-hidden="true" data-rows={Math.min(rows.length, PREVIEW_ROWS)}>
       <table style={{ width }}>
         <colgroup>
-          {selection ? <col style={{ width: 48 }} /> : null}
+          {selection ? <col style={{ width: selectionWidth }} /> : null}
           {ordered.map((c) => (
             <col key={c.colId} style={{ width: c.width ?? 200 }} />
           ))}

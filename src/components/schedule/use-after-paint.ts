@@ -26,13 +26,12 @@ export function afterNextPaint(): Promise<void> {
 export function useAfterPaint<T>(value: T): T | null {
   const [shown, setShown] = useState<T | null>(null);
   useEffect(() => {
-    let timer: ReturnType<typeof setTimeout> | undefined;
-    const frame = requestAnimationFrame(() => {
-      timer = setTimeout(() => startTransition(() => setShown(value)));
+    let live = true;
+    void afterNextPaint().then(() => {
+      if (live) startTransition(() => setShown(value));
     });
     return () => {
-      cancelAnimationFrame(frame);
-      clearTimeout(timer);
+      live = false;
     };
   }, [value]);
   return shown;
