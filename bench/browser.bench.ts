@@ -12,7 +12,11 @@
 //   - the computation alone (the app's user-timing measures filmsheet:results:*), and in Node
 //     the full recalculation against one changed row's;
 //   - switching design case (change event to the next frame with the new figures);
-//   - fast scrolling (requestAnimationFrame gaps while the grid scrolls 600 px a frame).
+//   - fast scrolling (requestAnimationFrame gaps while the grid scrolls 600 px a frame);
+//   - the floor under those figures (lib/grid-floor-page.ts, no app code at all): AG Grid alone with
+//     the same columns and 5,000 plain rows, and a hand-drawn list of the same cells, each loaded
+//     (longest task, first rows) and scrolled the same way — what this machine's browser pays
+//     before any of Filmsheet's own code runs.
 // The person's own column set "Area and heat flow" is chosen first (area beside Q; a sheet this
 // big draws only the columns in view). BENCH_PROFILE=dir saves CPU profiles and traces.
 // It prints figures against the goals; it asserts nothing. The app is the production build served
@@ -32,6 +36,7 @@ import { freeTcpPort } from "../test/support/instances";
 import { CHROMIUM_ARGS } from "../playwright.config";
 import { bigProject } from "./lib/big-schedule";
 import { nodeComputation } from "./lib/node-computation";
+import { FLOOR_ORIGIN, serveFloor } from "./lib/grid-floor";
 
 const PG_PORT = portFromEnv("BENCH_BROWSER_PG_PORT", 54389);
 const LOADS = Number(process.env.BENCH_LOADS ?? 3);
@@ -121,11 +126,12 @@ async function main() {
     const node = await nodeComputation(await call("GET", `/api/projects/${project}/schedule`));
 
     const state = await signedInState(browser, base);
-    const runs: { rate: number; f: Figures; load: number[] }[] = [];
+    const runs: { rate: number; f: Figures; floors: { grid: Floor; dom: Floor }; load: number[] }[] = [];
     for (const rate of RATES) {
       const before = loadavg();
       const f = await measure(browser, state, `${base}/projects/${project}`, rate);
-      runs.push({ rate, f, load: [before[0]!, loadavg()[0]!] });
+      const floors = { grid: await measureFloor(browser, "grid", rate), dom: await measureFloor(browser, "dom", rate) };
+      runs.push({ rate, f, floors, load: [before[0]!, loadavg()[0]!] });
       // The table so far after each rate: a long throttled run cut short still leaves figures.
       print(runs, node);
     }
@@ -332,7 +338,40 @@ async function measure(browser: Browser, state: Awaited<ReturnType<typeof signed
   return f;
 }
 
-function print(runs: { rate: number; f: Figures; load: number[] }[], node: Awaited<ReturnType<typeof nodeComputation>>) {
+type Floor = { firstRows: number[]; loadLongest: number; gaps: number[]; scrollLongest: number };
+
+/**
+ * A floor page (grid-floor-page.ts: AG Grid alone, or the hand-drawn list), loaded LOADS times in
+ * fresh profiles and then scrolled as the schedule is: first rows, the longest task while loading,
+ * frames while scrolling and the longest task then.
+ */
+async function measureFloor(browser: Browser, mode: "grid" | "dom", rate: number): Promise<Floor> {
+  const f: Floor = { firstRows: [], loadLongest: 0, gaps: [], scrollLongest: 0 };
+  for (let i = 0; i <= LOADS; i++) {
+    const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
+    await context.addInitScript({ content: PROBES });
+    await serveFloor(context);
+    const page = await context.newPage();
+    const cdp = await context.newCDPSession(page);
+    await cdp.send("Emulation.setCPUThrottlingRate", { rate });
+    await page.goto(`${FLOOR_ORIGIN}/#${mode}`);
+    await page.waitForFunction(() => (window as unknown as { __bench: { firstGridRow: number | null } }).__bench.firstGridRow !== null, null, { timeout: 60_000 });
+    await sleep(2000);
+    if (i > 0) {
+      f.firstRows.push((await firstFigures(page)).firstGridRow!);
+      f.loadLongest = Math.max(f.loadLongest, (await readSince(page, 0)).longest);
+    }
+    if (i === LOADS) {
+      const since = await now(page);
+      f.gaps = await page.evaluate(() => (window as unknown as { __probes: { fastScroll: (a: object) => Promise<number[]> } }).__probes.fastScroll({ frames: 150, px: 600 }));
+      f.scrollLongest = (await readSince(page, since)).longest;
+    }
+    await context.close();
+  }
+  return f;
+}
+
+function print(runs: { rate: number; f: Figures; floors: { grid: Floor; dom: Floor }; load: number[] }[], node: Awaited<ReturnType<typeof nodeComputation>>) {
   const ms = (v: number) => (Number.isFinite(v) ? `${v.toFixed(0)} ms` : "n/a");
   const mm = (xs: number[]) => (xs.length ? `${ms(median(xs))} (max ${ms(Math.max(...xs))})` : "n/a (not instrumented)");
   const fps = (gaps: number[]) => {
@@ -361,6 +400,17 @@ function print(runs: { rate: number; f: Figures; load: number[] }[], node: Await
   console.log("");
   row(["5,000 rows", ...runs.map((r) => (r.rate === 1 ? "unthrottled" : `CPU ${r.rate}× slower`)), "goal (unthrottled)"]);
   lines.forEach((l, j) => row([l[0], ...cols.map((c) => c[j]!), l[2]]));
+  console.log("\nthe floor: the same 5,000 rows and columns with no app code (bench/lib/grid-floor-page.ts), loaded and scrolled the same way");
+  const floorLines: [string, (f: Floor) => string][] = [
+    ["first rows on screen", (f) => mm(f.firstRows)],
+    ["longest task while loading", (f) => ms(f.loadLongest)],
+    ["fast scrolling", (f) => fps(f.gaps)],
+    ["longest task while scrolling", (f) => ms(f.scrollLongest)],
+  ];
+  for (const r of runs) {
+    console.log(`  ${r.rate === 1 ? "unthrottled" : `CPU ${r.rate}× slower`}:`);
+    for (const [name, get] of floorLines) console.log(`    ${name.padEnd(30)} AG Grid alone: ${get(r.floors.grid).padEnd(44)} hand-drawn list: ${get(r.floors.dom)}`);
+  }
   console.log(`\nin Node (same engine, one core): full recalculation of one case ${node.fullMs.toFixed(0)} ms; one changed row and its zone ${node.rowMs.toFixed(2)} ms`);
   console.log(`machine: ${cpus().length} cores; load average ${runs.map((r) => `${r.load[0]!.toFixed(1)}→${r.load[1]!.toFixed(1)} (${r.rate}×)`).join(", ")} — shared: other work inflates every figure`);
 }

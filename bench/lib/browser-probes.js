@@ -32,7 +32,8 @@
   };
   const first = new MutationObserver(() => {
     if (!waiting.preview && document.querySelector(".fs-sheet-preview [data-preview-row]")) painted("preview");
-    if (!waiting.grid && document.querySelector(".ag-grid-scrolling-rows .ag-row")) painted("grid");
+    // (.floor-row: the hand-drawn list of bench:browser's floor page.)
+    if (!waiting.grid && document.querySelector(".ag-grid-scrolling-rows .ag-row, .floor-row")) painted("grid");
     if (b.firstResult === null) {
       const q = document.querySelector('.ag-grid-scrolling-rows .ag-row [col-id="r:Q_W"]');
       // A number, not the dash a cell shows while its results are on their way.
@@ -88,7 +89,7 @@
     },
     /** Scrolls the grid `px` per frame for `frames` frames; resolves with the gaps between frames (ms). */
     fastScroll({ frames, px }) {
-      const vp = document.querySelector(".ag-grid-viewport") ?? document.querySelector(".ag-body-viewport");
+      const vp = document.querySelector(".ag-grid-viewport") ?? document.querySelector(".ag-body-viewport") ?? document.querySelector(".floor-viewport");
       return new Promise((resolve) => {
         const gaps = [];
         let last = -1;

@@ -1,5 +1,6 @@
 "use client";
 
+import { memo } from "react";
 import { Bar, BarChart, CartesianGrid, Legend, Tooltip, XAxis, YAxis } from "recharts";
 import { formatShown } from "@/units/format";
 
@@ -13,7 +14,7 @@ export interface ZoneBar {
  * Heat loss and heat gain of each zone for one design case, side by side, in the person's units.
  * Loss in the cold colour, gain in the warm one, as in the grid.
  */
-export function ZoneTotalsChart({ data, unit }: { data: ZoneBar[]; unit: string }) {
+export const ZoneTotalsChart = memo(function ZoneTotalsChart({ data, unit }: { data: ZoneBar[]; unit: string }) {
   const fmt = (v: number) => formatShown(v, 0);
   return (
     <figure aria-label={`Heat loss and heat gain by zone, ${unit}`} className="grid gap-1">
@@ -33,4 +34,4 @@ export function ZoneTotalsChart({ data, unit }: { data: ZoneBar[]; unit: string 
       <figcaption className="text-micro text-muted">Per zone, {unit}: fabric and distribution; ducts inside the zone they serve are not counted.</figcaption>
     </figure>
   );
-}
+});

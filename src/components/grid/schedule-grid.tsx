@@ -182,15 +182,15 @@ export function ScheduleGrid(props: ScheduleGridProps) {
   // The grid is AG Grid's own (createGrid), not its React wrapper: the wrapper draws every row and
   // cell as React components, which on a big sheet doubles the work of each scrolled frame and of
   // the first rows. The options below are given once; those that change are set on the grid.
-  // A big sheet is made with its first screen of rows, and given the rest in the next task, after
-  // those rows are painted: making 5,000 row nodes is ≈ 0.1 s the first rows need not wait for.
+  // A big sheet is made with no rows, given its first screen of rows in the next task, and the
+  // rest after those are painted (the steps are in the effect below).
   const latestRows = useRef(rows);
   latestRows.current = rows;
   // The rows the grid holds (the first screen of a big sheet, until it is given the rest).
   const held = useRef<Row[] | null>(null);
   const options = useRef<GridOptions<Row>>(null);
   options.current ??= {
-    rowData: rows.length > FIRST_SCREEN_ROWS * 4 ? rows.slice(0, FIRST_SCREEN_ROWS) : rows,
+    rowData: rows.length > FIRST_SCREEN_ROWS * 4 ? [] : rows,
     columnDefs,
     context,
     getRowId: rowId,
@@ -214,22 +214,35 @@ export function ScheduleGrid(props: ScheduleGridProps) {
     animateRows: false,
     suppressColumnVirtualisation: allColumns,
   };
+  // While a big sheet is being given its rows in steps, edits wait for the last step (which takes
+  // the newest rows).
+  const staging = useRef(false);
   useEffect(() => {
     let made: GridApi<Row> | null = null;
     let cancelled = false;
-    // Made in a task of its own, after the one that evaluated AG Grid's chunk (each is ≈ 0.15–0.2 s
-    // on a slow laptop; together they were one long block of the page).
+    const nextTask = () => new Promise((resolve) => setTimeout(resolve));
+    // Each step is a task of its own: evaluating AG Grid's chunk, making the grid (its beans,
+    // theme, columns and header: ≈ 0.2 s on a slow laptop), drawing the first screen of rows, and
+    // — after those are painted — giving it every row (making 5,000 row nodes is ≈ 0.1 s the
+    // first rows need not wait for). Together they were one long block of the page.
     void loadGrid().then(async ({ createGrid, gridTheme }) => {
-      await new Promise((resolve) => setTimeout(resolve));
+      await nextTask();
       if (cancelled || !host.current) return;
+      const first = options.current!.rowData as Row[];
+      staging.current = first !== latestRows.current;
       const grid = createGrid<Row>(host.current, { ...options.current!, theme: gridTheme });
       made = grid;
-      held.current = options.current!.rowData as Row[];
-      if (held.current === latestRows.current) return;
+      held.current = first;
+      if (!staging.current) return;
+      await nextTask();
+      if (cancelled) return;
+      held.current = latestRows.current.slice(0, FIRST_SCREEN_ROWS);
+      grid.setGridOption("rowData", held.current);
       await afterNextPaint();
       if (cancelled) return;
       grid.setGridOption("rowData", latestRows.current);
       held.current = latestRows.current;
+      staging.current = false;
     });
     return () => {
       cancelled = true;
@@ -243,7 +256,7 @@ export function ScheduleGrid(props: ScheduleGridProps) {
   // re-runs the row model, and with it the header checkbox's walk over every row (≈ 20 ms on
   // 5,000): an edit in an unsorted, unfiltered sheet needs neither.
   useEffect(() => {
-    if (!api || held.current === null || held.current === rows) return;
+    if (!api || staging.current || held.current === null || held.current === rows) return;
     const changed = changedRows(held.current, rows);
     if (changed && !api.isAnyFilterPresent() && !api.getColumnState().some((c) => c.sort)) {
       for (const r of changed) {
