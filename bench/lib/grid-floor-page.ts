@@ -1,12 +1,21 @@
 // The floor pages of bench:browser, bundled by esbuild (grid-floor.ts) and served to Chromium
 // without the app: what this machine's browser pays for the sheet's first rows and its fast
 // scrolling before any of Filmsheet's own code runs. `#grid`: AG Grid alone — the app's own
-// runtime chunk (the same modules and theme), the same columns as the benchmark's column set
-// (checkbox, label pinned left, zone, build-up, area, four results, notes, working), 5,000 rows of
-// plain values, no React, no results, nothing else on the page. `#dom`: no grid library at all — a
-// virtual list drawn by hand (absolutely placed rows of the same cells, re-made as they scroll
-// into view), the least a browser does to show the same sheet.
-import { createGrid, gridTheme } from "../../src/components/grid/ag-grid-runtime";
+// runtime module (ag-grid-runtime.ts: the same modules and theme) as a script of its own, made in
+// the app's steps, each a task of its own (evaluate AG Grid; make the grid empty; give it the
+// first screen of rows; after those are painted, every row) — with the same columns as the
+// benchmark's column set (checkbox, label pinned left, zone, build-up, area, four results, notes,
+// working) and 5,000 rows of plain values: no React, no results, nothing else on the page.
+// `#dom`: no grid library at all — a virtual list drawn by hand (absolutely placed rows of the
+// same cells, made as they scroll into view), the least a browser does to show the same sheet.
+import type * as GridRuntime from "../../src/components/grid/ag-grid-runtime";
+
+declare global {
+  interface Window {
+    /** AG Grid's runtime, set by its own script (grid-floor.ts builds it). */
+    FloorGrid?: typeof GridRuntime;
+  }
+}
 
 const ROWS = 5000;
 const ZONES = ["Hall", "Offices north", "Offices south", "Plant deck"];
@@ -39,10 +48,18 @@ const text = (r: FloorRow, c: (typeof COLUMNS)[number]) => (c.key === "working" 
 
 const host = document.getElementById("floor")!;
 if (location.hash === "#dom") drawByHand();
-else
-  createGrid<FloorRow>(host, {
+else {
+  const script = document.createElement("script");
+  script.src = "/grid.js";
+  script.onload = () => setTimeout(makeGrid);
+  document.head.appendChild(script);
+}
+
+function makeGrid() {
+  const { createGrid, gridTheme } = window.FloorGrid!;
+  const grid = createGrid<FloorRow>(host, {
     theme: gridTheme,
-    rowData: rows,
+    rowData: [],
     getRowId: (p) => p.data.id,
     columnDefs: [
       { field: "label", headerName: "Label", pinned: "left", width: 176 },
@@ -53,6 +70,11 @@ else
     rowSelection: { mode: "multiRow", checkboxes: true, headerCheckbox: true, enableClickSelection: false },
     animateRows: false,
   });
+  setTimeout(() => {
+    grid.setGridOption("rowData", rows.slice(0, 60));
+    requestAnimationFrame(() => setTimeout(() => grid.setGridOption("rowData", rows)));
+  });
+}
 
 function drawByHand() {
   const ROW_H = 32;
