@@ -47,8 +47,12 @@ export function useScheduleResults(schedule: TSchedule, dc: TDesignCase | undefi
   const seen = useRef({ order: new WeakMap<TSchedule, number>(), n: 0 }).current;
   if (!seen.order.has(schedule)) seen.order.set(schedule, ++seen.n);
   const rows = schedule.surfaces.length + schedule.duct_runs.length;
+  // A browser that cannot start the worker sets `broken` when first asked (startClient). Not a
+  // test of `typeof Worker` here: the server has no Worker, and would compute a big sheet in its
+  // render and draw results the page's first render does not have (a hydration mismatch, which
+  // makes React throw the server's HTML away and draw the whole page again).
   const [broken, setBroken] = useState(false);
-  const inline = rows <= INLINE_ROWS || broken || typeof Worker === "undefined";
+  const inline = rows <= INLINE_ROWS || broken;
 
   const client = () => (worker.current ??= startClient());
   const startClient = () => {
