@@ -69,6 +69,8 @@ function makeGrid() {
     selectionColumnDef: { pinned: "left", width: 48, resizable: false, sortable: false },
     rowSelection: { mode: "multiRow", checkboxes: true, headerCheckbox: true, enableClickSelection: false },
     animateRows: false,
+    // As the app's big sheets (BIG_SHEET_ROW_BUFFER in schedule-grid.tsx).
+    rowBuffer: 0,
   });
   setTimeout(() => {
     grid.setGridOption("rowData", rows.slice(0, 60));

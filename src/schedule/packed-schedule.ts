@@ -77,3 +77,20 @@ export function unpackSchedule(p: PackedSchedule): TSchedule {
   const { packed: _packed, surfaces, duct_runs, ...rest } = p;
   return { ...rest, surfaces: unpackRows(surfaces), duct_runs: unpackRows(duct_runs) } as TSchedule;
 }
+
+// The page's packed text of each schedule read from it, kept beside that schedule object: the
+// results worker is sent the text (one string to copy), where copying the 5,000 row objects
+// across held the page's main thread ≈ 60 ms while it was loading.
+const texts = new WeakMap<TSchedule, string>();
+
+/** The schedule in the page's packed JSON text, remembering the text for that schedule object. */
+export function scheduleFromText(text: string): TSchedule {
+  const s = unpackSchedule(JSON.parse(text) as PackedSchedule);
+  texts.set(s, text);
+  return s;
+}
+
+/** The packed text `s` was read from (scheduleFromText), or undefined for any other schedule (an edited one is a new object). */
+export function packedTextOf(s: TSchedule): string | undefined {
+  return texts.get(s);
+}

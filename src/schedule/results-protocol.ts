@@ -8,6 +8,8 @@ import type { TDesignCase, TSchedule } from "@/schemas/schedule";
 
 export type ToWorker =
   | { type: "schedule"; job: number; schedule: Pick<TSchedule, "project" | "zones" | "buildups" | "surfaces" | "duct_runs"> }
+  /** The schedule as the page's packed JSON text (packed-schedule.ts), when the page has it. */
+  | { type: "schedule-text"; job: number; text: string }
   | { type: "case"; job: number; dc: TDesignCase; urgent: boolean };
 
 export type FromWorker =

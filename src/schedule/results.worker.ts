@@ -5,6 +5,7 @@
  */
 import { scheduleResults } from "@/calc/index";
 import { engineDesignCase, engineSchedule } from "./engine-schedule";
+import { scheduleFromText } from "./packed-schedule";
 import { SLICE, type FromWorker, type ToWorker } from "./results-protocol";
 
 type Schedule = Extract<ToWorker, { type: "schedule" }>["schedule"];
@@ -19,6 +20,8 @@ self.onmessage = (e: MessageEvent<ToWorker>) => {
   const m = e.data;
   if (m.type === "schedule") {
     schedules.set(m.job, m.schedule);
+  } else if (m.type === "schedule-text") {
+    schedules.set(m.job, scheduleFromText(m.text));
   } else {
     // A newer request for the same case replaces one still waiting.
     queue = queue.filter((q) => q.dc.id !== m.dc.id);

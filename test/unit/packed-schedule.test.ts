@@ -3,7 +3,7 @@
 // packed text is much smaller than the rows as objects.
 import { describe, expect, test } from "vitest";
 import type { TSchedule } from "../../src/schemas/schedule";
-import { packSchedule, unpackSchedule, type PackedSchedule } from "../../src/schedule/packed-schedule";
+import { packSchedule, packedTextOf, scheduleFromText, unpackSchedule, type PackedSchedule } from "../../src/schedule/packed-schedule";
 import { SAMPLE_CASES, sampleSchedule as engineSample } from "../support/sample-schedule";
 
 /** A schedule shaped as the server stores it: ids are UUIDs, rows have a version and a position. */
@@ -76,5 +76,18 @@ describe("packed schedule", () => {
     const plain = JSON.stringify(s).length;
     const packed = JSON.stringify(packSchedule(s)).length;
     expect(packed / plain).toBeLessThan(0.5);
+  });
+
+  test("a schedule read from the page's text keeps that text (for the results worker); any other schedule has none", () => {
+    const s = sampleSchedule(50, 5);
+    const text = JSON.stringify(packSchedule(s));
+    const read = scheduleFromText(text);
+    expect(read).toEqual(s);
+    expect(packedTextOf(read)).toBe(text);
+    // The worker reads the same schedule from the text.
+    expect(scheduleFromText(packedTextOf(read)!)).toEqual(read);
+    // An edit makes a new schedule object: it has no text, and goes to the worker as objects.
+    expect(packedTextOf({ ...read, surfaces: [...read.surfaces] })).toBeUndefined();
+    expect(packedTextOf(s)).toBeUndefined();
   });
 });

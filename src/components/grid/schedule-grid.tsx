@@ -45,6 +45,16 @@ const rowId = (p: GetRowIdParams<Row>) => p.data.id;
 /** Rows a big sheet is first made with (more than a tall screen shows). */
 const FIRST_SCREEN_ROWS = 60;
 
+/**
+ * Rows a big sheet draws beyond the top and bottom of the view (AG Grid's default, kept for
+ * sheets up to ALL_COLUMNS_ROWS, is 10). Each scrolled frame makes the rows coming into view and
+ * the buffer's worth ahead of them; the grid draws rows that scroll into view within the same
+ * frame anyway, so on a big sheet a buffer buys nothing a person sees and costs every frame of a
+ * fast scroll (bench:browser's floor, AG Grid alone: ≈ 30 frames/s with 10 rows of buffer, ≈ 37
+ * with none; the 5,000-row sheet went from ≈ 20 to ≈ 30–40).
+ */
+const BIG_SHEET_ROW_BUFFER = 0;
+
 /** Sheets up to this many rows draw every column; bigger ones only those in view. */
 export const ALL_COLUMNS_ROWS = 400;
 
@@ -213,6 +223,7 @@ export function ScheduleGrid(props: ScheduleGridProps) {
     onFilterChanged,
     animateRows: false,
     suppressColumnVirtualisation: allColumns,
+    rowBuffer: allColumns ? undefined : BIG_SHEET_ROW_BUFFER,
   };
   // While a big sheet is being given its rows in steps, edits wait for the last step (which takes
   // the newest rows).

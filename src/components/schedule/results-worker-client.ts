@@ -6,6 +6,7 @@
 import type { RowResult, ScheduleResults } from "@/calc/index";
 import type { TDesignCase, TSchedule } from "@/schemas/schedule";
 import type { FromWorker, ToWorker } from "@/schedule/results-protocol";
+import { packedTextOf } from "@/schedule/packed-schedule";
 import { startResultsWorker } from "@/schedule/results-worker";
 
 export type OnCase = (schedule: TSchedule, dc: TDesignCase, results: ScheduleResults, ms: number) => void;
@@ -40,8 +41,11 @@ export class ResultsWorkerClient {
       this.job++;
       this.sent = schedule;
       this.snapshots.set(this.job, schedule);
+      // The page's own packed text when this is the schedule it came with (a copy of one string);
+      // an edited schedule goes as objects.
+      const text = packedTextOf(schedule);
       const { project, zones, buildups, surfaces, duct_runs } = schedule;
-      this.post({ type: "schedule", job: this.job, schedule: { project, zones, buildups, surfaces, duct_runs } });
+      this.post(text !== undefined ? { type: "schedule-text", job: this.job, text } : { type: "schedule", job: this.job, schedule: { project, zones, buildups, surfaces, duct_runs } });
     }
     for (const dc of cases) {
       this.asked.set(dc.id, this.job);

@@ -4,7 +4,7 @@ import { QueryClient, QueryClientProvider, useQuery } from "@tanstack/react-quer
 import { createContext, useCallback, useContext, useMemo, useState, type ReactNode } from "react";
 import type { TPreferences } from "@/schemas/preferences";
 import type { TSchedule } from "@/schemas/schedule";
-import { unpackSchedule, type PackedSchedule } from "@/schedule/packed-schedule";
+import { scheduleFromText } from "@/schedule/packed-schedule";
 import type { UnitSystem } from "@/units/units";
 import { api } from "./api-client";
 import { PREFERENCES_KEY, usePreferences } from "./use-preferences";
@@ -43,7 +43,7 @@ export function ScheduleProvider({ initialJson, preferences, canEdit, children }
   const [client] = useState(() => new QueryClient({ defaultOptions: { queries: { staleTime: 30_000, refetchOnWindowFocus: false } } }));
   // The schedule packed as JSON text (src/schedule/packed-schedule.ts), read once and unpacked
   // into the shape the API answers, which a refetch brings.
-  const [initial] = useState(() => unpackSchedule(JSON.parse(initialJson) as PackedSchedule));
+  const [initial] = useState(() => scheduleFromText(initialJson));
   useState(() => {
     client.setQueryData(scheduleKey(initial.project.id), initial);
     client.setQueryData(PREFERENCES_KEY, preferences);
