@@ -164,7 +164,8 @@ async function signedInState(browser: Browser, base: string) {
   return state;
 }
 
-async function openPage(browser: Browser, state: Awaited<ReturnType<typeof signedInState>>, rate: number) {
+/** A fresh browser profile (signed in when given `state`) with the probes installed and the CPU slowed `rate`×. */
+async function openPage(browser: Browser, state: Awaited<ReturnType<typeof signedInState>> | undefined, rate: number) {
   const context = await browser.newContext({ storageState: state, viewport: { width: 1440, height: 900 } });
   await context.addInitScript({ content: PROBES });
   const page = await context.newPage();
@@ -232,6 +233,8 @@ const firstFigures = (page: Page) =>
   page.evaluate(() => (window as unknown as { __bench: { firstRow: number | null; firstPreviewRow: number | null; firstGridRow: number | null; firstResult: number | null } }).__bench);
 const readSince = (page: Page, since: number) => page.evaluate((s) => (window as unknown as { __probes: { readSince: (s: number) => { measures: { name: string; duration: number }[]; longest: number; longestFrame: number; now: number } } }).__probes.readSince(s), since);
 const now = (page: Page) => page.evaluate(() => performance.now());
+/** Scrolls the grid `px` a frame for 150 frames; the gaps between frames (ms). */
+const scrollGaps = (page: Page, px: number) => page.evaluate((p) => (window as unknown as { __probes: { fastScroll: (a: object) => Promise<number[]> } }).__probes.fastScroll({ frames: 150, px: p }), px);
 
 async function measure(browser: Browser, state: Awaited<ReturnType<typeof signedInState>>, url: string, rate: number): Promise<Figures> {
   const f: Figures = { firstRows: [], gridRows: [], firstResults: [], ttfb: [], htmlDone: [], domReady: [], htmlBytes: 0, warmRows: [], loadLongest: 0, loadFrame: 0, edits: [], editCompute: [], switches: [], gaps: [], steadyGaps: [], useLongest: 0, useFrame: 0 };
@@ -329,12 +332,12 @@ async function measure(browser: Browser, state: Awaited<ReturnType<typeof signed
     await cdp!.send("Profiler.start");
     await browser.startTracing(page, { categories: ["devtools.timeline", "disabled-by-default-devtools.timeline"] });
   }
-  f.gaps = await page.evaluate(() => (window as unknown as { __probes: { fastScroll: (a: object) => Promise<number[]> } }).__probes.fastScroll({ frames: 150, px: 600 }));
+  f.gaps = await scrollGaps(page, 600);
   if (PROFILE) {
     await saveProfile(cdp!, `scroll-${rate}x`);
     summariseTrace(await browser.stopTracing(), `scroll-${rate}x`);
   }
-  f.steadyGaps = await page.evaluate(() => (window as unknown as { __probes: { fastScroll: (a: object) => Promise<number[]> } }).__probes.fastScroll({ frames: 150, px: 100 }));
+  f.steadyGaps = await scrollGaps(page, 100);
   const r = await readSince(page, since);
   f.useLongest = r.longest;
   f.useFrame = r.longestFrame;
@@ -352,12 +355,8 @@ type Floor = { firstRows: number[]; loadLongest: number; gaps: number[]; steadyG
 async function measureFloor(browser: Browser, mode: "grid" | "dom", rate: number): Promise<Floor> {
   const f: Floor = { firstRows: [], loadLongest: 0, gaps: [], steadyGaps: [], scrollLongest: 0 };
   for (let i = 0; i <= LOADS; i++) {
-    const context = await browser.newContext({ viewport: { width: 1440, height: 900 } });
-    await context.addInitScript({ content: PROBES });
-    await serveFloor(context);
-    const page = await context.newPage();
-    const cdp = await context.newCDPSession(page);
-    await cdp.send("Emulation.setCPUThrottlingRate", { rate });
+    const { page, close } = await openPage(browser, undefined, rate);
+    await serveFloor(page.context());
     await page.goto(`${FLOOR_ORIGIN}/#${mode}`);
     await page.waitForFunction(() => (window as unknown as { __bench: { firstGridRow: number | null } }).__bench.firstGridRow !== null, null, { timeout: 60_000 });
     await sleep(2000);
@@ -367,11 +366,11 @@ async function measureFloor(browser: Browser, mode: "grid" | "dom", rate: number
     }
     if (i === LOADS) {
       const since = await now(page);
-      f.gaps = await page.evaluate(() => (window as unknown as { __probes: { fastScroll: (a: object) => Promise<number[]> } }).__probes.fastScroll({ frames: 150, px: 600 }));
+      f.gaps = await scrollGaps(page, 600);
       f.scrollLongest = (await readSince(page, since)).longest;
-      f.steadyGaps = await page.evaluate(() => (window as unknown as { __probes: { fastScroll: (a: object) => Promise<number[]> } }).__probes.fastScroll({ frames: 150, px: 100 }));
+      f.steadyGaps = await scrollGaps(page, 100);
     }
-    await context.close();
+    await close();
   }
   return f;
 }

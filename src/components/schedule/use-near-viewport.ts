@@ -3,12 +3,11 @@
 import { useEffect, useState, type RefObject } from "react";
 
 /**
- * Whether an element is on screen or within `margin` of it (an IntersectionObserver, which also
- * follows scrolling panels), and true from the moment the page is printed. Lets a part of the page
- * below the fold (the zone chart) be drawn only when it is about to be seen, and not be redrawn
- * while it is off screen.
+ * Whether an element is on screen (an IntersectionObserver, which also follows scrolling panels),
+ * and true from the moment the page is printed. Lets a part of the page below the fold (the zone
+ * chart) be drawn only when it is seen, and not be redrawn while it is off screen.
  */
-export function useNearViewport(ref: RefObject<HTMLElement | null>, margin = "0px"): boolean {
+export function useNearViewport(ref: RefObject<HTMLElement | null>): boolean {
   const [near, setNear] = useState(false);
   useEffect(() => {
     const el = ref.current;
@@ -19,12 +18,12 @@ export function useNearViewport(ref: RefObject<HTMLElement | null>, margin = "0p
       setNear(true);
       return () => window.removeEventListener("beforeprint", printing);
     }
-    const observer = new IntersectionObserver((entries) => setNear(entries[entries.length - 1]!.isIntersecting), { rootMargin: margin });
+    const observer = new IntersectionObserver((entries) => setNear(entries[entries.length - 1]!.isIntersecting));
     observer.observe(el);
     return () => {
       observer.disconnect();
       window.removeEventListener("beforeprint", printing);
     };
-  }, [ref, margin]);
+  }, [ref]);
   return near;
 }
