@@ -5,7 +5,7 @@ import { chmodSync, chownSync, existsSync, mkdirSync, mkdtempSync, readdirSync, 
 import { tmpdir } from "node:os";
 import { dirname, join, relative } from "node:path";
 import { fileURLToPath } from "node:url";
-import { markEagerChunks } from "./compile-hints.mjs";
+import { markBuild } from "./compile-hints.mjs";
 import { assertPortFree, capture, run, runAsync, runStatus, step } from "./proc.mjs";
 
 export const ROOT = join(dirname(fileURLToPath(import.meta.url)), "..", "..");
@@ -250,7 +250,7 @@ export function ensureBuild() {
   // SKIP_BUILD=1: serve the .next that is there (e.g. one made by hand with `npx next build`).
   if (process.env.SKIP_BUILD === "1" && existsSync(join(ROOT, ".next", "BUILD_ID"))) {
     console.log("SKIP_BUILD=1: serving the existing build (.next) as it is");
-    markEagerChunks(join(ROOT, ".next", "static", "chunks"));
+    markBuild(ROOT);
     return;
   }
   const hash = hashInputs();
@@ -262,8 +262,7 @@ export function ensureBuild() {
   const t0 = Date.now();
   const status = runStatus(join(ROOT, "node_modules/.bin/next"), ["build"], { cwd: ROOT, env: baseEnv({ NODE_ENV: "production" }) });
   if (status !== 0) throw new Error(`next build failed (exit ${status})`);
-  const marked = markEagerChunks(join(ROOT, ".next", "static", "chunks"));
-  console.log(`compile hint put first in ${marked.join(", ")} (AG Grid's chunk)`);
+  markBuild(ROOT);
   writeFileSync(STAMP, hash);
   console.log(`next build took ${((Date.now() - t0) / 1000).toFixed(1)} s`);
 }

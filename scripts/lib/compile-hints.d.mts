@@ -2,3 +2,4 @@
 export const COMPILE_HINT: string;
 export const AG_GRID_MARKER: string;
 export function markEagerChunks(dir: string, marker?: string): string[];
+export function markBuild(root: string): void;

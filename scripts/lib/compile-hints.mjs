@@ -8,6 +8,7 @@
 // eager compiling then competes with the page's first layout for the two cores).
 import { readdirSync, readFileSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
+import { pathToFileURL } from "node:url";
 
 export const COMPILE_HINT = "//# allFunctionsCalledOnLoad\n";
 /** A class name only AG Grid's own code holds (its root element). */
@@ -32,8 +33,11 @@ export function markEagerChunks(dir, marker = AG_GRID_MARKER) {
   return found;
 }
 
-// `npm run build` (next build, then this file run on its own) marks the chunks the same way.
-if (process.argv[1] && import.meta.url === new URL(`file://${process.argv[1]}`).href) {
-  const marked = markEagerChunks(join(process.cwd(), ".next", "static", "chunks"));
+/** Marks the static chunks of the build in `root`/.next and says which. */
+export function markBuild(root) {
+  const marked = markEagerChunks(join(root, ".next", "static", "chunks"));
   console.log(`compile hint put first in ${marked.join(", ")} (AG Grid's chunk)`);
 }
+
+// `npm run build`: next build, then this file run on its own.
+if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) markBuild(process.cwd());
