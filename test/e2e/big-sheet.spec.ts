@@ -86,6 +86,23 @@ test("the first screen of rows is drawn by the server, and gives way to the grid
   });
 });
 
+// A big sheet is made with no rows, given its first screen, and then the rest a thousand rows a
+// task (schedule-grid.tsx): every row arrives, in the sheet's order, and the last is reachable.
+test("a 2,150-row sheet is given every row, in order", async ({ page }) => {
+  await withProject(page, "STEPS", 2150, 2, async (projectId) => {
+    await page.goto(`/projects/${projectId}`);
+    const first = page.locator('.ag-row:not(.ag-row-pinned)[row-index="0"] [col-id="label"]');
+    await expect(first).toHaveText("Panel 1", { timeout: 60_000 });
+    await expect(page.getByText("Total of 2150 rows")).toBeVisible();
+    await first.click();
+    await page.keyboard.press("ControlOrMeta+ArrowDown");
+    const last = page.locator('.ag-row:not(.ag-row-pinned)[row-index="2149"] [col-id="label"]');
+    await expect(last).toHaveText("Panel 2150", { timeout: 30_000 });
+    await expect(page.locator('.ag-row:not(.ag-row-pinned)[row-index="2150"]')).toHaveCount(0);
+    await expect(page.locator('.ag-row:not(.ag-row-pinned)[row-index="2148"] [col-id="label"]')).toHaveText("Panel 2149");
+  });
+});
+
 // An edit reaches the grid as its row's new data (setData) when nothing must be re-sorted or
 // re-filtered, and as a transaction when the sheet is sorted (schedule-grid.tsx): in a sheet
 // sorted by area, a row given the smallest area moves to the top; unsorted, it keeps its place.
