@@ -218,16 +218,14 @@ function readTrace(trace: Buffer) {
 }
 
 /** The main thread's tasks in a trace (RunTask, disabled-by-default-devtools.timeline): the longest one's CPU time, and the most CPU time of any (ms). */
-function taskCpu(trace: Buffer): { longestCpu: number; mostCpu: number } {
-  const { events, onMain } = readTrace(trace);
+function taskCpu({ events, onMain }: ReturnType<typeof readTrace>): { longestCpu: number; mostCpu: number } {
   const tasks = events.filter((e) => e.ph === "X" && e.name === "RunTask" && onMain(e) && e.dur !== undefined);
   const longest = tasks.reduce<TraceEvent | undefined>((a, t) => (a && a.dur! >= t.dur! ? a : t), undefined);
   return { longestCpu: (longest?.tdur ?? 0) / 1000, mostCpu: Math.max(0, ...tasks.map((t) => (t.tdur ?? 0) / 1000)) };
 }
 
-function summariseTrace(trace: Buffer, name: string, until = 0) {
+function summariseTrace(trace: Buffer, { events, onMain }: ReturnType<typeof readTrace>, name: string, until = 0) {
   writeFileSync(join(PROFILE!, `${name}.trace.json`), trace);
-  const { events, onMain } = readTrace(trace);
   const by = new Map<string, number>();
   for (const e of events) if (e.ph === "X" && e.dur && onMain(e)) by.set(e.name, (by.get(e.name) ?? 0) + e.dur);
   console.log(`\ntrace ${name}: main-thread time by event (ms, nested events counted in their parents too)`);
@@ -296,13 +294,14 @@ async function measure(browser: Browser, state: Awaited<ReturnType<typeof signed
     const r = await readSince(page, 0);
     f.loadFrame = Math.max(f.loadFrame, r.longestFrame);
     const trace = await browser.stopTracing();
-    const cpu = taskCpu(trace);
+    const read = readTrace(trace);
+    const cpu = taskCpu(read);
     if (r.longest >= f.loadLongest) f.loadLongestCpu = cpu.longestCpu;
     f.loadLongest = Math.max(f.loadLongest, r.longest);
     f.loadMostCpu = Math.max(f.loadMostCpu, cpu.mostCpu);
     if (profiled) {
       await saveProfile(cdp!, `load-${rate}x`);
-      summariseTrace(trace, `load-${rate}x`, first.firstGridRow ?? first.firstRow ?? 0);
+      summariseTrace(trace, read, `load-${rate}x`, first.firstGridRow ?? first.firstRow ?? 0);
     }
   }
   page = page!;
@@ -333,7 +332,8 @@ async function measure(browser: Browser, state: Awaited<ReturnType<typeof signed
     f.edits.push(await page.evaluate(() => (window as unknown as { __done: Promise<number> }).__done));
     if (PROFILE && i === EDITS - 1) {
       await saveProfile(cdp!, `edit-${rate}x`);
-      summariseTrace(await browser.stopTracing(), `edit-${rate}x`);
+      const trace = await browser.stopTracing();
+      summariseTrace(trace, readTrace(trace), `edit-${rate}x`);
     }
     const m = (await readSince(page, t)).measures.filter((x) => x.name.startsWith("filmsheet:results"));
     if (m.length) f.editCompute.push(Math.max(...m.map((x) => x.duration)));
@@ -361,7 +361,8 @@ async function measure(browser: Browser, state: Awaited<ReturnType<typeof signed
   f.gaps = await scrollGaps(page, 600);
   if (PROFILE) {
     await saveProfile(cdp!, `scroll-${rate}x`);
-    summariseTrace(await browser.stopTracing(), `scroll-${rate}x`);
+    const trace = await browser.stopTracing();
+    summariseTrace(trace, readTrace(trace), `scroll-${rate}x`);
   }
   f.steadyGaps = await scrollGaps(page, 100);
   const r = await readSince(page, since);

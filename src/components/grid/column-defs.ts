@@ -28,8 +28,8 @@ export function fitTitle(title: string, base: number): number {
 }
 
 const isTotals = (p: { node?: { rowPinned?: string | null } | null; data?: Row }) => p.data?.id === TOTALS_ID;
-/** A total of a thousand or more is shown whole: its decimals would not fit the column and mean nothing at that size. */
-const totalShown = (v: number, d: number) => formatShown(v, Math.abs(v) >= 1000 ? 0 : d);
+/** A number cell's text with `d` decimals; a total of a thousand or more is shown whole (its decimals would not fit the column and mean nothing at that size). */
+const numberShown = (p: { data?: Row }, v: number, d: number) => formatShown(v, isTotals(p) && Math.abs(v) >= 1000 ? 0 : d);
 
 /** The value a row inherits when an override is blank (the build-up's absorptance or emissivity). */
 function inherited(col: SheetColumn, row: Row, ctx: GridContext): number | null {
@@ -79,7 +79,7 @@ function inputColumn(col: SheetColumn, s: TSchedule, system: UnitSystem): ColDef
             const blank = col.spec!.blank;
             return blank === undefined ? "" : blank.startsWith("not ") ? "—" : `(${blank})`;
           }
-          return isTotals(p) ? totalShown(p.value as number, d) : formatShown(p.value as number, d);
+          return numberShown(p, p.value as number, d);
         },
       };
     }
@@ -140,7 +140,7 @@ function resultColumn(c: ResultColumn, system: UnitSystem): ColDef<Row> {
       if (isTotals(p)) return c.total ? toDisplay(c.quantity!, p.context.totals[c.key] ?? 0, system) : null;
       return p.data ? resultValue(c, p.context.results.get(p.data.id), system) : null;
     },
-    valueFormatter: (p: F) => (typeof p.value === "number" ? (isTotals(p) ? totalShown(p.value, d) : formatShown(p.value, d)) : p.value === null || p.value === undefined ? (isTotals(p) ? "" : "—") : String(p.value)),
+    valueFormatter: (p: F) => (typeof p.value === "number" ? numberShown(p, p.value, d) : p.value === null || p.value === undefined ? (isTotals(p) ? "" : "—") : String(p.value)),
     cellClassRules: {
       "fs-computed": () => true,
       "fs-gain": (p) => c.key === "Q_W" && typeof p.value === "number" && ((p.context as GridContext).sheet === "surfaces" ? p.value < 0 : p.value > 0),

@@ -194,8 +194,8 @@ export function ScheduleGrid(props: ScheduleGridProps) {
   // The grid is AG Grid's own (createGrid), not its React wrapper: the wrapper draws every row and
   // cell as React components, which on a big sheet doubles the work of each scrolled frame and of
   // the first rows. The options below are given once; those that change are set on the grid.
-  // A big sheet is made with no rows, given its first screen of rows in the next task, and the
-  // rest after those are painted (the steps are in the effect below).
+  // A big sheet is made with no columns and no rows, then given its columns, its first screen of
+  // rows and, after those are painted, the rest (the steps are in the effect below).
   const latestRows = useRef(rows);
   latestRows.current = rows;
   // The rows the grid holds (the first screen of a big sheet, until it is given the rest).
