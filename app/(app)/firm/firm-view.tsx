@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import { PageHeader, Panel } from "@/components/panel";
 import { ROLE_HINTS, ROLE_LABELS } from "@/schemas/roles";
 import type { Actor } from "@/server/auth/actor";

@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import type { ReactNode } from "react";
 import { PageHeader, Panel } from "@/components/panel";
 import type { TProject } from "@/schemas/project";

@@ -1,6 +1,6 @@
 "use client";
 
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import { useActionState } from "react";
 import { Field, FormMessage, SubmitButton } from "@/components/forms/form-parts";
 import { signUp } from "../actions";

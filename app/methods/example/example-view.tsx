@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import { working } from "@/calc/index";
 import { WorkingView } from "@/components/working/working-view";
 

@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 
 /**
  * Where a free (or lapsed) firm meets something only the paid plan does: what it is, what the

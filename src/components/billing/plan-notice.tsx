@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import { FREE_PLAN, type TPlan } from "@/schemas/billing";
 import { STATUS_WORDS } from "./plan-words";
 

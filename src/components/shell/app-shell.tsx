@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import type { ReactNode } from "react";
 import { LogoMark } from "@/components/brand/logo-mark";
 import { EngineeringCaution } from "@/components/engineering-caution";

@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import { SignOutButton } from "./sign-out-button";
 
 /** Who is signed in and the way out; or the way in. */

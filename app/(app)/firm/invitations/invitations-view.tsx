@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import { PageHeader, Panel } from "@/components/panel";
 import type { TInvitationRow } from "@/server/repositories/invitations";
 import { AdminOnly } from "../admin-only";

@@ -1,6 +1,6 @@
 "use client";
 
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import { usePathname } from "next/navigation";
 import { ProjectTitle } from "./project-title";
 import { labelOf, METHOD_OPTIONS, TERRAIN_OPTIONS } from "@/schemas/schedule-fields";

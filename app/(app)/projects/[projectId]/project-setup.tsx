@@ -1,6 +1,6 @@
 "use client";
 
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import { useState } from "react";
 import type { TSchedule } from "@/schemas/schedule";
 import { ImportPanel } from "@/components/grid/import-panel";

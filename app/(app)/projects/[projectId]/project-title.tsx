@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import type { ReactNode } from "react";
 
 /** A project's breadcrumb, name and one line about it: the top of every project page. */

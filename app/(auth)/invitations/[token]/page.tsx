@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import { ZLinkToken } from "@/schemas/auth";
 import { ROLE_LABELS } from "@/schemas/roles";
 import { getViewer } from "@/server/auth/get-viewer";

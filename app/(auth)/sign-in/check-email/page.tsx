@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import { AuthCard } from "../../auth-card";
 
 export const metadata: Metadata = { title: "Check your e-mail" };

@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import { revisionsPath } from "@/checking/paths";
 import type { TProject } from "@/schemas/project";
 import { ProjectTitle } from "../project-title";

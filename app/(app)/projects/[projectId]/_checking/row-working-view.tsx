@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import { CHECK_MOVES, SHEET_LABELS } from "@/checking/check-machine";
 import { checkPath, rowPath, schedulePath, workingPath } from "@/checking/paths";
 import { HistoryList, type HistoryItem } from "@/components/checking/history-list";

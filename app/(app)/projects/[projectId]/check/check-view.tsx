@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import { CHECK_STATES, STATE_LABELS } from "@/checking/check-machine";
 import { historyPath, revisionsPath, rowPath } from "@/checking/paths";
 import { SectionHeader } from "@/components/checking/section-header";

@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import { checkPath } from "@/checking/paths";
 import { HistoryList, type HistoryItem } from "@/components/checking/history-list";
 import { SectionHeader } from "@/components/checking/section-header";

@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import { checkPath, revisionPath } from "@/checking/paths";
 import { when } from "@/components/checking/when";
 import { SectionHeader } from "@/components/checking/section-header";

@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import { exclusionsSentence, type RowResult } from "@/calc/index";
 import type { TCheckSheet } from "@/checking/check-machine";
 import { revisionPath, revisionsPath } from "@/checking/paths";

@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/shell/link";
 import { SHEET_LABELS } from "@/checking/check-machine";
 import type { FieldChange, RevisionComparison } from "@/checking/compare-revisions";
 import { revisionPath, revisionsPath } from "@/checking/paths";
