@@ -1,22 +1,11 @@
 import { z } from "zod";
-import { SHEETS, type TSheet } from "./schedule";
-import { UNIT_SYSTEMS, type UnitSystem } from "@/units/units";
-import { columnIds, isBuiltInSet, type ColumnSet } from "@/schedule/column-sets";
+import { SHEETS } from "./schedule";
+import { UNIT_SYSTEMS } from "@/units/units";
+import { columnIds, isBuiltInSet } from "@/schedule/column-sets";
 
-/** A person's own view settings (per firm): nothing here changes a project. */
-export interface TPreferences {
-  /** null: each project's own units (its setting on "Site and units"). */
-  unit_system: UnitSystem | null;
-  zone_totals_collapsed: boolean;
-  /** Per sheet: "inputs", "results", "everything" or the id of one of the person's sets. */
-  active_column_sets: Partial<Record<TSheet, string>>;
-  column_sets: ColumnSet[];
-  version: number;
-}
+export { DEFAULT_PREFERENCES, MAX_COLUMN_SETS, type TPreferences } from "./preferences-defaults";
+import { MAX_COLUMN_SETS } from "./preferences-defaults";
 
-export const DEFAULT_PREFERENCES: TPreferences = { unit_system: null, zone_totals_collapsed: false, active_column_sets: {}, column_sets: [], version: 0 };
-
-export const MAX_COLUMN_SETS = 40;
 
 const setId = z
   .string({ error: "Column set id is required" })

@@ -7,6 +7,10 @@
 import { DEFAULT_JACKET_ABSORPTANCE } from "@/calc/schedule/types";
 import { displayBound, unitLabel, type Quantity, type UnitSystem } from "@/units/units";
 
+/** The schedule's two sheets. */
+export const SHEETS = ["surfaces", "duct_runs"] as const;
+export type TSheet = (typeof SHEETS)[number];
+
 export interface NumberSpec {
   label: string;
   quantity: Quantity;

@@ -18,6 +18,7 @@ import {
   LOCATION_OPTIONS,
   METHOD_OPTIONS,
   SHAPE_OPTIONS,
+  SHEETS,
   SOLAR_SPEC,
   SURFACE_NUMBERS,
   ZONE_NUMBERS,
@@ -159,8 +160,7 @@ export type TBuildup = TBuildupValues & Stored;
 export type TSurface = TSurfaceValues & Stored & { position: number };
 export type TDuctRun = TDuctRunValues & Stored & { position: number };
 
-export const SHEETS = ["surfaces", "duct_runs"] as const;
-export type TSheet = (typeof SHEETS)[number];
+export { SHEETS, type TSheet } from "./schedule-fields";
 export const ZSheet = z.enum(SHEETS, { error: "Sheet must be surfaces or duct_runs" });
 
 export const ZVersion = z.int({ error: "version is required (the version you last read)" }).positive("version must be a positive integer");

@@ -1,6 +1,7 @@
 // The schedule in a real browser as the demo consultant: an edit recalculates the row and the
 // zone total in place, a refused edit says why and saves nothing, a pasted block becomes one
-// bulk change, a CSV import runs its progress bar to the end, and IP units show °F and Btu/h.
+// bulk change, a CSV import runs its progress bar to the end, IP units show °F and Btu/h, and an
+// edit typed before the edit checks (zod, loaded after the grid) have arrived waits for them.
 import { expect as baseExpect, test, type Page } from "@playwright/test";
 import { usePaidDemoFirm } from "./support/paid-demo-firm";
 import { signIn } from "./support/sign-in";
@@ -134,4 +135,44 @@ test("switching to IP units (the person's own view) shows °F and Btu/h", async 
   await page.getByRole("navigation", { name: "Project" }).getByRole("link", { name: "Schedule" }).click();
   await page.getByRole("radio", { name: "SI" }).click();
   await expect(page.locator('.ag-header-cell[col-id="r:Q_W"]')).toContainText("Heat loss (W)");
+});
+
+test("an edit made before the edit checks have loaded waits for them: a bad value is then refused by name, a good one saved", async ({ page }) => {
+  await signIn(page, "consultant@demo.filmsheet.test");
+  // Hold back the chunk with zod (the row schemas), which the page loads after its grid is drawn.
+  const held: (() => void)[] = [];
+  let release = false;
+  await page.route("**/_next/static/chunks/*.js", async (route) => {
+    const response = await route.fetch();
+    const body = await response.text();
+    if (!release && /ZodError/.test(body)) await new Promise<void>((go) => held.push(go));
+    await route.fulfill({ response, body });
+  });
+  await page.getByRole("link", { name: "TS-2417" }).click();
+  await expect(page.locator(".ag-row").first()).toBeVisible();
+  await expect.poll(() => held.length).toBeGreaterThan(0);
+
+  const id = await rowId(page, "RR south spandrel 1");
+  const area = cell(page, id, "area_m2");
+  const before = await area.innerText();
+  await area.dblclick();
+  await page.keyboard.press("ControlOrMeta+a");
+  await page.keyboard.type("-3");
+  await page.keyboard.press("Enter");
+  await page.waitForTimeout(500);
+  await expect(page.getByRole("alert").filter({ hasText: "Area must be" })).toHaveCount(0);
+
+  release = true;
+  for (const go of held) go();
+  await expect(page.getByRole("alert").filter({ hasText: "Area must be greater than 0 m²" })).toBeVisible();
+  await expect(area).toHaveText(before);
+
+  const next = (num(before) + 1).toFixed(2);
+  await area.dblclick();
+  await page.keyboard.press("ControlOrMeta+a");
+  await page.keyboard.type(next);
+  await page.keyboard.press("Enter");
+  await expect(area).toHaveText(next);
+  await page.reload();
+  await expect(cell(page, id, "area_m2")).toHaveText(next);
 });

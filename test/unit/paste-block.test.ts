@@ -1,11 +1,14 @@
 // Pasting a spreadsheet block onto the grid and typing into one cell: what is saved (in SI) and
 // what is refused (with the row and column named). Expected values are the typed ones converted
 // by the exact definitions (1 ft = 0.3048 m, °F = °C·9/5 + 32) or the fields' own rules.
-import { describe, expect, test } from "vitest";
-import { editCell } from "@/components/grid/cell-edits";
+import { beforeAll, describe, expect, test } from "vitest";
+import { editCell, loadRowSchemas } from "@/components/grid/cell-edits";
 import { planPaste, readBlock } from "@/components/grid/paste-block";
 import type { Row } from "@/components/schedule/schedule-cache";
 import { SURFACE_COLUMNS, DUCT_RUN_COLUMNS } from "@/schedule/sheet-columns";
+
+// Edits are checked with the row schemas, which the browser loads after the sheet is drawn.
+beforeAll(() => loadRowSchemas());
 
 const Z1 = "11111111-1111-4111-8111-111111111111";
 const Z2 = "22222222-2222-4222-8222-222222222222";

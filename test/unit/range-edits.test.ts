@@ -1,11 +1,15 @@
 // Fills and clears of a range: stored values copied down a column without rounding, text read in
 // the person's units across columns, computed columns left alone, a required column refused by
 // name with nothing sent, and a fill that breaks a row refused whole.
-import { describe, expect, test } from "vitest";
+import { beforeAll, describe, expect, test } from "vitest";
+import { loadRowSchemas } from "@/components/grid/cell-edits";
 import { planClear, planFill, withoutHeader } from "@/components/grid/range-edits";
 import { tiledSources } from "@/components/grid/cell-range";
 import type { Row } from "@/components/schedule/schedule-cache";
 import { SURFACE_COLUMNS, DUCT_RUN_COLUMNS } from "@/schedule/sheet-columns";
+
+// Edits are checked with the row schemas, which the browser loads after the sheet is drawn.
+beforeAll(() => loadRowSchemas());
 
 const Z1 = "11111111-1111-4111-8111-111111111111";
 const B1 = "33333333-3333-4333-8333-333333333333";

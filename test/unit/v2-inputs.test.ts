@@ -2,8 +2,8 @@
 // and zod schemas, the sheets' columns (headings, blanks, a yes/no kind), reading cells (paste and
 // import alike), typing into the grid, the design case the engine gets, and revisions issued
 // before the fields existed. Expected messages follow from the specs in schedule-fields.ts.
-import { describe, expect, test } from "vitest";
-import { editCell, storedValue } from "@/components/grid/cell-edits";
+import { beforeAll, describe, expect, test } from "vitest";
+import { editCell, loadRowSchemas, storedValue } from "@/components/grid/cell-edits";
 import { sheetColumnDefs } from "@/components/grid/column-defs";
 import { planPaste } from "@/components/grid/paste-block";
 import type { Row } from "@/components/schedule/schedule-cache";
@@ -14,6 +14,9 @@ import { DESIGN_CASE_NUMBERS, DUCT_RUN_NUMBERS, numberProblem } from "@/schemas/
 import { engineDesignCase } from "@/schedule/engine-schedule";
 import { parseCell, parseSheet } from "@/schedule/parse-cells";
 import { DUCT_RUN_COLUMNS, SURFACE_COLUMNS, columnHeader, matchHeaders } from "@/schedule/sheet-columns";
+
+// Edits are checked with the row schemas, which the browser loads after the sheet is drawn.
+beforeAll(() => loadRowSchemas());
 
 const Z1 = "11111111-1111-4111-8111-111111111111";
 const B1 = "33333333-3333-4333-8333-333333333333";

@@ -4,18 +4,44 @@
  * duct switched to rectangular gets an equal-area section to start from).
  */
 import { numberProblem } from "@/schemas/schedule-fields";
-import { ZDuctRunValues, ZSurfaceValues, type TSheet } from "@/schemas/schedule";
+import type { TSheet } from "@/schemas/schedule";
 import { SHEET_COLUMNS, type SheetColumn } from "@/schedule/sheet-columns";
 import { fromDisplay, type UnitSystem } from "@/units/units";
 import type { Row } from "@/components/schedule/schedule-cache";
 
-const SCHEMAS = { surfaces: ZSurfaceValues, duct_runs: ZDuctRunValues } as const;
 const META = new Set(["id", "version", "position"]);
 
-/** Every problem of a whole row, by field, worded in the unit system. */
+let schemas: (typeof import("./row-schemas"))["ROW_SCHEMAS"] | null = null;
+let loading: Promise<void> | null = null;
+
+/** Loads the row schemas (zod and the schedule's schemas, ≈ 20 ms to evaluate), once. */
+export function loadRowSchemas(): Promise<void> {
+  loading ??= import("./row-schemas").then(
+    (m) => {
+      schemas = m.ROW_SCHEMAS;
+    },
+    (e: unknown) => {
+      loading = null;
+      throw e;
+    },
+  );
+  return loading;
+}
+
+/**
+ * Runs `check` (which reads rowProblems) at once when the row schemas are loaded, else as soon as
+ * they are; `failed` when they cannot be loaded (nothing is sent then).
+ */
+export function withRowSchemas(check: () => void, failed: () => void): void {
+  if (schemas) check();
+  else loadRowSchemas().then(check, failed);
+}
+
+/** Every problem of a whole row, by field, worded in the unit system (after loadRowSchemas). */
 export function rowProblems(sheet: TSheet, row: Record<string, unknown>, system: UnitSystem): Map<string, string> {
+  if (!schemas) throw new Error("The row schemas are not loaded: call loadRowSchemas (or withRowSchemas) first");
   const values = Object.fromEntries(Object.entries(row).filter(([k]) => !META.has(k)));
-  const parsed = SCHEMAS[sheet].safeParse(values);
+  const parsed = schemas[sheet].safeParse(values);
   const out = new Map<string, string>();
   if (parsed.success) return out;
   for (const issue of parsed.error.issues) {

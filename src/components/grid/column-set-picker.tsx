@@ -2,7 +2,7 @@
 
 import { useEffect, useId, useState } from "react";
 import type { TSheet } from "@/schemas/schedule";
-import { MAX_COLUMN_SETS } from "@/schemas/preferences";
+import { MAX_COLUMN_SETS } from "@/schemas/preferences-defaults";
 import { BUILT_IN_SETS, BUILT_IN_TITLES, DEFAULT_SET, gridColumns, isBuiltInSet, visibleColumns, type ColumnSet } from "@/schedule/column-sets";
 import { usePreferences } from "@/components/schedule/use-preferences";
 import { useProject } from "@/components/schedule/schedule-context";

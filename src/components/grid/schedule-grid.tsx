@@ -23,6 +23,7 @@ import { TOTALS_ID, passesRowFilter, type GridContext, type RowFilter } from "./
 import { RangeStatus } from "./range-status";
 import { SheetPreview } from "./sheet-preview";
 import { afterNextPaint } from "@/components/schedule/use-after-paint";
+import { loadRowSchemas } from "./cell-edits";
 import { useSheetHabits, type HabitWrites } from "./use-sheet-habits";
 import "./schedule-grid.css";
 
@@ -249,7 +250,9 @@ export function ScheduleGrid(props: ScheduleGridProps) {
       const grid = createGrid<Row>(host.current, { ...options.current!, columnDefs: staging.current ? [] : options.current!.columnDefs, theme: gridTheme });
       made = grid;
       held.current = first;
-      if (!staging.current) return;
+      // The checks of an edit (zod and the row schemas) load once the grid has all its rows.
+      const checksAfter = () => void afterNextPaint().then(() => loadRowSchemas().catch(() => {}));
+      if (!staging.current) return checksAfter();
       await nextTask();
       if (cancelled) return;
       grid.setGridOption("columnDefs", latestColumns.current);
@@ -269,6 +272,7 @@ export function ScheduleGrid(props: ScheduleGridProps) {
       if (latestRows.current !== all) grid.setGridOption("rowData", latestRows.current);
       held.current = latestRows.current;
       staging.current = false;
+      checksAfter();
     });
     return () => {
       cancelled = true;

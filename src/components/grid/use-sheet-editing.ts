@@ -6,7 +6,7 @@ import { SHEET_COLUMNS, SHEET_TITLES, columnHeader } from "@/schedule/sheet-colu
 import type { Row } from "@/components/schedule/schedule-cache";
 import { useProject } from "@/components/schedule/schedule-context";
 import type { BulkOp } from "@/components/schedule/use-schedule-writes";
-import { editCell } from "./cell-edits";
+import { editCell, withRowSchemas } from "./cell-edits";
 import { cellKey } from "./grid-context";
 import { planPaste, readBlock } from "./paste-block";
 import { problemLine, type RangePlan } from "./range-edits";
@@ -63,7 +63,13 @@ export function useSheetEditing(sheet: TSheet, schedule: TSchedule) {
 
   const setError = (key: string, message: string) => setCellErrors((m) => new Map(m).set(key, message));
 
-  const onEdit = (row: Row, field: string, shown: unknown) => {
+  // Edits are checked in the browser before they are sent, with the schemas the server uses: the
+  // grid loads those once it has all its rows (an edit made before waits for them).
+  const checked = (write: () => void) =>
+    withRowSchemas(write, () => notify({ key: "edit", tone: "error", message: "Not saved — the checks for an edit could not be loaded (is the connection down?); try again" }));
+
+  const onEdit = (row: Row, field: string, shown: unknown) => checked(() => editOne(row, field, shown));
+  const editOne = (row: Row, field: string, shown: unknown) => {
     const col = SHEET_COLUMNS[sheet].find((c) => c.field === field);
     if (!col) return;
     const out = editCell(sheet, row, col, shown, system);
@@ -80,7 +86,8 @@ export function useSheetEditing(sheet: TSheet, schedule: TSchedule) {
   const refuse = (what: string, lines: string[], noun: [string, string] = ["problem", "problems"]) =>
     notify({ key: "sheet-error", tone: "error", message: `${what}: ${lines.length} ${lines.length === 1 ? noun[0] : noun[1]}; nothing was saved`, lines });
 
-  const onPaste = (p: PasteRequest) => {
+  const onPaste = (p: PasteRequest) => checked(() => pasteBlock(p));
+  const pasteBlock = (p: PasteRequest) => {
     const plan = planPaste({ ...p, sheet, system, lookups: { zones: schedule.zones, buildups: schedule.buildups }, newId });
     if (plan.problems.length) return refuse("Nothing pasted", plan.problems.map((x) => `Line ${x.line}${x.row ? ` (${x.row})` : ""} · ${x.column}: ${x.message}`), ["cell needs fixing", "cells need fixing"]);
     const lines = readBlock(p.text).length;
@@ -88,8 +95,9 @@ export function useSheetEditing(sheet: TSheet, schedule: TSchedule) {
     send(plan.ops, `Paste of ${what}`, `Pasted ${what} into ${SHEET_TITLES[sheet]}`);
   };
 
-  /** A planned fill or clear: one step, or the refusal naming each cell. */
-  const applyRange = (plan: RangePlan, label: string, refused: string) => {
+  /** A fill or clear, planned when the checks are loaded: one step, or the refusal naming each cell. */
+  const applyRange = (planned: () => RangePlan, label: string, refused: string) => checked(() => applyPlan(planned(), label, refused));
+  const applyPlan = (plan: RangePlan, label: string, refused: string) => {
     if (plan.problems.length) return refuse(refused, plan.problems.map(problemLine));
     if (plan.ops.length === 0) return notify({ key: "sheet-ok", tone: "ok", message: `${label}: nothing to change` });
     send(plan.ops, `${label} (${plan.cells} ${plan.cells === 1 ? "cell" : "cells"})`, null);

@@ -12,7 +12,8 @@ import type { PasteRequest } from "./schedule-grid";
 
 /** What the spreadsheet habits write through (useSheetEditing). */
 export interface HabitWrites {
-  applyRange: (plan: RangePlan, label: string, refused: string) => void;
+  /** `plan` is called when the fill or clear can be checked (at once, once the checks are loaded). */
+  applyRange: (plan: () => RangePlan, label: string, refused: string) => void;
   undo: () => void;
   redo: () => void;
 }
@@ -101,7 +102,7 @@ export function useSheetHabits(args: {
   const fill = (pairs: { target: CellPos; source: CellPos }[], label: string) => {
     const { api, writes, sheet, system, schedule } = live.current;
     if (!api || !writes || pairs.length === 0) return;
-    const plan = planFill({ sheet, rows: displayedRows(), columnIds: columnIds(), system, pairs, lookups: schedule, textOf: (row, colId) => cellText(api.getDisplayedRowAtIndex(row), colId) });
+    const plan = () => planFill({ sheet, rows: displayedRows(), columnIds: columnIds(), system, pairs, lookups: schedule, textOf: (row, colId) => cellText(api.getDisplayedRowAtIndex(row), colId) });
     writes.applyRange(plan, label, "Nothing filled");
   };
 
@@ -119,7 +120,7 @@ export function useSheetHabits(args: {
     const { writes, sheet, system } = live.current;
     const b = currentBounds();
     if (!writes || !b) return;
-    writes.applyRange(planClear({ sheet, rows: displayedRows(), columnIds: columnIds(), system, bounds: b }), "Clear", "Nothing cleared");
+    writes.applyRange(() => planClear({ sheet, rows: displayedRows(), columnIds: columnIds(), system, bounds: b }), "Clear", "Nothing cleared");
   };
 
   useEffect(() => {

@@ -2,7 +2,8 @@
 
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useCallback } from "react";
-import { DEFAULT_PREFERENCES, type TPreferences, type TPreferencesUpdate } from "@/schemas/preferences";
+import type { TPreferencesUpdate } from "@/schemas/preferences";
+import { DEFAULT_PREFERENCES, type TPreferences } from "@/schemas/preferences-defaults";
 import { api } from "./api-client";
 
 export const PREFERENCES_KEY = ["preferences"] as const;

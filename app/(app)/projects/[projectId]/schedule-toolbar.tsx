@@ -2,7 +2,7 @@
 
 import { useState, type ReactNode } from "react";
 import type { TDesignCase, TSheet } from "@/schemas/schedule";
-import { SHEETS } from "@/schemas/schedule";
+import { SHEETS } from "@/schemas/schedule-fields";
 import { SHEET_TITLES } from "@/schedule/sheet-columns";
 import type { useSheetEditing } from "@/components/grid/use-sheet-editing";
 import { useProject } from "@/components/schedule/schedule-context";
