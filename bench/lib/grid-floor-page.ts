@@ -4,11 +4,13 @@
 // runtime module (ag-grid-runtime.ts: the same modules and theme) as a script of its own, made in
 // the app's steps, each a task of its own (evaluate AG Grid; make the grid empty; give it the
 // first screen of rows; after those are painted, every row) — with the same columns as the
-// benchmark's column set (checkbox, label pinned left, zone, build-up, area, four results, notes,
-// working) and 5,000 rows of plain values: no React, no results, nothing else on the page.
+// benchmark's column set (the app's own checkbox column, label pinned left, zone, build-up, area,
+// four results, notes, working) and 5,000 rows of plain values: no React, no results, nothing else.
 // `#dom`: no grid library at all — a virtual list drawn by hand (absolutely placed rows of the
 // same cells, made as they scroll into view), the least a browser does to show the same sheet.
+import type { ColDef } from "ag-grid-community";
 import type * as GridRuntime from "../../src/components/grid/ag-grid-runtime";
+import { selectColumn } from "../../src/components/grid/select-column";
 
 declare global {
   interface Window {
@@ -62,12 +64,13 @@ function makeGrid() {
     rowData: [],
     getRowId: (p) => p.data.id,
     columnDefs: [
+      // The app's own selection column (plain checkboxes), as on a sheet the person may edit.
+      selectColumn as unknown as ColDef<FloorRow>,
       { field: "label", headerName: "Label", pinned: "left", width: 176 },
       ...COLUMNS.map((c) => ({ colId: c.key, headerName: c.title, width: c.width, valueGetter: (p: { data?: FloorRow }) => (p.data ? text(p.data, c) : ""), type: c.digits === undefined ? undefined : "numericColumn" })),
     ],
     defaultColDef: { sortable: true, filter: true, resizable: true, wrapHeaderText: true, autoHeaderHeight: true },
-    selectionColumnDef: { pinned: "left", width: 48, resizable: false, sortable: false },
-    rowSelection: { mode: "multiRow", checkboxes: true, headerCheckbox: true, enableClickSelection: false },
+    rowSelection: { mode: "multiRow", checkboxes: false, headerCheckbox: false, enableClickSelection: false },
     animateRows: false,
     // As the app's big sheets (BIG_SHEET_ROW_BUFFER in schedule-grid.tsx).
     rowBuffer: 0,

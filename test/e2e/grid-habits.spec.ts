@@ -250,7 +250,7 @@ test("adding and deleting rows undo and redo; a deleted row comes back with its 
   // A row near the top (rendered without scrolling); it comes back at the sheet's end.
   const id = await rowId(page, "RR south spandrel 2");
   const stored = await db()("surfaces").where({ id }).first();
-  await bodyRow(page, "RR south spandrel 2").locator('[col-id="ag-Grid-SelectionColumn"] input').check();
+  await bodyRow(page, "RR south spandrel 2").locator('[col-id="select"] input').check();
   await page.getByRole("button", { name: "Delete 1" }).click();
   await expect(page.getByText("Delete 1 row?")).toBeVisible();
   const deleted = bulkDone(page);
@@ -291,4 +291,51 @@ test("a refused cell keeps one message, loses outline and message once saved; a 
   const refused = page.getByRole("alert").filter({ hasText: "Nothing pasted" });
   await expect(refused).toContainText('Area (m²): "abc" is not a number');
   await expect(refused).not.toContainText("Area (m²): Area (m²)");
+});
+
+test("rows are picked with their checkboxes: a click, Shift+click for a run, Space, and the heading's box for every row shown; a checker (who cannot edit) has none", async ({ page, browser }) => {
+  await openDemoSchedule(page);
+  const box = (label: string) => bodyRow(page, label).locator('[col-id="select"] input');
+  const heading = page.locator('.ag-header-cell[col-id="select"] input');
+  const picked = () => page.locator(".ag-row-selected:not(.ag-row-pinned)").count();
+  await expect(page.locator('.ag-row-pinned [col-id="select"] input')).toHaveCount(0);
+
+  await box("RR south wall 2").click();
+  await box("RR south spandrel 1").click({ modifiers: ["Shift"] });
+  // South walls 2, 3, 4 and the first spandrel: four rows, each box ticked, the heading's part-ticked.
+  await expect(page.getByRole("button", { name: "Duplicate 4" })).toBeEnabled();
+  for (const label of ["RR south wall 2", "RR south wall 3", "RR south wall 4", "RR south spandrel 1"]) await expect(box(label)).toBeChecked();
+  await expect(box("RR south wall 1")).not.toBeChecked();
+  expect(await heading.evaluate((e) => (e as HTMLInputElement).indeterminate)).toBe(true);
+  await box("RR south wall 3").click();
+  await expect(page.getByRole("button", { name: "Duplicate 3" })).toBeEnabled();
+
+  // Space on a focused row adds it (the grid's own key), and its box follows.
+  await bodyRow(page, "RR west wall 1").locator('[col-id="zone_id"]').click();
+  await page.keyboard.press("Space");
+  await expect(box("RR west wall 1")).toBeChecked();
+  expect(await picked()).toBe(4);
+
+  // The heading's box: every row shown, then none. Under a quick filter, only the rows it shows.
+  await heading.click();
+  const tab = page.getByRole("tab", { name: /Surfaces/ });
+  const rows = Number(/\d+/.exec((await tab.textContent()) ?? "")?.[0]);
+  await expect(page.getByRole("button", { name: `Duplicate ${rows}` })).toBeEnabled();
+  await expect(heading).toBeChecked();
+  await heading.click();
+  await expect(page.getByRole("button", { name: "Duplicate", exact: true })).toBeDisabled();
+  await page.getByRole("button", { name: /Inside-surface risk only/ }).click();
+  const shown = await page.locator(".ag-row:not(.ag-row-pinned)").count();
+  expect(shown).toBeLessThan(rows);
+  await heading.click();
+  await expect(page.getByRole("button", { name: `Duplicate ${shown}` })).toBeEnabled();
+
+  // The checker reads the sheet and cannot change it: no selection column at all.
+  const checker = await (await browser.newContext()).newPage();
+  await signIn(checker, "checker@demo.filmsheet.test");
+  await checker.getByRole("link", { name: "TS-2417" }).click();
+  await expect(checker.locator(".ag-row").first()).toBeVisible({ timeout: 60_000 });
+  await expect(checker.locator('.ag-header-cell[col-id="label"]')).toBeVisible();
+  await expect(checker.locator('[col-id="select"]')).toHaveCount(0);
+  await checker.context().close();
 });

@@ -56,7 +56,7 @@ test("sorting, a number filter, row selection, an editor and a tooltip work, and
   expect(filtered).not.toContain(areas[0]);
 
   // Row selection: the row's checkbox selects it, and the toolbar offers Duplicate.
-  await page.locator('.ag-row:not(.ag-row-pinned) [col-id="ag-Grid-SelectionColumn"] input').first().check();
+  await page.locator('.ag-row:not(.ag-row-pinned) [col-id="select"] input').first().check();
   await expect(page.getByRole("button", { name: "Duplicate" })).toBeEnabled();
 
   // An editor opens on a number cell, and Escape leaves it unchanged.

@@ -145,7 +145,7 @@ for (const size of [
     // A laptop: the rail folds to icons and the totals go below; a large screen keeps both beside.
     expect(box.width).toBeGreaterThan(size.width - (size.width >= 1536 ? 640 : 120));
     const pinnedLeft = await page.locator(".ag-header [class*=pinned-left] .ag-header-cell").evaluateAll((els) => els.map((e) => e.getAttribute("col-id")));
-    expect(pinnedLeft.filter((id) => id !== "ag-Grid-SelectionColumn")).toEqual(["label"]);
+    expect(pinnedLeft.filter((id) => id !== "select")).toEqual(["label"]);
     expect(await page.locator(".ag-header [class*=pinned-right] .ag-header-cell").count()).toBe(0);
 
     for (const system of ["SI", "IP"] as const) {

@@ -8,7 +8,6 @@ import type {
   GetRowIdParams,
   RowSelectionOptions,
   GridOptions,
-  SelectionColumnDef,
   GridApi,
   GridReadyEvent,
   IRowNode,
@@ -19,6 +18,7 @@ import type { TSchedule, TSheet } from "@/schemas/schedule";
 import type { UnitSystem } from "@/units/units";
 import type { Row } from "@/components/schedule/schedule-cache";
 import { sheetColumnDefs } from "./column-defs";
+import { SELECT_COLUMN, selectColumn } from "./select-column";
 import { TOTALS_ID, passesRowFilter, type GridContext, type RowFilter } from "./grid-context";
 import { RangeStatus } from "./range-status";
 import { SheetPreview } from "./sheet-preview";
@@ -39,8 +39,8 @@ if (typeof window !== "undefined") void loadGrid();
 // Options given as constants: an object made in render is a changed option to the grid, which
 // then rebuilds every column (≈ 10 ms on a 5,000-row sheet) on each edit.
 const DEFAULT_COL_DEF: ColDef<Row> = { sortable: true, filter: true, resizable: true, wrapHeaderText: true, autoHeaderHeight: true };
-const SELECTION_COL_DEF: SelectionColumnDef = { pinned: "left", width: 48, resizable: false, sortable: false };
-const ROW_SELECTION: RowSelectionOptions<Row> = { mode: "multiRow", checkboxes: true, headerCheckbox: true, enableClickSelection: false };
+// Rows are selected with the sheet's own checkbox column (select-column.ts), not AG Grid's.
+const ROW_SELECTION: RowSelectionOptions<Row> = { mode: "multiRow", checkboxes: false, headerCheckbox: false, enableClickSelection: false };
 const rowId = (p: GetRowIdParams<Row>) => p.data.id;
 
 /** Rows a big sheet is first made with (more than a tall screen shows). */
@@ -113,12 +113,13 @@ export function ScheduleGrid(props: ScheduleGridProps) {
 
   const { zones, buildups, project } = schedule;
   const visible = props.visibleColumns;
-  const columnDefs = useMemo(
+  const dataColumns = useMemo(
     () => sheetColumnDefs(sheet, { ...schedule, zones, buildups, project } as TSchedule, system, visible),
     // Rebuilt when the pick-lists, the default method, the units or the column set change, not on every edit.
     // eslint-disable-next-line react-hooks/exhaustive-deps
     [sheet, zones, buildups, project.default_method, system, visible],
   );
+  const columnDefs = useMemo(() => (canEdit ? [selectColumn, ...dataColumns] : dataColumns), [canEdit, dataColumns]);
   const pinned = useMemo(() => [{ id: TOTALS_ID, label: `Total of ${rows.length} ${rows.length === 1 ? "row" : "rows"}` } as unknown as Row], [rows.length]);
 
   // A sheet of up to ALL_COLUMNS_ROWS rows draws every column, so the browser's find-in-page
@@ -211,7 +212,6 @@ export function ScheduleGrid(props: ScheduleGridProps) {
     onCellEditRequest,
     pinnedBottomRowData: pinned,
     defaultColDef: DEFAULT_COL_DEF,
-    selectionColumnDef: SELECTION_COL_DEF,
     rowSelection: canEdit ? ROW_SELECTION : undefined,
     onSelectionChanged,
     singleClickEdit: false,
@@ -310,7 +310,7 @@ export function ScheduleGrid(props: ScheduleGridProps) {
     e.preventDefault();
     const shown: Row[] = [];
     api.forEachNodeAfterFilterAndSort((n) => n.data && shown.push(n.data));
-    const columnIds = api.getAllDisplayedColumns().map((c) => c.getColId()).filter((id) => id !== "ag-Grid-SelectionColumn");
+    const columnIds = api.getAllDisplayedColumns().map((c) => c.getColId()).filter((id) => id !== SELECT_COLUMN);
     props.onPaste(habits.pasteAt({ text, rows: shown, startRow: focused.rowIndex, columnIds, startColumn: focused.column.getColId() }));
   };
 
@@ -319,7 +319,7 @@ export function ScheduleGrid(props: ScheduleGridProps) {
     <div ref={wrapper} className="fs-grid relative min-h-[18rem] min-w-0 flex-1 print:h-auto" onPaste={onPaste} data-sheet={sheet} {...habits.scopeProps}>
       <style>{habits.css}</style>
       <div ref={host} className="h-full w-full" />
-      {!drawn && rows.length > 0 ? <SheetPreview columns={columnDefs} rows={rows} context={context} selectionWidth={canEdit ? SELECTION_COL_DEF.width! : 0} /> : null}
+      {!drawn && rows.length > 0 ? <SheetPreview columns={dataColumns} rows={rows} context={context} selectionWidth={canEdit ? selectColumn.width! : 0} /> : null}
     </div>
     <RangeStatus size={habits.size} headings={habits.headings} onHeadings={habits.setHeadings} canEdit={canEdit} />
     </>

@@ -9,6 +9,7 @@ import { boundsOf, colCount, extendRange, fillExtension, fillSource, isSingle, o
 import { copyText, toTsv } from "./range-copy";
 import { planClear, planFill, type RangePlan } from "./range-edits";
 import type { PasteRequest } from "./schedule-grid";
+import { SELECT_COLUMN } from "./select-column";
 
 /** What the spreadsheet habits write through (useSheetEditing). */
 export interface HabitWrites {
@@ -19,7 +20,6 @@ export interface HabitWrites {
 }
 
 const ARROWS: Record<string, Direction> = { ArrowUp: "up", ArrowDown: "down", ArrowLeft: "left", ArrowRight: "right" };
-const SELECTION_COLUMN = "ag-Grid-SelectionColumn";
 const HEADINGS_KEY = "filmsheet:copy-headings";
 
 /** Whether a key press belongs to a form field (its own undo, its own arrows). */
@@ -61,7 +61,7 @@ export function useSheetHabits(args: {
     setRangeState(r);
   };
 
-  const columnIds = useCallback(() => live.current.api?.getAllDisplayedColumns().map((c) => c.getColId()).filter((id) => id !== SELECTION_COLUMN) ?? [], []);
+  const columnIds = useCallback(() => live.current.api?.getAllDisplayedColumns().map((c) => c.getColId()).filter((id) => id !== SELECT_COLUMN) ?? [], []);
   const displayedRows = () => {
     const out: Row[] = [];
     live.current.api?.forEachNodeAfterFilterAndSort((n) => n.data && out.push(n.data));
