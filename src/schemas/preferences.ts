@@ -2,10 +2,9 @@ import { z } from "zod";
 import { SHEETS } from "./schedule";
 import { UNIT_SYSTEMS } from "@/units/units";
 import { columnIds, isBuiltInSet } from "@/schedule/column-sets";
-
-export { DEFAULT_PREFERENCES, MAX_COLUMN_SETS, type TPreferences } from "./preferences-defaults";
 import { MAX_COLUMN_SETS } from "./preferences-defaults";
 
+export { DEFAULT_PREFERENCES, MAX_COLUMN_SETS, type TPreferences } from "./preferences-defaults";
 
 const setId = z
   .string({ error: "Column set id is required" })

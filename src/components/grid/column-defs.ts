@@ -3,7 +3,7 @@
  * person's units, with typed editors) and the result list (computed in the browser), plus a
  * notes column for warnings and errors.
  */
-import type { ColDef, ICellRendererComp, ICellRendererParams, ValueFormatterParams, ValueGetterParams } from "ag-grid-community";
+import type { CellClassRules, ColDef, ICellRendererComp, ICellRendererParams, ValueFormatterParams, ValueGetterParams } from "ag-grid-community";
 import { workingPath } from "@/checking/paths";
 import { labelOf } from "@/schemas/schedule-fields";
 import type { TSchedule, TSheet } from "@/schemas/schedule";
@@ -141,15 +141,24 @@ function resultColumn(c: ResultColumn, system: UnitSystem): ColDef<Row> {
       return p.data ? resultValue(c, p.context.results.get(p.data.id), system) : null;
     },
     valueFormatter: (p: F) => (typeof p.value === "number" ? numberShown(p, p.value, d) : p.value === null || p.value === undefined ? (isTotals(p) ? "" : "—") : String(p.value)),
-    cellClassRules: {
-      "fs-computed": () => true,
-      "fs-gain": (p) => c.key === "Q_W" && typeof p.value === "number" && ((p.context as GridContext).sheet === "surfaces" ? p.value < 0 : p.value > 0),
-      "fs-loss": (p) => c.key === "Q_W" && typeof p.value === "number" && ((p.context as GridContext).sheet === "surfaces" ? p.value > 0 : p.value < 0),
-      "fs-risk": (p) => (c.key === "condensation" && p.value === "risk") || (c.key === "inside_risk" && typeof p.value === "string" && p.value !== "none"),
-      "fs-sensitive": (p) => c.key === "method_sensitive" && typeof p.value === "string" && p.value.startsWith("yes"),
-    },
+    cellClass: "fs-computed",
+    cellClassRules: RESULT_CLASS_RULES[c.key],
   };
 }
+
+/**
+ * The result columns whose cells are marked by their value; each column has only its own rules
+ * (a rule is run and its class set on every cell the grid draws, ≈ 20 rows a frame when scrolling).
+ */
+const RESULT_CLASS_RULES: Record<string, CellClassRules<Row>> = {
+  Q_W: {
+    "fs-gain": (p) => typeof p.value === "number" && ((p.context as GridContext).sheet === "surfaces" ? p.value < 0 : p.value > 0),
+    "fs-loss": (p) => typeof p.value === "number" && ((p.context as GridContext).sheet === "surfaces" ? p.value > 0 : p.value < 0),
+  },
+  condensation: { "fs-risk": (p) => p.value === "risk" },
+  inside_risk: { "fs-risk": (p) => typeof p.value === "string" && p.value !== "none" },
+  method_sensitive: { "fs-sensitive": (p) => typeof p.value === "string" && p.value.startsWith("yes") },
+};
 
 /** Warnings and errors of the row's calculation, counted in the cell and listed in its tooltip. */
 const notesColumn: ColDef<Row> = {

@@ -52,8 +52,8 @@ export class RowCheckbox implements ICellRendererComp<Row> {
     if (!this.input) {
       this.input = box("");
       this.input.addEventListener("click", this.onClick);
-      this.gui.append(this.input);
     }
+    if (this.input.parentNode !== this.gui) this.gui.append(this.input);
     this.input.setAttribute("aria-label", `Select ${String(p.data.label)}`);
     this.node = p.node;
     this.api = p.api;
