@@ -97,6 +97,13 @@ export class SelectAllHeader implements IHeaderComp {
   private readonly follow = () => {
     const api = this.api;
     if (!api) return;
+    // Most changes of the rows (each edit's, each step of a big sheet's loading) come with nothing
+    // selected: no walk over every row then.
+    if (api.getSelectedNodes().length === 0) {
+      this.input.checked = false;
+      this.input.indeterminate = false;
+      return;
+    }
     let shown = 0;
     let picked = 0;
     api.forEachNodeAfterFilter((n) => {

@@ -15,26 +15,12 @@ type Props = Omit<ComponentProps<typeof NextLink>, "href" | "prefetch"> & { href
  */
 export function Link({ href, onMouseEnter, onFocus, onTouchStart, ...rest }: Props) {
   const router = useRouter();
-  const warm = () => {
-    if (href.startsWith("/")) router.prefetch(href);
-  };
-  return (
-    <NextLink
-      {...rest}
-      href={href}
-      prefetch={false}
-      onMouseEnter={(e) => {
-        warm();
-        onMouseEnter?.(e);
-      }}
-      onFocus={(e) => {
-        warm();
-        onFocus?.(e);
-      }}
-      onTouchStart={(e) => {
-        warm();
-        onTouchStart?.(e);
-      }}
-    />
-  );
+  /** The handler given, after the prefetch of an address in the app. */
+  const warming =
+    <E,>(given?: (e: E) => void) =>
+    (e: E) => {
+      if (href.startsWith("/")) router.prefetch(href);
+      given?.(e);
+    };
+  return <NextLink {...rest} href={href} prefetch={false} onMouseEnter={warming(onMouseEnter)} onFocus={warming(onFocus)} onTouchStart={warming(onTouchStart)} />;
 }
