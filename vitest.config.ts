@@ -1,3 +1,4 @@
+import { appendFileSync } from "node:fs";
 import { fileURLToPath } from "node:url";
 import { defineConfig } from "vitest/config";
 
@@ -14,6 +15,16 @@ export default defineConfig({
     ],
   },
   test: {
+    // An error thrown outside any test (a rejection nobody awaited, a worker that would not stop)
+    // fails the run without failing a test; `npm test` names it again in its closing lines from
+    // this file (VITEST_UNHANDLED_LOG), where a log cut to its tail still shows it.
+    onUnhandledError(error) {
+      const log = process.env.VITEST_UNHANDLED_LOG;
+      if (!log) return;
+      const e = error as Error & { type?: string; VITEST_TEST_PATH?: string; VITEST_TEST_NAME?: string };
+      const where = [e.VITEST_TEST_PATH, e.VITEST_TEST_NAME].filter(Boolean).join(" › ") || "no test named";
+      appendFileSync(log, `${JSON.stringify({ type: e.type, name: e.name, message: e.message, where, stack: e.stack?.split("\n").slice(0, 8).join("\n") })}\n`);
+    },
     pool: "forks",
     maxWorkers: 2, // the machines have 2 cores
     projects: [

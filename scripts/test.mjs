@@ -21,7 +21,7 @@ import {
 } from "./lib/bootstrap.mjs";
 import { startMailSink } from "./lib/mail-sink.mjs";
 import { assertPortFree, runAsync, step, stopService } from "./lib/proc.mjs";
-import { closingLine, countPlaywright, countVitest, readSuite, total } from "./lib/reports.mjs";
+import { closingLine, countPlaywright, countVitest, readSuite, total, unhandledErrors } from "./lib/reports.mjs";
 import { ensureNginx } from "./lib/balancer.mjs";
 import { ensurePgbouncer } from "./lib/pgbouncer.mjs";
 import { DEFAULT_DEMO_PASSWORD, LOCAL_WEBHOOK_SECRET, authSecret, portFromEnv, startApp, startStripeStandIn, startWorker } from "./lib/services.mjs";
@@ -89,12 +89,16 @@ async function bootstrap() {
 async function runVitest(url) {
   step("Unit and integration tests (Vitest)");
   const report = join(REPORTS, "vitest.json");
+  const unhandled = join(REPORTS, "vitest-unhandled.jsonl");
   const code = await runAsync(
     join(ROOT, "node_modules/.bin/vitest"),
     ["run", "--reporter=default", "--reporter=json", `--outputFile.json=${report}`],
-    { cwd: ROOT, env: baseEnv({ TEST_DATABASE_URL: url, DATABASE_URL: "" }) },
+    { cwd: ROOT, env: baseEnv({ TEST_DATABASE_URL: url, DATABASE_URL: "", VITEST_UNHANDLED_LOG: unhandled }) },
   );
-  return readSuite(report, countVitest, code);
+  const counts = readSuite(report, countVitest, code);
+  const errors = unhandledErrors(unhandled);
+  for (const e of errors?.stacks ?? []) console.error(`\n${e}`);
+  return errors ? { ...counts, note: [counts.note, errors.summary].filter(Boolean).join("; ") } : counts;
 }
 
 /** The whole project through the TypeScript compiler, counted as one test. */

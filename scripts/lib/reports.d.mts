@@ -9,3 +9,4 @@ export function countPlaywright(report: unknown): Counts;
 export function readSuite(file: string, count: (report: unknown) => Counts, exitCode: number): Counts;
 export function total(suites: Counts[]): Counts;
 export function closingLine(counts: Counts): string;
+export function unhandledErrors(file: string): { summary: string; stacks: string[] } | null;

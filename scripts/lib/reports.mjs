@@ -1,6 +1,22 @@
 // Turns the runners' JSON reports into the closing line CI reads: `N passed, N failed`.
 import { existsSync, readFileSync } from "node:fs";
 
+/**
+ * Errors Vitest met outside any test, as vitest.config.ts writes them (a JSON line each): a
+ * summary for the closing note (where and what, each message cut to 300 characters) and each
+ * error's stack to print; null when there were none.
+ */
+export function unhandledErrors(file) {
+  if (!existsSync(file)) return null;
+  const errors = readFileSync(file, "utf8").split("\n").filter(Boolean).map((l) => JSON.parse(l));
+  if (errors.length === 0) return null;
+  const kind = (e) => (e.type ?? "error").toLowerCase();
+  return {
+    summary: errors.map((e) => `${kind(e)} in ${e.where}: ${e.name}: ${String(e.message).slice(0, 300)}`).join("; "),
+    stacks: errors.map((e) => `Vitest met an ${kind(e)} (${e.where}):\n${e.stack ?? `${e.name}: ${e.message}`}`),
+  };
+}
+
 /** Counts from a Vitest JSON report; a file that failed to load counts as one failure. */
 export function countVitest(report) {
   const brokenFiles = (report.testResults ?? []).filter((f) => f.status === "failed" && (f.assertionResults ?? []).length === 0).length;

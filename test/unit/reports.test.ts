@@ -3,7 +3,7 @@ import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, test } from "vitest";
-import { closingLine, countPlaywright, countVitest, readSuite, total } from "../../scripts/lib/reports.mjs";
+import { closingLine, countPlaywright, countVitest, readSuite, total, unhandledErrors } from "../../scripts/lib/reports.mjs";
 
 describe("countVitest", () => {
   test.each([
@@ -42,4 +42,27 @@ describe("readSuite", () => {
 
 test("total and closingLine give the line CI reads", () => {
   expect(closingLine(total([{ passed: 10, failed: 0 }, { passed: 3, failed: 1 }]))).toBe("13 passed, 1 failed");
+});
+
+describe("unhandledErrors", () => {
+  const dir = mkdtempSync(join(tmpdir(), "fs-unhandled-"));
+  test("none written: nothing to say", () => {
+    expect(unhandledErrors(join(dir, "absent.jsonl"))).toBeNull();
+    writeFileSync(join(dir, "empty.jsonl"), "");
+    expect(unhandledErrors(join(dir, "empty.jsonl"))).toBeNull();
+  });
+  test("each error is named with the test it came during, its message cut to 300 characters, and its stack kept to print", () => {
+    const file = join(dir, "two.jsonl");
+    const long = "x".repeat(400);
+    writeFileSync(
+      file,
+      [
+        JSON.stringify({ type: "Unhandled Rejection", name: "Error", message: "socket hang up", where: "test/server/a.test.ts › saves", stack: "Error: socket hang up\n    at a.ts:1:1" }),
+        JSON.stringify({ type: "Uncaught Exception", name: "TypeError", message: long, where: "no test named" }),
+      ].join("\n") + "\n",
+    );
+    const out = unhandledErrors(file)!;
+    expect(out.summary).toBe(`unhandled rejection in test/server/a.test.ts › saves: Error: socket hang up; uncaught exception in no test named: TypeError: ${"x".repeat(300)}`);
+    expect(out.stacks).toEqual(["Vitest met an unhandled rejection (test/server/a.test.ts › saves):\nError: socket hang up\n    at a.ts:1:1", `Vitest met an uncaught exception (no test named):\nTypeError: ${long}`]);
+  });
 });
