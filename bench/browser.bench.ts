@@ -4,8 +4,11 @@
 // CPU slowed 4× (CDP Emulation.setCPUThrottlingRate). It measures:
 //   - first rows and first results on screen after navigation (median of BENCH_LOADS loads, each
 //     in a fresh browser profile; first rows are the server-drawn preview's or the grid's, whichever
-//     comes first, with the grid's own beside them), with the page's navigation timing, and first rows on a reload in
-//     the same profile (BENCH_RELOADS, scripts cached);
+//     comes first, with the grid's own beside them), with the page's navigation timing; and on a
+//     reload in the same profile (BENCH_RELOADS, scripts cached) first rows, the grid's own rows
+//     and the longest task and frame;
+//   - who had the cores from navigation to first results (lib/core-use.ts, from /proc): the page's
+//     main thread, the browser's other threads, the app's server, the database, the rest;
 //   - the longest main-thread task (longtask) and animation frame (long-animation-frame) while loading
 //     and while editing, switching and scrolling; for loading also, from a trace of each load, the
 //     main thread's own CPU time in its longest task and the most CPU time of any one task (a
@@ -40,6 +43,7 @@ import { CHROMIUM_ARGS } from "../playwright.config";
 import { bigProject } from "./lib/big-schedule";
 import { nodeComputation } from "./lib/node-computation";
 import { FLOOR_ORIGIN, serveFloor } from "./lib/grid-floor";
+import { CORE_GROUPS, coreUseBetween, readCoreUse, type CoreUse } from "./lib/core-use";
 
 const PG_PORT = portFromEnv("BENCH_BROWSER_PG_PORT", 54389);
 const LOADS = Number(process.env.BENCH_LOADS ?? 3);
@@ -63,6 +67,14 @@ type Figures = {
   htmlBytes: number;
   /** First rows on a reload in the same browser profile (scripts cached). */
   warmRows: number[];
+  /** The returning visit's grid rows, and its longest task and frame while loading. */
+  warmGridRows: number[];
+  warmLongest: number;
+  warmFrame: number;
+  /** CPU time by group (lib/core-use.ts) from navigation to first results, one entry per measured load. */
+  loadCores: CoreUse[];
+  /** Wall time from navigation to first results of those loads, as the bench saw it (ms). */
+  loadWall: number[];
   loadLongest: number;
   loadFrame: number;
   /**
@@ -257,7 +269,7 @@ const now = (page: Page) => page.evaluate(() => performance.now());
 const scrollGaps = (page: Page, px: number) => page.evaluate((p) => (window as unknown as { __probes: { fastScroll: (a: object) => Promise<number[]> } }).__probes.fastScroll({ frames: 150, px: p }), px);
 
 async function measure(browser: Browser, state: Awaited<ReturnType<typeof signedInState>>, url: string, rate: number): Promise<Figures> {
-  const f: Figures = { firstRows: [], gridRows: [], firstResults: [], ttfb: [], htmlDone: [], domReady: [], htmlBytes: 0, warmRows: [], loadLongest: 0, loadFrame: 0, loadLongestCpu: 0, loadMostCpu: 0, edits: [], editCompute: [], switches: [], gaps: [], steadyGaps: [], useLongest: 0, useFrame: 0 };
+  const f: Figures = { firstRows: [], gridRows: [], firstResults: [], ttfb: [], htmlDone: [], domReady: [], htmlBytes: 0, warmRows: [], warmGridRows: [], warmLongest: 0, warmFrame: 0, loadCores: [], loadWall: [], loadLongest: 0, loadFrame: 0, loadLongestCpu: 0, loadMostCpu: 0, edits: [], editCompute: [], switches: [], gaps: [], steadyGaps: [], useLongest: 0, useFrame: 0 };
   // One load to warm the server's caches, then LOADS measured ones; the last page is used after.
   let page: Page | undefined;
   let cdp: CDPSession | undefined;
@@ -269,6 +281,8 @@ async function measure(browser: Browser, state: Awaited<ReturnType<typeof signed
     if (profiled) await cdp.send("Profiler.enable").then(() => cdp!.send("Profiler.start"));
     // Every measured load is traced for its tasks' CPU time (the profiled one more fully).
     if (i > 0) await browser.startTracing(page, { categories: profiled ? ["devtools.timeline", "disabled-by-default-devtools.timeline", "blink.user_timing", "loading", "netlog"] : ["disabled-by-default-devtools.timeline"] });
+    const cores0 = readCoreUse();
+    const wall0 = performance.now();
     await page.goto(url);
     await page.waitForFunction(() => (window as unknown as { __bench: { firstResult: number | null } }).__bench.firstResult !== null, null, { timeout: 120_000 }).catch(async (error) => {
       const shot = join(ROOT, ".data", "bench-browser-timeout.png");
@@ -276,9 +290,15 @@ async function measure(browser: Browser, state: Awaited<ReturnType<typeof signed
       console.error(`no results on ${page!.url()} (screenshot ${shot}):`, await firstFigures(page!).catch(() => "page gone"));
       throw error;
     });
+    const cores1 = readCoreUse();
+    const wall1 = performance.now();
     // Let the page finish what it does after the first results (background cases, idle work).
     await sleep(3000);
     if (i === 0) continue;
+    if (cores0 && cores1) {
+      f.loadCores.push(coreUseBetween(cores0, cores1));
+      f.loadWall.push(wall1 - wall0);
+    }
     const first = await firstFigures(page);
     f.firstRows.push(first.firstRow!);
     f.gridRows.push(first.firstGridRow!);
@@ -311,7 +331,12 @@ async function measure(browser: Browser, state: Awaited<ReturnType<typeof signed
     await page.reload();
     await page.waitForFunction(() => (window as unknown as { __bench: { firstResult: number | null } }).__bench.firstResult !== null, null, { timeout: 120_000 });
     await sleep(3000);
-    f.warmRows.push((await firstFigures(page)).firstRow!);
+    const warm = await firstFigures(page);
+    f.warmRows.push(warm.firstRow!);
+    f.warmGridRows.push(warm.firstGridRow!);
+    const r = await readSince(page, 0);
+    f.warmLongest = Math.max(f.warmLongest, r.longest);
+    f.warmFrame = Math.max(f.warmFrame, r.longestFrame);
   }
   const since = await now(page);
 
@@ -417,6 +442,8 @@ function print(runs: { rate: number; f: Figures; floors: { grid: Floor; dom: Flo
     ["  the grid's own rows (the sheet in use)", (f) => mm(f.gridRows), ""],
     ["first results (Q) on screen", (f) => mm(f.firstResults), ""],
     ["first rows, returning visit (cached scripts)", (f) => mm(f.warmRows), ""],
+    ["  its grid's own rows", (f) => mm(f.warmGridRows), ""],
+    ["  its longest task / frame while loading", (f) => `${ms(f.warmLongest)} / ${ms(f.warmFrame)}`, `≤ ${GOALS.longTaskMs} ms`],
     ["longest task / frame while loading", (f) => `${ms(f.loadLongest)} / ${ms(f.loadFrame)}`, `≤ ${GOALS.longTaskMs} ms`],
     ["  its CPU time / most CPU in one loading task", (f) => `${ms(f.loadLongestCpu)} / ${ms(f.loadMostCpu)}`, "(the rest: waiting for a core)"],
     ["edit → row and zone totals on screen", (f) => mm(f.edits), `≤ ${GOALS.editMs} ms`],
@@ -433,6 +460,15 @@ function print(runs: { rate: number; f: Figures; floors: { grid: Floor; dom: Flo
   console.log("");
   row(["5,000 rows", ...runs.map((r) => (r.rate === 1 ? "unthrottled" : `CPU ${r.rate}× slower`)), "goal (unthrottled)"]);
   lines.forEach((l, j) => row([l[0], ...cols.map((c) => c[j]!), l[2]]));
+  for (const r of runs) {
+    if (!r.f.loadCores.length) {
+      console.log(`\nCPU while loading (${r.rate}×): not read (no /proc on this machine)`);
+      continue;
+    }
+    const wall = median(r.f.loadWall);
+    const parts = CORE_GROUPS.map((g) => `${g} ${ms(median(r.f.loadCores.map((c) => c[g])))}`);
+    console.log(`\nCPU from navigation to first results (${r.rate === 1 ? "unthrottled" : `CPU ${r.rate}× slower`}; medians of ${r.f.loadCores.length} loads, ${ms(wall)} each, ${cpus().length} cores = ${ms(wall * cpus().length)} of CPU time):\n  ${parts.join("; ")}`);
+  }
   console.log("\nthe floor: the same 5,000 rows and columns with no app code (bench/lib/grid-floor-page.ts), loaded and scrolled the same way");
   const floorLines: [string, (f: Floor) => string][] = [
     ["first rows on screen", (f) => mm(f.firstRows)],

@@ -1,0 +1,47 @@
+// Where a machine's cores go while the page loads, read from Linux's /proc (each thread's user and
+// system time, in clock ticks of 10 ms): the page's main thread, the browser's other threads
+// (compositing, rasterising, compiling, the network), the app's server, the database, and the rest
+// (the kernel, the benchmark itself). A long task's wall time on shared cores includes waiting for
+// one; this says who had them. Elsewhere than Linux it reads nothing and the bench says so.
+import { existsSync, readdirSync, readFileSync } from "node:fs";
+
+export const CORE_GROUPS = ["the page's main thread", "the browser's other threads", "the app's server", "the database", "the rest"] as const;
+export type CoreUse = Record<(typeof CORE_GROUPS)[number], number>;
+
+const TICK_MS = 10;
+
+// A process's command line as one string: Chromium's and PostgreSQL's processes rewrite theirs into
+// one space-separated title, others keep NUL-separated arguments.
+export function groupOf(cmdline: string, pid: string, tid: string): (typeof CORE_GROUPS)[number] {
+  const exe = cmdline.split(" ")[0] ?? "";
+  // A renderer's main thread is its first (thread id = process id).
+  if (/chrom/.test(exe)) return /--type=renderer/.test(cmdline) && pid === tid ? "the page's main thread" : "the browser's other threads";
+  if (/next-server|\.bin\/next /.test(cmdline)) return "the app's server";
+  if (/postgres/.test(exe)) return "the database";
+  return "the rest";
+}
+
+/** CPU time (ms) of every thread on the machine so far, by group; null where /proc is not there. */
+export function readCoreUse(): CoreUse | null {
+  if (!existsSync("/proc/self/stat")) return null;
+  const use = Object.fromEntries(CORE_GROUPS.map((g) => [g, 0])) as CoreUse;
+  for (const pid of readdirSync("/proc").filter((d) => /^\d+$/.test(d))) {
+    try {
+      const cmdline = readFileSync(`/proc/${pid}/cmdline`, "utf8").replaceAll("\0", " ");
+      for (const tid of readdirSync(`/proc/${pid}/task`)) {
+        const stat = readFileSync(`/proc/${pid}/task/${tid}/stat`, "utf8");
+        // Fields after the command name (which may hold spaces); utime and stime are the 14th and 15th.
+        const fields = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+        use[groupOf(cmdline, pid, tid)] += (Number(fields[11]) + Number(fields[12])) * TICK_MS;
+      }
+    } catch {
+      // The process or thread ended while it was read.
+    }
+  }
+  return use;
+}
+
+/** What each group used between two readings. */
+export function coreUseBetween(before: CoreUse, after: CoreUse): CoreUse {
+  return Object.fromEntries(CORE_GROUPS.map((g) => [g, Math.max(0, after[g] - before[g])])) as CoreUse;
+}
