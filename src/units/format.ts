@@ -30,3 +30,8 @@ export function formatShown(v: number, d: number): string {
 export function formatQuantity(q: Quantity, si: number, system: UnitSystem, siDigits: number): string {
   return formatShown(toDisplay(q, si, system), decimals(q, siDigits, system));
 }
+
+/** A count of things (rows, surfaces) with thousands separators: 4000 → "4,000". */
+export function formatCount(n: number): string {
+  return formatter(0).format(n);
+}

@@ -93,7 +93,7 @@ test("a 2,150-row sheet is given every row, in order", async ({ page }) => {
     await page.goto(`/projects/${projectId}`);
     const first = page.locator('.ag-row:not(.ag-row-pinned)[row-index="0"] [col-id="label"]');
     await expect(first).toHaveText("Panel 1", { timeout: 60_000 });
-    await expect(page.getByText("Total of 2150 rows")).toBeVisible();
+    await expect(page.getByText("Total of 2,150 rows")).toBeVisible();
     await first.click();
     await page.keyboard.press("ControlOrMeta+ArrowDown");
     const last = page.locator('.ag-row:not(.ag-row-pinned)[row-index="2149"] [col-id="label"]');

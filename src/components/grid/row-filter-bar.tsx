@@ -1,6 +1,7 @@
 "use client";
 
 import type { RowFilter } from "./grid-context";
+import { formatCount } from "@/units/format";
 
 const OPTIONS: { value: RowFilter; label: string; hint: string }[] = [
   { value: "all", label: "All rows", hint: "Every row of the sheet" },
@@ -24,11 +25,11 @@ export function RowFilterBar({ value, onChange, counts, shown, total }: { value:
           onClick={() => onChange(o.value)}
           className="rounded-chip border border-line bg-surface px-2.5 py-1 text-small font-medium text-muted hover:bg-sunken aria-pressed:border-accent aria-pressed:bg-accent-soft aria-pressed:text-ink"
         >
-          {o.label} <span className="tabular-nums text-micro">{counts[o.value]}</span>
+          {o.label} <span className="tabular-nums text-micro">{formatCount(counts[o.value])}</span>
         </button>
       ))}
       <span className="text-micro text-muted" role="status">
-        {value === "all" || shown === null ? "" : `Showing ${shown} of ${total} rows`}
+        {value === "all" || shown === null ? "" : `Showing ${formatCount(shown)} of ${formatCount(total)} rows`}
       </span>
     </div>
   );

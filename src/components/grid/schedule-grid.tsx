@@ -26,6 +26,7 @@ import { afterNextPaint } from "@/components/schedule/use-after-paint";
 import { loadRowSchemas } from "./cell-edits";
 import { useSheetHabits, type HabitWrites } from "./use-sheet-habits";
 import "./schedule-grid.css";
+import { formatCount } from "@/units/format";
 
 // AG Grid itself (its code, the parts the sheet uses, the theme) is a chunk of its own, asked for
 // as soon as this module loads in the browser and evaluated when it arrives: its ≈ 1 MB of code is
@@ -120,7 +121,7 @@ export function ScheduleGrid(props: ScheduleGridProps) {
     [sheet, zones, buildups, project.default_method, system, visible],
   );
   const columnDefs = useMemo(() => (canEdit ? [selectColumn, ...dataColumns] : dataColumns), [canEdit, dataColumns]);
-  const pinned = useMemo(() => [{ id: TOTALS_ID, label: `Total of ${rows.length} ${rows.length === 1 ? "row" : "rows"}` } as unknown as Row], [rows.length]);
+  const pinned = useMemo(() => [{ id: TOTALS_ID, label: `Total of ${formatCount(rows.length)} ${rows.length === 1 ? "row" : "rows"}` } as unknown as Row], [rows.length]);
 
   // A sheet of up to ALL_COLUMNS_ROWS rows draws every column, so the browser's find-in-page
   // reaches every cell; a bigger one draws only the columns in view (and a few beside them), which

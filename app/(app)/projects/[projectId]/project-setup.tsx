@@ -6,6 +6,7 @@ import type { TSchedule } from "@/schemas/schedule";
 import { ImportPanel } from "@/components/grid/import-panel";
 import { Notices } from "@/components/schedule/notices";
 import { useProject, useSchedule } from "@/components/schedule/schedule-context";
+import { formatCount } from "@/units/format";
 
 /**
  * Whether the schedule page shows the setting-up steps instead of the grid: no design case yet
@@ -54,7 +55,7 @@ export function ProjectSetup() {
         <h2 className="text-lead font-semibold">Set up the project</h2>
         <p className="max-w-prose text-small text-muted">
           {rows > 0
-            ? `The schedule holds ${s.surfaces.length} surfaces and ${s.duct_runs.length} duct runs; they are computed once the project has a design case.`
+            ? `The schedule holds ${formatCount(s.surfaces.length)} surfaces and ${formatCount(s.duct_runs.length)} duct runs; they are computed once the project has a design case.`
             : "The schedule's rows name a zone and a build-up, and are computed for a design case: add these first, then the rows (in the grid or from a file)."}{" "}
           The site (altitude, terrain, wind law, default method) is under{" "}
           <Link href={`${base}/settings`} className="text-accent hover:underline">

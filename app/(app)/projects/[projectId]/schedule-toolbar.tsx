@@ -7,6 +7,7 @@ import { SHEET_TITLES } from "@/schedule/sheet-columns";
 import type { useSheetEditing } from "@/components/grid/use-sheet-editing";
 import { useProject } from "@/components/schedule/schedule-context";
 import { ExportMenu } from "./export-menu";
+import { formatCount } from "@/units/format";
 
 const button = "rounded-chip border border-line bg-surface px-3 py-1.5 text-small font-medium hover:bg-sunken disabled:opacity-50 disabled:hover:bg-surface";
 
@@ -41,7 +42,7 @@ export function ScheduleToolbar(props: {
               onClick={() => props.onSheet(s)}
               className="rounded-[0.3rem] px-3 py-1.5 text-small font-semibold text-muted aria-selected:bg-surface aria-selected:text-ink aria-selected:shadow-panel"
             >
-              {SHEET_TITLES[s]} <span className="font-normal text-muted">{props.counts[s]}</span>
+              {SHEET_TITLES[s]} <span className="font-normal text-muted">{formatCount(props.counts[s])}</span>
             </button>
           ))}
         </div>

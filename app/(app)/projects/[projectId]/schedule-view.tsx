@@ -21,6 +21,7 @@ import { usePreferences } from "@/components/schedule/use-preferences";
 import { ZoneTotalsPanel } from "@/components/schedule/zone-totals-panel";
 import { needsSetup, ProjectSetup } from "./project-setup";
 import { ScheduleToolbar } from "./schedule-toolbar";
+import { formatCount } from "@/units/format";
 
 /** The schedule: two sheets in the grid, recalculated in the browser for the chosen design case, with zone totals beside. */
 export function ScheduleView({ initialSheet = "surfaces", initialCase }: { initialSheet?: TSheet; initialCase?: string } = {}) {
@@ -133,7 +134,7 @@ export function ScheduleView({ initialSheet = "surfaces", initialCase }: { initi
             <ZoneTotalsPanel schedule={schedule} results={results} resultsOf={resultsOf} />
           ) : (
             <p role="status" className="rounded-panel border border-line bg-surface p-4 text-small text-muted">
-              Calculating {schedule.surfaces.length + schedule.duct_runs.length} rows for {dc.name}…
+              Calculating {formatCount(schedule.surfaces.length + schedule.duct_runs.length)} rows for {dc.name}…
             </p>
           )}
         </CollapsibleTotals>

@@ -9,6 +9,7 @@ import type { TBoardFilter } from "@/schemas/checking";
 import { IssueRevisionForm, RequestCheckForm } from "../_checking/check-forms";
 import { CheckList } from "./check-list";
 import { MuteForm } from "../_checking/mute-form";
+import { formatCount } from "@/units/format";
 
 type Filter = TBoardFilter;
 
@@ -93,13 +94,13 @@ export function CheckView({ board, filter, muted, canCheck, canRequest, userId, 
 
       <Panel
         title="Rows"
-        lead={`${rows.length} shown · filter: ${filterWords(filter)}`}
+        lead={`${formatCount(rows.length)} shown · filter: ${filterWords(filter)}`}
         actions={
           <nav aria-label="Filter rows" className="flex flex-wrap gap-1">
-            <FilterLink projectId={pid} filter={filter} to={{ sheet: filter.sheet, warnings: filter.warnings, changed: filter.changed }}>All ({counts.rows})</FilterLink>
+            <FilterLink projectId={pid} filter={filter} to={{ sheet: filter.sheet, warnings: filter.warnings, changed: filter.changed }}>All ({formatCount(counts.rows)})</FilterLink>
             {CHECK_STATES.map((s) => (
               <FilterLink key={s} projectId={pid} filter={filter} to={{ ...filter, state: s }}>
-                {STATE_LABELS[s]} ({counts[s]})
+                {STATE_LABELS[s]} ({formatCount(counts[s])})
               </FilterLink>
             ))}
             <span className="mx-1 w-px bg-line" aria-hidden />

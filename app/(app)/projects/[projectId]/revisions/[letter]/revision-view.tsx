@@ -9,6 +9,7 @@ import { RevisionReportLink } from "@/components/reports/report-build";
 import type { TReportBuild } from "@/schemas/reports";
 import type { TRevision } from "@/server/services/get-revision";
 import { DUCT_COLS, RevisionRows, SURFACE_COLS, num, type FrozenRow } from "./revision-rows";
+import { formatCount } from "@/units/format";
 
 function frozenResult(r: RowResult | undefined): Pick<FrozenRow, "result" | "checks"> {
   return { result: r?.result, checks: r ? { spread: r.spread, inside: r.inside } : undefined };
@@ -93,10 +94,10 @@ export function RevisionView({ revision, caseId, reportBuild }: { revision: TRev
         <p className="mt-2 text-micro text-muted">Distribution: duct runs crossing unconditioned or outdoor space. {exclusionsSentence()}</p>
       </Panel>
 
-      <Panel title="Surfaces" lead={`${s.surfaces.length} rows`}>
+      <Panel title="Surfaces" lead={`${formatCount(s.surfaces.length)} rows`}>
         <RevisionRows sheet="surfaces" rows={frozen("surfaces", s.surfaces)} cols={SURFACE_COLS} />
       </Panel>
-      <Panel title="Duct runs" lead={`${s.duct_runs.length} rows`}>
+      <Panel title="Duct runs" lead={`${formatCount(s.duct_runs.length)} rows`}>
         <RevisionRows sheet="duct_runs" rows={frozen("duct_runs", s.duct_runs)} cols={DUCT_COLS} />
       </Panel>
       <EngineeringCaution />
