@@ -33,5 +33,5 @@ export function formatQuantity(q: Quantity, si: number, system: UnitSystem, siDi
 
 /** A count of things (rows, surfaces) with thousands separators: 4000 → "4,000". */
 export function formatCount(n: number): string {
-  return formatter(0).format(n);
+  return formatShown(n, 0);
 }

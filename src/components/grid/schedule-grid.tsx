@@ -18,7 +18,7 @@ import type { TSchedule, TSheet } from "@/schemas/schedule";
 import type { UnitSystem } from "@/units/units";
 import type { Row } from "@/components/schedule/schedule-cache";
 import { sheetColumnDefs } from "./column-defs";
-import { SELECT_COLUMN, selectColumn } from "./select-column";
+import { selectColumn } from "./select-column";
 import { TOTALS_ID, passesRowFilter, type GridContext, type RowFilter } from "./grid-context";
 import { RangeStatus } from "./range-status";
 import { SheetPreview } from "./sheet-preview";
@@ -309,10 +309,7 @@ export function ScheduleGrid(props: ScheduleGridProps) {
     const text = e.clipboardData.getData("text/plain");
     if (!focused || focused.rowPinned || !text) return;
     e.preventDefault();
-    const shown: Row[] = [];
-    api.forEachNodeAfterFilterAndSort((n) => n.data && shown.push(n.data));
-    const columnIds = api.getAllDisplayedColumns().map((c) => c.getColId()).filter((id) => id !== SELECT_COLUMN);
-    props.onPaste(habits.pasteAt({ text, rows: shown, startRow: focused.rowIndex, columnIds, startColumn: focused.column.getColId() }));
+    props.onPaste(habits.pasteAt(text, { row: focused.rowIndex, column: focused.column.getColId() }));
   };
 
   return (

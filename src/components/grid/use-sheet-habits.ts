@@ -295,14 +295,18 @@ export function useSheetHabits(args: {
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [args.api, args.wrapper]);
 
-  /** A paste onto a range lands at its top-left; one copied cell fills the whole range. */
-  const pasteAt = (p: PasteRequest): PasteRequest => {
+  /**
+   * The paste of `text` at the focused cell, over the rows and columns shown (the selection column
+   * left out). A paste onto a range lands at its top-left; one copied cell fills the whole range.
+   */
+  const pasteAt = (text: string, focused: { row: number; column: string }): PasteRequest => {
+    const p: PasteRequest = { text, rows: displayedRows(), startRow: focused.row, columnIds: columnIds(), startColumn: focused.column };
     const b = currentBounds();
     if (!b || isSingle(b)) return p;
-    const ids = columnIds();
-    const one = !/[\t\n]/.test(p.text.replace(/\r?\n$/, ""));
-    const text = one ? Array.from({ length: rowCount(b) }, () => Array(colCount(b)).fill(p.text.replace(/\r?\n$/, "")).join("\t")).join("\n") : p.text;
-    return { ...p, text, startRow: b.top, startColumn: ids[b.left] ?? p.startColumn };
+    const cell = text.replace(/\r?\n$/, "");
+    const one = !/[\t\n]/.test(cell);
+    const filled = one ? Array.from({ length: rowCount(b) }, () => Array(colCount(b)).fill(cell).join("\t")).join("\n") : text;
+    return { ...p, text: filled, startRow: b.top, startColumn: p.columnIds[b.left] ?? p.startColumn };
   };
 
   const b = range ? boundsOf(range) : null;
