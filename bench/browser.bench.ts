@@ -44,6 +44,7 @@ import { bigProject } from "./lib/big-schedule";
 import { nodeComputation } from "./lib/node-computation";
 import { FLOOR_ORIGIN, serveFloor } from "./lib/grid-floor";
 import { CORE_GROUPS, coreUseBetween, readCoreUse, type CoreUse } from "./lib/core-use";
+import { describeFrameCost, frameCost, type FrameCost } from "./lib/frame-cost";
 
 const PG_PORT = portFromEnv("BENCH_BROWSER_PG_PORT", 54389);
 const LOADS = Number(process.env.BENCH_LOADS ?? 3);
@@ -88,6 +89,8 @@ type Figures = {
   editCompute: number[];
   switches: number[];
   gaps: number[];
+  /** Main-thread CPU per frame of the fast scroll, by kind of work. */
+  scrollCost: FrameCost | null;
   /** Scrolling at 100 px (three rows) a frame, 6,000 px/s: a quick flick of a trackpad. */
   steadyGaps: number[];
   useLongest: number;
@@ -266,10 +269,26 @@ const firstFigures = (page: Page) =>
 const readSince = (page: Page, since: number) => page.evaluate((s) => (window as unknown as { __probes: { readSince: (s: number) => { measures: { name: string; duration: number }[]; longest: number; longestFrame: number; now: number } } }).__probes.readSince(s), since);
 const now = (page: Page) => page.evaluate(() => performance.now());
 /** Scrolls the grid `px` a frame for 150 frames; the gaps between frames (ms). */
-const scrollGaps = (page: Page, px: number) => page.evaluate((p) => (window as unknown as { __probes: { fastScroll: (a: object) => Promise<number[]> } }).__probes.fastScroll({ frames: 150, px: p }), px);
+const SCROLL_FRAMES = 150;
+const scrollGaps = (page: Page, px: number) => page.evaluate(([p, frames]) => (window as unknown as { __probes: { fastScroll: (a: object) => Promise<number[]> } }).__probes.fastScroll({ frames, px: p }), [px, SCROLL_FRAMES] as const);
+/**
+ * A fast scroll (600 px a frame) under a trace: its frame gaps, and where each frame's main-thread
+ * CPU went (lib/frame-cost.ts). With BENCH_PROFILE, `save` names the files the trace and a CPU
+ * profile are kept in.
+ */
+async function tracedFastScroll(browser: Browser, page: Page, cdp: CDPSession | null, save?: string): Promise<{ gaps: number[]; cost: FrameCost }> {
+  if (save) await cdp!.send("Profiler.start");
+  await browser.startTracing(page, { categories: ["devtools.timeline", "disabled-by-default-devtools.timeline"] });
+  const gaps = await scrollGaps(page, 600);
+  if (save) await saveProfile(cdp!, save);
+  const trace = await browser.stopTracing();
+  const read = readTrace(trace);
+  if (save) summariseTrace(trace, read, save);
+  return { gaps, cost: frameCost(read.events, read.onMain, SCROLL_FRAMES) };
+}
 
 async function measure(browser: Browser, state: Awaited<ReturnType<typeof signedInState>>, url: string, rate: number): Promise<Figures> {
-  const f: Figures = { firstRows: [], gridRows: [], firstResults: [], ttfb: [], htmlDone: [], domReady: [], htmlBytes: 0, warmRows: [], warmGridRows: [], warmLongest: 0, warmFrame: 0, loadCores: [], loadWall: [], loadLongest: 0, loadFrame: 0, loadLongestCpu: 0, loadMostCpu: 0, edits: [], editCompute: [], switches: [], gaps: [], steadyGaps: [], useLongest: 0, useFrame: 0 };
+  const f: Figures = { firstRows: [], gridRows: [], firstResults: [], ttfb: [], htmlDone: [], domReady: [], htmlBytes: 0, warmRows: [], warmGridRows: [], warmLongest: 0, warmFrame: 0, loadCores: [], loadWall: [], loadLongest: 0, loadFrame: 0, loadLongestCpu: 0, loadMostCpu: 0, edits: [], editCompute: [], switches: [], gaps: [], scrollCost: null, steadyGaps: [], useLongest: 0, useFrame: 0 };
   // One load to warm the server's caches, then LOADS measured ones; the last page is used after.
   let page: Page | undefined;
   let cdp: CDPSession | undefined;
@@ -379,16 +398,9 @@ async function measure(browser: Browser, state: Awaited<ReturnType<typeof signed
   }
 
   // Fast scrolling: 600 px (about 20 rows) a frame for 150 frames.
-  if (PROFILE) {
-    await cdp!.send("Profiler.start");
-    await browser.startTracing(page, { categories: ["devtools.timeline", "disabled-by-default-devtools.timeline"] });
-  }
-  f.gaps = await scrollGaps(page, 600);
-  if (PROFILE) {
-    await saveProfile(cdp!, `scroll-${rate}x`);
-    const trace = await browser.stopTracing();
-    summariseTrace(trace, readTrace(trace), `scroll-${rate}x`);
-  }
+  const scrolled = await tracedFastScroll(browser, page, cdp ?? null, PROFILE ? `scroll-${rate}x` : undefined);
+  f.gaps = scrolled.gaps;
+  f.scrollCost = scrolled.cost;
   f.steadyGaps = await scrollGaps(page, 100);
   const r = await readSince(page, since);
   f.useLongest = r.longest;
@@ -397,7 +409,7 @@ async function measure(browser: Browser, state: Awaited<ReturnType<typeof signed
   return f;
 }
 
-type Floor = { firstRows: number[]; loadLongest: number; gaps: number[]; steadyGaps: number[]; scrollLongest: number };
+type Floor = { firstRows: number[]; loadLongest: number; gaps: number[]; scrollCost: FrameCost | null; steadyGaps: number[]; scrollLongest: number };
 
 /**
  * A floor page (grid-floor-page.ts: AG Grid alone, or the hand-drawn list), loaded LOADS times in
@@ -405,7 +417,7 @@ type Floor = { firstRows: number[]; loadLongest: number; gaps: number[]; steadyG
  * frames while scrolling and the longest task then.
  */
 async function measureFloor(browser: Browser, mode: "grid" | "dom", rate: number): Promise<Floor> {
-  const f: Floor = { firstRows: [], loadLongest: 0, gaps: [], steadyGaps: [], scrollLongest: 0 };
+  const f: Floor = { firstRows: [], loadLongest: 0, gaps: [], scrollCost: null, steadyGaps: [], scrollLongest: 0 };
   for (let i = 0; i <= LOADS; i++) {
     const { page, close } = await openPage(browser, undefined, rate);
     await serveFloor(page.context());
@@ -418,7 +430,9 @@ async function measureFloor(browser: Browser, mode: "grid" | "dom", rate: number
     }
     if (i === LOADS) {
       const since = await now(page);
-      f.gaps = await scrollGaps(page, 600);
+      const scrolled = await tracedFastScroll(browser, page, null);
+      f.gaps = scrolled.gaps;
+      f.scrollCost = scrolled.cost;
       f.scrollLongest = (await readSince(page, since)).longest;
       f.steadyGaps = await scrollGaps(page, 100);
     }
@@ -450,6 +464,7 @@ function print(runs: { rate: number; f: Figures; floors: { grid: Floor; dom: Flo
     ["  computation of an edit (in the page)", (f) => mm(f.editCompute), `≤ ${GOALS.computeMs} ms`],
     ["switching design case", (f) => mm(f.switches), `≤ ${GOALS.switchMs} ms`],
     ["fast scrolling (600 px a frame)", (f) => fps(f.gaps), `${GOALS.fps} fps`],
+    ["  main-thread CPU a frame", (f) => describeFrameCost(f.scrollCost), "≤ 16.7 ms for 60 fps"],
     ["  steady scrolling (100 px a frame)", (f) => fps(f.steadyGaps), ""],
     ["longest task / frame editing, switching, scrolling", (f) => `${ms(f.useLongest)} / ${ms(f.useFrame)}`, `≤ ${GOALS.longTaskMs} ms`],
   ];
@@ -474,12 +489,14 @@ function print(runs: { rate: number; f: Figures; floors: { grid: Floor; dom: Flo
     ["first rows on screen", (f) => mm(f.firstRows)],
     ["longest task while loading", (f) => ms(f.loadLongest)],
     ["fast scrolling (600 px a frame)", (f) => fps(f.gaps)],
+    ["  main-thread CPU a frame", (f) => describeFrameCost(f.scrollCost)],
     ["steady scrolling (100 px a frame)", (f) => fps(f.steadyGaps)],
     ["longest task while scrolling", (f) => ms(f.scrollLongest)],
   ];
   for (const r of runs) {
     console.log(`  ${r.rate === 1 ? "unthrottled" : `CPU ${r.rate}× slower`}:`);
-    for (const [name, get] of floorLines) console.log(`    ${name.padEnd(34)} AG Grid alone: ${get(r.floors.grid).padEnd(44)} hand-drawn list: ${get(r.floors.dom)}`);
+    const gridWidth = Math.max(...floorLines.map(([, get]) => get(r.floors.grid).length));
+    for (const [name, get] of floorLines) console.log(`    ${name.padEnd(34)} AG Grid alone: ${get(r.floors.grid).padEnd(gridWidth)}  hand-drawn list: ${get(r.floors.dom)}`);
   }
   console.log(`\nin Node (same engine, one core): full recalculation of one case ${node.fullMs.toFixed(0)} ms; one changed row and its zone ${node.rowMs.toFixed(2)} ms`);
   console.log(`machine: ${cpus().length} cores; load average ${runs.map((r) => `${r.load[0]!.toFixed(1)}→${r.load[1]!.toFixed(1)} (${r.rate}×)`).join(", ")} — shared: other work inflates every figure`);
