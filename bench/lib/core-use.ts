@@ -21,10 +21,13 @@ export function groupOf(cmdline: string, pid: string, tid: string): (typeof CORE
   return "the rest";
 }
 
-/** CPU time (ms) of every thread on the machine so far, by group; null where /proc is not there. */
-export function readCoreUse(): CoreUse | null {
+/** Each thread's CPU time (ms) so far and its group, by "pid/tid". */
+export type ThreadTimes = Map<string, { group: (typeof CORE_GROUPS)[number]; ms: number }>;
+
+/** CPU time (ms) of every thread on the machine so far; null where /proc is not there. */
+export function readCoreUse(): ThreadTimes | null {
   if (!existsSync("/proc/self/stat")) return null;
-  const use = Object.fromEntries(CORE_GROUPS.map((g) => [g, 0])) as CoreUse;
+  const threads: ThreadTimes = new Map();
   for (const pid of readdirSync("/proc").filter((d) => /^\d+$/.test(d))) {
     try {
       const cmdline = readFileSync(`/proc/${pid}/cmdline`, "utf8").replaceAll("\0", " ");
@@ -32,16 +35,22 @@ export function readCoreUse(): CoreUse | null {
         const stat = readFileSync(`/proc/${pid}/task/${tid}/stat`, "utf8");
         // Fields after the command name (which may hold spaces); utime and stime are the 14th and 15th.
         const fields = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
-        use[groupOf(cmdline, pid, tid)] += (Number(fields[11]) + Number(fields[12])) * TICK_MS;
+        threads.set(`${pid}/${tid}`, { group: groupOf(cmdline, pid, tid), ms: (Number(fields[11]) + Number(fields[12])) * TICK_MS });
       }
     } catch {
       // The process or thread ended while it was read.
     }
   }
-  return use;
+  return threads;
 }
 
-/** What each group used between two readings. */
-export function coreUseBetween(before: CoreUse, after: CoreUse): CoreUse {
-  return Object.fromEntries(CORE_GROUPS.map((g) => [g, Math.max(0, after[g] - before[g])])) as CoreUse;
+/**
+ * What each group used between two readings, thread by thread: a thread that started in between
+ * counts whole, one that ended in between counts nothing (its time went with it), and no thread's
+ * end takes time away from the others of its group.
+ */
+export function coreUseBetween(before: ThreadTimes, after: ThreadTimes): CoreUse {
+  const use = Object.fromEntries(CORE_GROUPS.map((g) => [g, 0])) as CoreUse;
+  for (const [id, t] of after) use[t.group] += Math.max(0, t.ms - (before.get(id)?.ms ?? 0));
+  return use;
 }
