@@ -21,6 +21,13 @@ export function groupOf(cmdline: string, pid: string, tid: string): (typeof CORE
   return "the rest";
 }
 
+/** A thread's CPU time so far (ms) from the text of its /proc stat file: user and system time. */
+export function cpuMsOfStat(stat: string): number {
+  // Fields after the command name (which may hold spaces); utime and stime are the 14th and 15th.
+  const fields = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
+  return (Number(fields[11]) + Number(fields[12])) * TICK_MS;
+}
+
 /** Each thread's CPU time (ms) so far and its group, by "pid/tid". */
 export type ThreadTimes = Map<string, { group: (typeof CORE_GROUPS)[number]; ms: number }>;
 
@@ -32,10 +39,7 @@ export function readCoreUse(): ThreadTimes | null {
     try {
       const cmdline = readFileSync(`/proc/${pid}/cmdline`, "utf8").replaceAll("\0", " ");
       for (const tid of readdirSync(`/proc/${pid}/task`)) {
-        const stat = readFileSync(`/proc/${pid}/task/${tid}/stat`, "utf8");
-        // Fields after the command name (which may hold spaces); utime and stime are the 14th and 15th.
-        const fields = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
-        threads.set(`${pid}/${tid}`, { group: groupOf(cmdline, pid, tid), ms: (Number(fields[11]) + Number(fields[12])) * TICK_MS });
+        threads.set(`${pid}/${tid}`, { group: groupOf(cmdline, pid, tid), ms: cpuMsOfStat(readFileSync(`/proc/${pid}/task/${tid}/stat`, "utf8")) });
       }
     } catch {
       // The process or thread ended while it was read.

@@ -2,7 +2,7 @@
 // thread's CPU time from Linux's /proc, grouped by the process it belongs to.
 import { existsSync, readFileSync } from "node:fs";
 import { expect, test } from "vitest";
-import { coreUseBetween, groupOf, readCoreUse } from "../../bench/lib/core-use";
+import { coreUseBetween, cpuMsOfStat, groupOf, readCoreUse } from "../../bench/lib/core-use";
 
 test("threads are grouped by their process: a renderer's first thread is the page's main thread", () => {
   const renderer = "/usr/lib/chromium/chromium --type=renderer --crashpad-handler-pid=0 --lang=en-US";
@@ -31,12 +31,8 @@ test("a thread that ended between two readings takes nothing away; one that star
   expect(coreUseBetween(before, after)).toEqual({ "the page's main thread": 120, "the browser's other threads": 0, "the app's server": 0, "the database": 0, "the rest": 70 });
 });
 
-// This thread's own CPU time from /proc (utime + stime, in 10 ms ticks).
-const ownTicksMs = () => {
-  const stat = readFileSync("/proc/thread-self/stat", "utf8");
-  const f = stat.slice(stat.lastIndexOf(")") + 2).split(" ");
-  return (Number(f[11]) + Number(f[12])) * 10;
-};
+// This thread's own CPU time as /proc counts it (10 ms ticks).
+const ownTicksMs = () => cpuMsOfStat(readFileSync("/proc/thread-self/stat", "utf8"));
 
 test.runIf(existsSync("/proc/thread-self/stat"))("a busy loop in this thread shows as CPU time of the rest, and no group shrinks", () => {
   const before = readCoreUse()!;
